@@ -1,0 +1,47 @@
+/** `umbracast list`: the catalogue for a range, as a table, json or csv. */
+import type { Command } from 'commander';
+import { findLunarEclipses } from '../../eclipse/catalogue.ts';
+import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
+import { ECLIPSE_KINDS } from '../../eclipse/types.ts';
+import { fixedDeltaTModel, standardDeltaTModel } from '../../ephemeris/deltaT.ts';
+import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
+import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
+import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
+import type { CommandContext } from '../context.ts';
+
+interface ListOptions {
+  from?: string;
+  to?: string;
+  kind?: string;
+  convention: string;
+  deltaT?: string;
+  format: string;
+}
+
+/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
+export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
+
+export function registerList(program: Command, context: CommandContext): void {
+  program
+    .command('list')
+    .description('list the lunar eclipses in a date range (default: from today, ten years)')
+    .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
+    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
+    .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table')
+    .action((options: ListOptions) => {
+      const range = parseRange(options.from, options.to, context.now());
+      const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
+      const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
+      const format = parseChoice('--format', options.format, CATALOGUE_FORMATS);
+      const deltaT = options.deltaT === undefined
+        ? standardDeltaTModel()
+        : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
+      const eclipses = findLunarEclipses({ ...range, convention, deltaT }).filter((e) => kinds.includes(e.kind));
+      const doc = catalogueDocument(eclipses, { convention, deltaTModel: deltaT.name, ...range });
+      const render = { table: catalogueTable, json: catalogueJson, csv: catalogueCsv }[format];
+      context.stdout(render(doc));
+    });
+}

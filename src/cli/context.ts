@@ -1,0 +1,6 @@
+/** What a command may touch of the outside world; tests pass their own. */
+export interface CommandContext {
+  stdout(text: string): void;
+  stderr(text: string): void;
+  now(): Date;
+}

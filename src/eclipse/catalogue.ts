@@ -1,0 +1,162 @@
+/**
+ * The catalogue: every lunar eclipse in a UT range, with its geometry.
+ *
+ * For each lunation: Meeus's mean elements say whether an eclipse is possible;
+ * astronomy-engine finds the full moon; one sampled shadow track (nine
+ * ephemeris calls) then gives greatest eclipse, magnitudes and every contact.
+ */
+import { SearchMoonPhase } from 'astronomy-engine';
+import { InputError } from '../errors.ts';
+import { ephemerisTime } from '../ephemeris/bodies.ts';
+import { standardDeltaTModel, type DeltaTModel } from '../ephemeris/deltaT.ts';
+import { subBodyPoint, type LonLat } from '../ephemeris/earth.ts';
+import {
+  decimalYearFromDays,
+  isoSeconds,
+  momentFromTT,
+  utDaysFromDate,
+  wholeSecondsBetween,
+  type Moment,
+} from '../ephemeris/time.ts';
+import { CONTACT_LIMITS, CONTACT_ORDER, findCrossingTT, findGreatestTT, type ContactName } from './contacts.ts';
+import { shadowConvention, type ShadowConvention, type ShadowConventionName } from './conventions.ts';
+import { lunationIndexNear, mayHoldLunarEclipse, meanFullMoonTTDays } from './lunations.ts';
+import { sarosAt } from './saros.ts';
+import { sampleShadowTrack, type ShadowTrack } from './track.ts';
+import type { EclipseKind, LunarEclipse, PhaseDurations } from './types.ts';
+
+/** First and last supported instants (UT): years 1000 through 3000. */
+export const SUPPORTED_RANGE = {
+  from: new Date(Date.UTC(1000, 0, 1)),
+  to: new Date(Date.UTC(3001, 0, 1)),
+  description: 'years 1000 to 3000',
+} as const;
+
+export interface CatalogueOptions {
+  /** Start of the range, inclusive (UT). */
+  readonly from: Date;
+  /** End of the range, exclusive (UT). */
+  readonly to: Date;
+  /** Shadow convention; default Danjon. */
+  readonly convention?: ShadowConventionName;
+  /** ΔT model; default the standard observed + forecast + long-term model. */
+  readonly deltaT?: DeltaTModel;
+}
+
+const HOUR_DAYS = 1 / 24;
+/** First window around the full moon; wide enough for the longest penumbral phase (≈ 6 h 20 min). */
+const WINDOW_HALF_DAYS = 5 * HOUR_DAYS;
+
+export function checkRange(from: Date, to: Date): void {
+  const describe = (d: Date) => (Number.isFinite(d.getTime()) ? d.toISOString() : 'an invalid date');
+  if (!Number.isFinite(from.getTime()) || from < SUPPORTED_RANGE.from || from >= SUPPORTED_RANGE.to) {
+    throw new InputError('from', `an instant within ${SUPPORTED_RANGE.description}`, describe(from));
+  }
+  if (!Number.isFinite(to.getTime()) || to <= SUPPORTED_RANGE.from || to > SUPPORTED_RANGE.to) {
+    throw new InputError('to', `an instant within ${SUPPORTED_RANGE.description}`, describe(to));
+  }
+  if (to <= from) {
+    throw new InputError('to', `a time after from (${from.toISOString()})`, describe(to));
+  }
+}
+
+/** Every lunar eclipse whose greatest (UT) falls in [from, to), in time order. */
+export function findLunarEclipses(options: CatalogueOptions): LunarEclipse[] {
+  checkRange(options.from, options.to);
+  const convention = shadowConvention(options.convention ?? 'danjon');
+  const deltaTModel = options.deltaT ?? standardDeltaTModel();
+  const fromUT = utDaysFromDate(options.from);
+  const toUT = utDaysFromDate(options.to);
+  // TT runs ahead of UT by ΔT (under an hour here); a day of margin covers it.
+  const firstK = lunationIndexNear(fromUT - 1) - 1;
+  const lastK = lunationIndexNear(toUT + 1) + 1;
+  const eclipses: LunarEclipse[] = [];
+  for (let k = firstK; k <= lastK; k++) {
+    if (!mayHoldLunarEclipse(k)) continue;
+    const eclipse = eclipseAtLunation(k, convention, deltaTModel);
+    if (!eclipse) continue;
+    if (eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);
+  }
+  return eclipses;
+}
+
+/** The eclipse at full moon k + 0.5 (Meeus numbering), if there is one. */
+export function eclipseAtLunation(k: number, convention: ShadowConvention, deltaTModel: DeltaTModel): LunarEclipse | undefined {
+  const meanTT = meanFullMoonTTDays(k);
+  const fullMoon = SearchMoonPhase(180, ephemerisTime(meanTT - 2), 4);
+  if (!fullMoon) throw new Error(`no full moon found within 2 days of mean lunation ${k + 0.5}`);
+  let track = sampleShadowTrack(fullMoon.tt - WINDOW_HALF_DAYS, fullMoon.tt + WINDOW_HALF_DAYS);
+  let greatestTT = findGreatestTT(track);
+  const limit = CONTACT_LIMITS.P1;
+  if (limit(track.at(greatestTT), convention) >= 0) return undefined;
+  if (limit(track.at(track.startTTDays), convention) <= 0 || limit(track.at(track.endTTDays), convention) <= 0) {
+    // The penumbral phase reaches an edge of the window: centre a new one on greatest.
+    track = sampleShadowTrack(greatestTT - WINDOW_HALF_DAYS, greatestTT + WINDOW_HALF_DAYS);
+    greatestTT = findGreatestTT(track);
+  }
+  return describeEclipse(track, greatestTT, convention, deltaTModel);
+}
+
+function describeEclipse(track: ShadowTrack, greatestTT: number, convention: ShadowConvention, deltaTModel: DeltaTModel): LunarEclipse {
+  const state = track.at(greatestTT);
+  const radii = convention.radii(state);
+  const twiceMoonSD = 2 * state.moonSemiDiameterRad;
+  const umbralMagnitude = (radii.umbraRad + state.moonSemiDiameterRad - state.separationRad) / twiceMoonSD;
+  const penumbralMagnitude = (radii.penumbraRad + state.moonSemiDiameterRad - state.separationRad) / twiceMoonSD;
+  const kind: EclipseKind = umbralMagnitude >= 1 ? 'total' : umbralMagnitude > 0 ? 'partial' : 'penumbral';
+
+  const deltaT = deltaTModel.at(decimalYearFromDays(greatestTT));
+  const moment = (tt: number): Moment => momentFromTT(tt, deltaT.seconds);
+  const greatest = moment(greatestTT);
+
+  const contactTT: Partial<Record<ContactName, number>> = {};
+  for (const name of CONTACT_ORDER) {
+    if ((name === 'U1' || name === 'U4') && kind === 'penumbral') continue;
+    if ((name === 'U2' || name === 'U3') && kind !== 'total') continue;
+    const before = name === 'P1' || name === 'U1' || name === 'U2';
+    const [from, to] = before ? [track.startTTDays, greatestTT] : [greatestTT, track.endTTDays];
+    const tt = findCrossingTT(track, convention, CONTACT_LIMITS[name], from, to);
+    if (tt === undefined) throw new Error(`contact ${name} of the eclipse near ${isoSeconds(greatest.utDays)} lies outside its window`);
+    contactTT[name] = tt;
+  }
+
+  const contacts: Partial<Record<ContactName, Moment>> = {};
+  const subLunar: { greatest: LonLat } & Partial<Record<ContactName, LonLat>> = {
+    greatest: subBodyPoint(state.moonPositionKm, greatest),
+  };
+  for (const name of CONTACT_ORDER) {
+    const tt = contactTT[name];
+    if (tt === undefined) continue;
+    contacts[name] = moment(tt);
+    subLunar[name] = subBodyPoint(track.at(tt).moonPositionKm, contacts[name]);
+  }
+
+  const span = (a: ContactName, b: ContactName): number | undefined => {
+    const start = contacts[a];
+    const end = contacts[b];
+    return start && end ? wholeSecondsBetween(start.utDays, end.utDays) : undefined;
+  };
+  const partialSeconds = span('U1', 'U4');
+  const totalSeconds = span('U2', 'U3');
+  const durations: PhaseDurations = {
+    penumbralSeconds: span('P1', 'P4')!,
+    ...(partialSeconds !== undefined ? { partialSeconds } : {}),
+    ...(totalSeconds !== undefined ? { totalSeconds } : {}),
+  };
+
+  return {
+    id: isoSeconds(greatest.utDays).slice(0, 10),
+    kind,
+    convention: convention.name,
+    greatest,
+    deltaT,
+    gamma: (state.northSign * state.separationRad) / state.moonParallaxRad,
+    umbralMagnitude,
+    penumbralMagnitude,
+    saros: sarosAt(greatestTT),
+    contacts,
+    durations,
+    subLunar,
+  };
+}
+

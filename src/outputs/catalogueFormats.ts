@@ -1,0 +1,73 @@
+/** The catalogue as json, csv (both keep seconds) and a table for people (minutes, UTC labelled). */
+import { stringify } from 'csv-stringify/sync';
+import { CONTACT_ORDER } from '../eclipse/contacts.ts';
+import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
+
+export type CatalogueFormat = 'table' | 'json' | 'csv';
+export const CATALOGUE_FORMATS: readonly CatalogueFormat[] = ['table', 'json', 'csv'];
+
+export function catalogueJson(doc: CatalogueDocument): string {
+  return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+const CSV_COLUMNS = [
+  'id', 'kind', 'greatest', 'greatestTT', 'deltaT', 'deltaTSource', 'gamma', 'umbralMagnitude', 'penumbralMagnitude', 'saros',
+  ...CONTACT_ORDER,
+  'penumbralSeconds', 'partialSeconds', 'totalSeconds',
+  'subLunarLon', 'subLunarLat',
+] as const;
+
+export function catalogueCsv(doc: CatalogueDocument): string {
+  const rows = doc.eclipses.map((e) => [
+    e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, e.umbralMagnitude, e.penumbralMagnitude, e.saros,
+    ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
+    e.durations.penumbral, e.durations.partial ?? '', e.durations.total ?? '',
+    e.subLunar.greatest[0], e.subLunar.greatest[1],
+  ]);
+  return stringify(rows, { header: true, columns: [...CSV_COLUMNS] });
+}
+
+/** "3h 38m" from seconds, rounded to the minute. */
+export function hoursMinutes(seconds: number): string {
+  const minutes = Math.round(seconds / 60);
+  const h = Math.floor(minutes / 60);
+  const m = minutes % 60;
+  return h > 0 ? `${h}h ${String(m).padStart(2, '0')}m` : `${m}m`;
+}
+
+/** Minute of an ISO time: 2025-03-14T06:58:43Z → 06:59 (rounded, not truncated). */
+function minuteOf(iso: string): string {
+  const ms = Math.round(Date.parse(iso) / 60_000) * 60_000;
+  return new Date(ms).toISOString().slice(0, 16).replace('T', ' ');
+}
+
+export function catalogueTable(doc: CatalogueDocument): string {
+  const header = ['Date', 'Kind', 'Greatest (UTC)', 'Umbral mag.', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Saros'];
+  const rows = doc.eclipses.map((e: EclipseRecord) => [
+    e.id,
+    e.kind,
+    minuteOf(e.greatest),
+    e.umbralMagnitude.toFixed(3),
+    e.penumbralMagnitude.toFixed(3),
+    e.gamma.toFixed(4),
+    e.durations.partial !== undefined ? hoursMinutes(e.durations.partial) : '–',
+    e.durations.total !== undefined ? hoursMinutes(e.durations.total) : '–',
+    String(e.saros),
+  ]);
+  const numeric = [false, false, false, true, true, true, true, true, true];
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
+  const line = (cells: string[]) =>
+    cells.map((c, i) => (numeric[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
+  const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].join(', ');
+  const deltaTs = doc.eclipses.map((e) => e.deltaT);
+  const deltaTSpan = deltaTs.length === 0 ? '' : Math.min(...deltaTs) === Math.max(...deltaTs)
+    ? `${deltaTs[0]!.toFixed(1)} s`
+    : `${Math.min(...deltaTs).toFixed(1)}–${Math.max(...deltaTs).toFixed(1)} s`;
+  const title = `${doc.eclipses.length} lunar eclipses from ${doc.range.from.slice(0, 10)} up to (not including) ${doc.range.to.slice(0, 10)}`;
+  const notes = [
+    `Times UTC, rounded to the minute. Shadow: ${doc.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention.`,
+    doc.eclipses.length > 0 ? `ΔT ${deltaTSpan} (${sources}; model: ${doc.deltaTModel}).` : `ΔT model: ${doc.deltaTModel}.`,
+  ];
+  if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;
+  return [title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');
+}

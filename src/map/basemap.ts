@@ -1,0 +1,52 @@
+/**
+ * The world from world-atlas (Natural Earth, public domain), at a detail
+ * chosen from the output's scale: finer data only where a pixel can show it
+ * (TRADE.md §8: cost grows steeply with detail).
+ */
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import type { FeatureCollection, MultiLineString, Geometry } from 'geojson';
+import { feature, mesh } from 'topojson-client';
+import type { GeometryCollection, Topology } from 'topojson-specification';
+
+export type BasemapDetail = '110m' | '50m' | '10m';
+export type BorderStyle = 'countries' | 'land';
+export const BORDER_STYLES: readonly BorderStyle[] = ['countries', 'land'];
+
+export const BASEMAP_CREDIT = 'Basemap: Natural Earth via world-atlas (public domain)';
+
+export interface Basemap {
+  readonly detail: BasemapDetail;
+  readonly land: FeatureCollection<Geometry> | Geometry;
+  readonly borders: MultiLineString;
+  readonly countries: FeatureCollection<Geometry, { name: string }>;
+}
+
+const require = createRequire(import.meta.url);
+const cache = new Map<BasemapDetail, Basemap>();
+
+/** Natural Earth detail for a scale: 1:110m up to 10 px/°, 1:50m up to 40 px/°, then 1:10m. */
+export function detailForScale(pixelsPerDegree: number): BasemapDetail {
+  if (pixelsPerDegree <= 10) return '110m';
+  if (pixelsPerDegree <= 40) return '50m';
+  return '10m';
+}
+
+/** World data is immutable: parse each detail once per process. */
+export function loadBasemap(detail: BasemapDetail): Basemap {
+  let basemap = cache.get(detail);
+  if (!basemap) {
+    const topology = JSON.parse(readFileSync(require.resolve(`world-atlas/countries-${detail}.json`), 'utf8')) as Topology<{
+      countries: GeometryCollection<{ name: string }>;
+      land: GeometryCollection;
+    }>;
+    basemap = {
+      detail,
+      land: feature(topology, topology.objects.land),
+      borders: mesh(topology, topology.objects.countries, (a, b) => a !== b),
+      countries: feature(topology, topology.objects.countries) as FeatureCollection<Geometry, { name: string }>,
+    };
+    cache.set(detail, basemap);
+  }
+  return basemap;
+}

@@ -1,0 +1,370 @@
+/**
+ * A visibility map as one SVG document: a function of (eclipse, style, size)
+ * alone — same inputs, same bytes. Layers, bottom to top: zones (painted by
+ * caps: the end cap, the start cap, their overlap), land, borders,
+ * graticule, the field's lines, the Moon-up edges, the sub-lunar point,
+ * labels; then title, legend and small print around the map.
+ */
+import { geoCircle, geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
+import type { LineString, MultiLineString, Position } from 'geojson';
+import type { LunarEclipse } from '../eclipse/types.ts';
+import type { CivilClock } from '../ephemeris/civilTime.ts';
+import type { LonLat } from '../ephemeris/earth.ts';
+import { placeGrid, regionOutlines, sampleGrid, traceRegion, type PlaceGrid } from '../visibility/regions.ts';
+import { stage, visibilityEvaluator, type Stage, type Visibility, type ZoneName } from '../visibility/visibility.ts';
+import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BorderStyle } from './basemap.ts';
+import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
+import type { Theme } from './theme.ts';
+import { escapeXml, FONT_CREDIT, fitText, measureText, textOutline, wrapText, type TextStyle } from './typography.ts';
+
+export interface MapStyle {
+  readonly theme: Theme;
+  readonly view: View;
+  readonly borders: BorderStyle;
+  readonly clock: CivilClock;
+  /** Replaces the generated title. */
+  readonly title?: string;
+}
+
+export interface MapSize {
+  readonly widthPx: number;
+  readonly heightPx: number;
+}
+
+export interface SceneInput {
+  readonly eclipse: LunarEclipse;
+  readonly visibility: Visibility;
+  readonly style: MapStyle;
+  readonly size: MapSize;
+  /** "umbracast 0.1.0", for the small print. */
+  readonly generator: string;
+}
+
+export interface Scene {
+  readonly svg: string;
+  readonly title: string;
+  readonly subtitle: string;
+  readonly smallPrint: string;
+  /** Where the map sits on the page, and how lon/lat reach it: for tests and marks. */
+  readonly project: (place: LonLat) => [number, number] | null;
+}
+
+/** Grid for the field's lines: fine enough for smooth curves at any world size. */
+const FIELD_GRID_DEG = 1;
+let fieldGrid: PlaceGrid | undefined;
+function sharedFieldGrid(): PlaceGrid {
+  fieldGrid ??= placeGrid(FIELD_GRID_DEG);
+  return fieldGrid;
+}
+
+const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
+  total: 'Total lunar eclipse',
+  partial: 'Partial lunar eclipse',
+  penumbral: 'Penumbral lunar eclipse',
+};
+
+const fmt = (value: number, digits: number) => value.toFixed(digits).replace('-', '−');
+
+export function durationWords(seconds: number): string {
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
+}
+
+export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
+  const at = eclipse.greatest.utDays;
+  const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} · ${clock.date(at)}`;
+  const zone = clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(at).split(',')[0]!;
+  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)}`;
+  const c = eclipse.contacts;
+  const parts = [`Greatest ${clock.time(at)} ${zone}`];
+  if (eclipse.kind === 'penumbral') {
+    parts.push(`penumbral magnitude ${fmt(eclipse.penumbralMagnitude, 3)}`);
+    parts.push(`penumbral phase ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
+  } else {
+    parts.push(`umbral magnitude ${fmt(eclipse.umbralMagnitude, 3)}`);
+    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(eclipse.durations.totalSeconds!)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
+    parts.push(`in the umbra ${durationWords(eclipse.durations.partialSeconds!)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
+  }
+  const subtitle = parts.join(' · ');
+  const timesIn = clock.zone === 'UTC' ? 'Times in UTC' : `Times in ${clock.zone} (${clock.zoneLabel(at)})`;
+  const convention = eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet';
+  const smallPrint = [
+    `${timesIn}, 24-hour clock, rounded to the minute.`,
+    `Shadow: ${convention} convention; ΔT ${deltaTLabel}.`,
+    'P1/P4: the Moon enters/leaves the penumbra; U1/U4: the umbra; U2/U3: totality begins/ends.',
+    'Moon up: upper limb on a sea-level horizon with standard refraction.',
+    'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',
+    `${BASEMAP_CREDIT}. Type: ${FONT_CREDIT}. Made with ${generator}.`,
+  ].join(' ');
+  return { title, subtitle, smallPrint };
+}
+
+interface Layout {
+  readonly unit: number;
+  readonly margin: number;
+  readonly titleStyle: TextStyle;
+  readonly subtitleStyle: TextStyle;
+  readonly legendStyle: TextStyle;
+  readonly smallStyle: TextStyle;
+  readonly labelStyle: TextStyle;
+}
+
+function layoutFor({ widthPx, heightPx }: MapSize): Layout {
+  const unit = Math.sqrt(widthPx * heightPx) / 900;
+  return {
+    unit,
+    margin: 22 * unit,
+    titleStyle: { sizePx: 27 * unit, weight: 'semibold' },
+    subtitleStyle: { sizePx: 13.5 * unit, weight: 'regular' },
+    legendStyle: { sizePx: 11.5 * unit, weight: 'regular' },
+    smallStyle: { sizePx: 9 * unit, weight: 'regular' },
+    labelStyle: { sizePx: 10.5 * unit, weight: 'semibold' },
+  };
+}
+
+const n2 = (v: number) => (Math.round(v * 100) / 100).toString();
+
+/** One line of outlined text as an SVG path element. */
+function textElement(text: string, x: number, y: number, style: TextStyle, fill: string, anchor: 'start' | 'middle' | 'end' = 'start'): string {
+  const d = textOutline(text, x, y, style, anchor);
+  return d ? `<path d="${d}" fill="${fill}"/>` : '';
+}
+
+/** A map label: outlined text over a soft halo. */
+function labelElement(text: string, x: number, y: number, style: TextStyle, theme: Theme, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): string {
+  const d = textOutline(text, x, y, style, anchor);
+  return `<path d="${d}" fill="${theme.text}" stroke="${theme.halo}" stroke-opacity="${theme.haloOpacity}" stroke-width="${n2(3.2 * unit)}" stroke-linejoin="round" paint-order="stroke"/>`;
+}
+
+function capPolygon(s: Stage): GeoPermissibleObjects {
+  return geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)();
+}
+
+function capEdge(s: Stage): LineString {
+  const ring = (geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)().coordinates[0] ?? []) as Position[];
+  return { type: 'LineString', coordinates: ring };
+}
+
+/** Where a projected line crosses a horizontal line y = targetY, inside a frame. */
+function crossingsAtY(points: ([number, number] | null)[], targetY: number, frame: Frame): [number, number][] {
+  const found: [number, number][] = [];
+  for (let k = 1; k < points.length; k++) {
+    const a = points[k - 1];
+    const b = points[k];
+    if (!a || !b) continue;
+    if (Math.hypot(b[0] - a[0], b[1] - a[1]) > frame.width / 8) continue; // a jump across the map's edge
+    if ((a[1] - targetY) * (b[1] - targetY) > 0 || a[1] === b[1]) continue;
+    const f = (targetY - a[1]) / (b[1] - a[1]);
+    const x = a[0] + f * (b[0] - a[0]);
+    if (x > frame.x && x < frame.x + frame.width) found.push([x, targetY]);
+  }
+  return found;
+}
+
+function fieldStepMinutes(durationMinutes: number): number {
+  return [5, 10, 15, 20, 30, 60].find((step) => durationMinutes / step <= 6) ?? 60;
+}
+
+const PHASE_WORDS: Record<Visibility['fieldSpan']['phase'], string> = {
+  totality: 'totality',
+  umbral: 'the umbral phase',
+  penumbral: 'the penumbral phase',
+};
+
+export function composeScene(input: SceneInput): Scene {
+  const { eclipse, visibility, style, size } = input;
+  const { theme, clock } = style;
+  const layout = layoutFor(size);
+  const { unit, margin } = layout;
+  const W = size.widthPx;
+  const H = size.heightPx;
+
+  const deltaTLabel = `${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source})`;
+  const texts = sceneTexts(eclipse, clock, deltaTLabel, input.generator, style.title);
+
+  // Header.
+  const contentWidth = W - 2 * margin;
+  const titleText = fitText(texts.title, layout.titleStyle, contentWidth);
+  const subtitleLines = wrapText(texts.subtitle, layout.subtitleStyle, contentWidth);
+  const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
+  const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
+  const headerBottom = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + 14 * unit;
+
+  // Footer: legend rows, then small print.
+  const zoneSpan = visibility.zoneSpan;
+  const phaseName = eclipse.kind === 'penumbral' ? 'the penumbral eclipse' : 'the eclipse';
+  const legendItems: { key: string; label: string }[] = [
+    { key: 'sees-all', label: `Moon up for all of ${phaseName}` },
+    { key: 'sets-during', label: `Moon sets while ${phaseName === 'the eclipse' ? 'it' : 'it'} is on` },
+    { key: 'rises-during', label: 'Moon rises while it is on' },
+    { key: 'sees-none', label: 'Moon below the horizon' },
+    { key: 'edge-strong', label: `Moonrise/moonset line at ${zoneSpan.start} and ${zoneSpan.end}` },
+    { key: 'edge-light', label: 'at other stages' },
+    { key: 'field', label: `minutes of ${PHASE_WORDS[visibility.fieldSpan.phase]} with the Moon up` },
+    { key: 'marker', label: 'Moon overhead at greatest' },
+  ];
+  const swatch = 15 * unit;
+  const itemGap = 16 * unit;
+  const legendRowHeight = layout.legendStyle.sizePx * 1.7;
+  const legendRows: { key: string; label: string; x: number }[][] = [[]];
+  let cursor = 0;
+  for (const item of legendItems) {
+    const width = swatch + 6 * unit + measureText(item.label, layout.legendStyle);
+    if (cursor > 0 && cursor + width > contentWidth) {
+      legendRows.push([]);
+      cursor = 0;
+    }
+    legendRows[legendRows.length - 1]!.push({ ...item, x: margin + cursor });
+    cursor += width + itemGap;
+  }
+  const smallLines = wrapText(texts.smallPrint, layout.smallStyle, contentWidth);
+  const smallHeight = smallLines.length * layout.smallStyle.sizePx * 1.4;
+  const footerHeight = legendRows.length * legendRowHeight + 10 * unit + smallHeight;
+  const gap = 10 * unit;
+  const available: Frame = { x: margin, y: headerBottom, width: contentWidth, height: Math.max(10, H - margin - footerHeight - gap - headerBottom) };
+
+  // Projection and data. A map shorter than its frame pulls header and footer in around it.
+  const greatest = stage(visibility, 'greatest');
+  let fitted = fitView(style.view, available, greatest.cap.centre);
+  const [[, top], [, bottom]] = geoPath(fitted.projection).bounds(fitted.outline);
+  const slack = fitted.world ? Math.max(0, available.height - (bottom - top)) / 2 : 0;
+  const frame: Frame = { ...available, y: available.y + slack, height: available.height - 2 * slack };
+  if (slack > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
+  const shiftDown = slack;
+  const footerTop = frame.y + frame.height + gap;
+  const projection: GeoProjection = fitted.projection;
+  const path = geoPath(projection).digits(1);
+  const basemap = loadBasemap(detailForScale(pixelsPerDegree(fitted)));
+  const start = stage(visibility, zoneSpan.start);
+  const end = stage(visibility, zoneSpan.end);
+  const clipId = 'map-clip';
+  const endClipId = 'end-cap';
+  const outlineD = fitted.world ? path({ type: 'Sphere' }) ?? '' : `M${n2(frame.x)},${n2(frame.y)}h${n2(frame.width)}v${n2(frame.height)}h${n2(-frame.width)}Z`;
+
+  const out: string[] = [];
+  out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="map-title map-desc">`);
+  out.push(`<title id="map-title">${escapeXml(texts.title)}</title>`);
+  out.push(`<desc id="map-desc">${escapeXml(`${texts.subtitle}. ${texts.smallPrint}`)}</desc>`);
+  out.push(`<defs><clipPath id="${clipId}"><path d="${outlineD}"/></clipPath><clipPath id="${endClipId}"><path d="${path(capPolygon(end)) ?? ''}"/></clipPath></defs>`);
+  out.push(`<rect width="${W}" height="${H}" fill="${theme.paper}"/>`);
+
+  out.push(`<g clip-path="url(#${clipId})">`);
+  out.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
+  const startCapD = path(capPolygon(start)) ?? '';
+  out.push(`<path d="${path(capPolygon(end)) ?? ''}" fill="${theme.zones['rises-during']}"/>`);
+  out.push(`<path d="${startCapD}" fill="${theme.zones['sets-during']}"/>`);
+  out.push(`<path d="${startCapD}" fill="${theme.zones['sees-all']}" clip-path="url(#${endClipId})"/>`);
+  out.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
+  if (style.borders === 'countries') {
+    out.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
+  }
+  out.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="0.5"/>`);
+
+  // The continuous field: lines of equal minutes with the Moon up.
+  const evaluator = visibilityEvaluator(visibility);
+  const grid = sharedFieldGrid();
+  const field = sampleGrid(grid, evaluator.minutesUpAtNormal);
+  const step = fieldStepMinutes(visibility.fieldDurationMinutes);
+  const fieldLines: { minutes: number; lines: Position[][] }[] = [];
+  for (let minutes = step; minutes < visibility.fieldDurationMinutes - step / 4; minutes += step) {
+    const lines = regionOutlines(traceRegion(grid, field, minutes));
+    fieldLines.push({ minutes, lines });
+    const geometry: MultiLineString = { type: 'MultiLineString', coordinates: lines };
+    out.push(`<path d="${path(geometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
+  }
+
+  // Moon-up edges at each stage.
+  for (const s of visibility.stages) {
+    const strong = s.name === zoneSpan.start || s.name === zoneSpan.end;
+    const d = path(capEdge(s)) ?? '';
+    out.push(strong
+      ? `<path d="${d}" fill="none" stroke="${theme.edgeStrong}" stroke-width="${n2(1.7 * unit)}"/>`
+      : `<path d="${d}" fill="none" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`);
+  }
+  out.push('</g>');
+  out.push(`<path d="${outlineD}" fill="none" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
+
+  // Sub-lunar point at greatest: a ring, hollow so that the zone shows through.
+  const marker = projection([greatest.cap.centre[0], greatest.cap.centre[1]]);
+  const labels: string[] = [];
+  if (marker) {
+    const [mx, my] = marker;
+    out.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}" stroke-opacity="0.9"/>`);
+    out.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
+  }
+
+  // Labels on the Moon-up edges, each stage at its own height so that none collide.
+  const stages = visibility.stages;
+  stages.forEach((s, index) => {
+    const targetY = frame.y + frame.height * (0.16 + (0.5 * index) / Math.max(1, stages.length - 1));
+    const points = capEdge(s).coordinates.map((p) => projection([p[0]!, p[1]!]));
+    const name = s.name === 'greatest' ? 'Greatest' : s.name;
+    for (const [x, y] of crossingsAtY(points, targetY, frame)) {
+      labels.push(labelElement(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle, theme, unit));
+    }
+  });
+  const fieldLabelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'regular' };
+  // Field labels climb a ladder, one rung per level, so that close lines keep readable labels.
+  const rung = fieldLabelStyle.sizePx * 1.5;
+  fieldLines.forEach(({ minutes, lines }, index) => {
+    const targetY = frame.y + frame.height * 0.84 - index * rung;
+    const placed: number[] = [];
+    for (const line of lines) {
+      const points = line.map((p) => projection([p[0]!, p[1]!]));
+      for (const [x, y] of crossingsAtY(points, targetY, frame)) {
+        if (placed.some((px) => Math.abs(px - x) < 60 * unit)) continue;
+        placed.push(x);
+        labels.push(labelElement(`${minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle, theme, unit));
+      }
+    }
+  });
+  out.push(...labels);
+
+  // Header.
+  out.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));
+  subtitleLines.forEach((line, i) => {
+    out.push(textElement(line, margin, subtitleBaseline + shiftDown + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
+  });
+
+  // Legend.
+  legendRows.forEach((row, r) => {
+    const y = footerTop + r * legendRowHeight;
+    for (const item of row) {
+      out.push(legendSwatch(item.key as LegendKey, item.x, y, swatch, theme, unit));
+      out.push(textElement(item.label, item.x + swatch + 6 * unit, y + swatch * 0.8, layout.legendStyle, theme.text));
+    }
+  });
+  smallLines.forEach((line, i) => {
+    const y = footerTop + legendRows.length * legendRowHeight + 10 * unit + layout.smallStyle.sizePx * (1 + i * 1.4) - layout.smallStyle.sizePx * 0.4;
+    out.push(textElement(line, margin, y, layout.smallStyle, theme.textMuted));
+  });
+  out.push('</svg>');
+
+  return {
+    svg: out.join('\n'),
+    title: texts.title,
+    subtitle: texts.subtitle,
+    smallPrint: texts.smallPrint,
+    project: (place) => projection([place[0], place[1]]),
+  };
+}
+
+type LegendKey = ZoneName | 'edge-strong' | 'edge-light' | 'field' | 'marker';
+
+function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme: Theme, unit: number): string {
+  const midY = n2(y + size / 2);
+  switch (key) {
+    case 'edge-strong':
+      return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.edgeStrong}" stroke-width="${n2(1.7 * unit)}"/>`;
+    case 'edge-light':
+      return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`;
+    case 'field':
+      return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`;
+    case 'marker':
+      return `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}"/>`
+        + `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`;
+    default:
+      return `<rect x="${n2(x)}" y="${n2(y + size * 0.1)}" width="${n2(size)}" height="${n2(size * 0.8)}" rx="${n2(2 * unit)}" fill="${theme.zones[key]}" stroke="${theme.textMuted}" stroke-width="${n2(0.5 * unit)}"/>`;
+  }
+}

@@ -3,20 +3,18 @@
  * line and an exit code (2 usage, 1 failure). Commands only parse options and
  * call the library.
  */
-import { readFileSync } from 'node:fs';
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.ts';
 import type { CommandContext } from './context.ts';
 import { registerList } from './commands/list.ts';
+import { registerMap } from './commands/map.ts';
+import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
 export const EXIT_FAILURE = 1;
 export const EXIT_USAGE = 2;
 
-export function toolVersion(): string {
-  const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
-  return pkg.version;
-}
+export { toolVersion };
 
 function buildProgram(context: CommandContext): Command {
   const program = new Command('umbracast')
@@ -32,6 +30,7 @@ function buildProgram(context: CommandContext): Command {
       outputError: () => undefined,
     });
   registerList(program, context);
+  registerMap(program, context);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({ writeOut: (t) => context.stdout(t), writeErr: () => undefined, outputError: () => undefined });
   }

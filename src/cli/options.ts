@@ -94,3 +94,68 @@ export function parseNumber(option: string, text: string, limits: { min: number;
   }
   return value;
 }
+
+/** "next", an eclipse id (its UTC date of greatest) or any date in the eclipse's week. */
+export type When = { readonly kind: 'next' } | { readonly kind: 'date'; readonly date: Date; readonly text: string };
+
+export const WHEN_EXPECTED = "'next', an eclipse id such as 2026-03-03, or a date (YYYY-MM-DD) within 7 days of an eclipse";
+
+export function parseWhen(text: string | undefined): When {
+  if (text === undefined || text.trim().toLowerCase() === 'next') return { kind: 'next' };
+  const trimmed = text.trim();
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(trimmed)) throw new InputError('WHEN', WHEN_EXPECTED, text);
+  const day = parsePeriod('WHEN', trimmed);
+  // Noon of the given day: an eclipse on that UTC date is always the nearest.
+  return { kind: 'date', date: new Date(day.start.getTime() + 43_200_000), text: trimmed };
+}
+
+export interface PixelSize {
+  readonly widthPx: number;
+  readonly heightPx: number;
+}
+
+/** The largest image we render: 12 000 px a side and 64 megapixels (about 256 MB while drawing). */
+export const MAX_SIDE_PX = 12_000;
+export const MAX_PIXELS = 64_000_000;
+export const MIN_SIDE_PX = 320;
+const SIZE_EXPECTED = `WxH in pixels, each side ${MIN_SIDE_PX}–${MAX_SIDE_PX} and at most ${MAX_PIXELS / 1e6} megapixels in all`;
+
+export function checkPixelSize(option: string, size: PixelSize, received: string): PixelSize {
+  const { widthPx, heightPx } = size;
+  const sideOk = (v: number) => Number.isInteger(v) && v >= MIN_SIDE_PX && v <= MAX_SIDE_PX;
+  if (!sideOk(widthPx) || !sideOk(heightPx) || widthPx * heightPx > MAX_PIXELS) throw new InputError(option, SIZE_EXPECTED, received);
+  return size;
+}
+
+export function parseSize(text: string): PixelSize {
+  const match = /^\s*(\d{1,6})\s*[x×]\s*(\d{1,6})\s*$/i.exec(text);
+  if (!match) throw new InputError('--size', SIZE_EXPECTED, text);
+  return checkPixelSize('--size', { widthPx: Number(match[1]), heightPx: Number(match[2]) }, text);
+}
+
+function parseNumberList(option: string, text: string, count: number, expected: string): number[] {
+  const parts = text.split(',').map((p) => p.trim());
+  const numbers = parts.map((p) => (/^[+-]?(\d+(\.\d*)?|\.\d+)$/.test(p) ? Number(p) : Number.NaN));
+  if (parts.length !== count || numbers.some((n) => !Number.isFinite(n))) throw new InputError(option, expected, text);
+  return numbers;
+}
+
+const BBOX_EXPECTED = 'W,S,E,N in degrees: longitudes −180…180, latitudes −90…90, south below north';
+
+export function parseBoundingBox(text: string): [number, number, number, number] {
+  const [west, south, east, north] = parseNumberList('--bbox', text, 4, BBOX_EXPECTED) as [number, number, number, number];
+  const lonOk = (v: number) => v >= -180 && v <= 180;
+  const latOk = (v: number) => v >= -90 && v <= 90;
+  if (!lonOk(west) || !lonOk(east) || !latOk(south) || !latOk(north) || south >= north || west === east) {
+    throw new InputError('--bbox', BBOX_EXPECTED, text);
+  }
+  return [west, south, east, north];
+}
+
+/** LAT,LON (the order people write), returned as [lon, lat]. */
+export function parseLatLon(option: string, text: string): [number, number] {
+  const expected = 'LAT,LON in degrees, latitude −90…90, longitude −180…180 (east positive)';
+  const [lat, lon] = parseNumberList(option, text, 2, expected) as [number, number];
+  if (lat < -90 || lat > 90 || lon < -180 || lon > 180) throw new InputError(option, expected, text);
+  return [lon, lat];
+}

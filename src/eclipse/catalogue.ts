@@ -160,3 +160,21 @@ function describeEclipse(track: ShadowTrack, greatestTT: number, convention: Sha
   };
 }
 
+
+/** The eclipse whose greatest (UT) lies nearest an instant, if one lies within `withinDays`. */
+export function eclipseNear(at: Date, withinDays: number, options: Omit<CatalogueOptions, 'from' | 'to'> = {}): LunarEclipse | undefined {
+  const clamp = (ms: number) => new Date(Math.min(Math.max(ms, SUPPORTED_RANGE.from.getTime()), SUPPORTED_RANGE.to.getTime()));
+  const from = clamp(at.getTime() - withinDays * 86_400_000);
+  const to = clamp(at.getTime() + withinDays * 86_400_000);
+  if (to <= from) return undefined;
+  const target = utDaysFromDate(at);
+  const found = findLunarEclipses({ ...options, from, to });
+  return found.sort((a, b) => Math.abs(a.greatest.utDays - target) - Math.abs(b.greatest.utDays - target))[0];
+}
+
+/** The first eclipse whose greatest (UT) falls at or after an instant. */
+export function nextEclipse(after: Date, options: Omit<CatalogueOptions, 'from' | 'to'> = {}): LunarEclipse | undefined {
+  const to = new Date(Math.min(after.getTime() + 400 * 86_400_000, SUPPORTED_RANGE.to.getTime()));
+  if (to <= after) return undefined;
+  return findLunarEclipses({ ...options, from: after, to })[0];
+}

@@ -10,9 +10,10 @@ import type { LineString, MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
-import { placeGrid, regionOutlines, sampleGrid, traceRegion, type PlaceGrid } from '../visibility/regions.ts';
-import { stage, visibilityEvaluator, type Stage, type Visibility, type ZoneName } from '../visibility/visibility.ts';
-import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BorderStyle } from './basemap.ts';
+import { fieldLines } from '../visibility/fieldLines.ts';
+import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
+import { stage, type Stage, type Visibility, type ZoneName } from '../visibility/visibility.ts';
+import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, textOutline, wrapText, type TextStyle } from './typography.ts';
@@ -47,15 +48,10 @@ export interface Scene {
   readonly smallPrint: string;
   /** Where the map sits on the page, and how lon/lat reach it: for tests and marks. */
   readonly project: (place: LonLat) => [number, number] | null;
+  /** The world-atlas detail drawn. */
+  readonly basemapDetail: BasemapDetail;
 }
 
-/** Grid for the field's lines: fine enough for smooth curves at any world size. */
-const FIELD_GRID_DEG = 1;
-let fieldGrid: PlaceGrid | undefined;
-function sharedFieldGrid(): PlaceGrid {
-  fieldGrid ??= placeGrid(FIELD_GRID_DEG);
-  return fieldGrid;
-}
 
 const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
   total: 'Total lunar eclipse',
@@ -141,9 +137,22 @@ function capPolygon(s: Stage): GeoPermissibleObjects {
   return geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)();
 }
 
+/**
+ * Where two Moon-up caps overlap, as one spherical polygon: the arc of each
+ * circle inside the other, each in its own direction. Drawing it directly
+ * costs far less to rasterise than a clip path.
+ */
+export function capOverlap(a: Stage, b: Stage): GeoPermissibleObjects {
+  const inside = (s: Stage) => (p: Position) => angularDistanceDeg(s.cap.centre, p) < s.cap.radiusDeg;
+  // circleRing runs clockwise around its centre, as d3-geo wants a ring around what it encloses.
+  const ringOf = (s: Stage) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.1);
+  const ring = [...runWhere(ringOf(a), inside(b)), ...runWhere(ringOf(b), inside(a))];
+  if (ring.length < 3) return { type: 'Polygon', coordinates: [] };
+  return { type: 'Polygon', coordinates: [[...ring, ring[0]!]] };
+}
+
 function capEdge(s: Stage): LineString {
-  const ring = (geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)().coordinates[0] ?? []) as Position[];
-  return { type: 'LineString', coordinates: ring };
+  return { type: 'LineString', coordinates: circleRing(s.cap.centre, s.cap.radiusDeg, 0.5) };
 }
 
 /** Where a projected line crosses a horizontal line y = targetY, inside a frame. */
@@ -162,9 +171,6 @@ function crossingsAtY(points: ([number, number] | null)[], targetY: number, fram
   return found;
 }
 
-function fieldStepMinutes(durationMinutes: number): number {
-  return [5, 10, 15, 20, 30, 60].find((step) => durationMinutes / step <= 6) ?? 60;
-}
 
 const PHASE_WORDS: Record<Visibility['fieldSpan']['phase'], string> = {
   totality: 'totality',
@@ -238,60 +244,48 @@ export function composeScene(input: SceneInput): Scene {
   const basemap = loadBasemap(detailForScale(pixelsPerDegree(fitted)));
   const start = stage(visibility, zoneSpan.start);
   const end = stage(visibility, zoneSpan.end);
-  const clipId = 'map-clip';
-  const endClipId = 'end-cap';
   const outlineD = fitted.world ? path({ type: 'Sphere' }) ?? '' : `M${n2(frame.x)},${n2(frame.y)}h${n2(frame.width)}v${n2(frame.height)}h${n2(-frame.width)}Z`;
 
-  const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="map-title map-desc">`);
-  out.push(`<title id="map-title">${escapeXml(texts.title)}</title>`);
-  out.push(`<desc id="map-desc">${escapeXml(`${texts.subtitle}. ${texts.smallPrint}`)}</desc>`);
-  out.push(`<defs><clipPath id="${clipId}"><path d="${outlineD}"/></clipPath><clipPath id="${endClipId}"><path d="${path(capPolygon(end)) ?? ''}"/></clipPath></defs>`);
-  out.push(`<rect width="${W}" height="${H}" fill="${theme.paper}"/>`);
+  // What lies under the lines and letters, and those.
+  const base: string[] = [];
+  const overlay: string[] = [];
+  const open = `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="map-title map-desc">`;
+  const head = [`<title id="map-title">${escapeXml(texts.title)}</title>`, `<desc id="map-desc">${escapeXml(`${texts.subtitle}. ${texts.smallPrint}`)}</desc>`];
+  base.push(`<rect width="${W}" height="${H}" fill="${theme.paper}"/>`);
 
-  out.push(`<g clip-path="url(#${clipId})">`);
-  out.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
-  const startCapD = path(capPolygon(start)) ?? '';
-  out.push(`<path d="${path(capPolygon(end)) ?? ''}" fill="${theme.zones['rises-during']}"/>`);
-  out.push(`<path d="${startCapD}" fill="${theme.zones['sets-during']}"/>`);
-  out.push(`<path d="${startCapD}" fill="${theme.zones['sees-all']}" clip-path="url(#${endClipId})"/>`);
-  out.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
+  // d3-geo clips every layer to the view (the sphere's edge, or the region's frame): no SVG clip paths needed.
+  base.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
+  base.push(`<path d="${path(capPolygon(end)) ?? ''}" fill="${theme.zones['rises-during']}"/>`);
+  base.push(`<path d="${path(capPolygon(start)) ?? ''}" fill="${theme.zones['sets-during']}"/>`);
+  base.push(`<path d="${path(capOverlap(start, end)) ?? ''}" fill="${theme.zones['sees-all']}"/>`);
+  base.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
   if (style.borders === 'countries') {
-    out.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
+    base.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
   }
-  out.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="0.5"/>`);
+  base.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="0.5"/>`);
 
   // The continuous field: lines of equal minutes with the Moon up.
-  const evaluator = visibilityEvaluator(visibility);
-  const grid = sharedFieldGrid();
-  const field = sampleGrid(grid, evaluator.minutesUpAtNormal);
-  const step = fieldStepMinutes(visibility.fieldDurationMinutes);
-  const fieldLines: { minutes: number; lines: Position[][] }[] = [];
-  for (let minutes = step; minutes < visibility.fieldDurationMinutes - step / 4; minutes += step) {
-    const lines = regionOutlines(traceRegion(grid, field, minutes));
-    fieldLines.push({ minutes, lines });
-    const geometry: MultiLineString = { type: 'MultiLineString', coordinates: lines };
-    out.push(`<path d="${path(geometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
-  }
+  const lines = fieldLines(visibility);
+  const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: lines.map((l) => l.line) };
+  overlay.push(`<path d="${path(fieldGeometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
 
   // Moon-up edges at each stage.
   for (const s of visibility.stages) {
     const strong = s.name === zoneSpan.start || s.name === zoneSpan.end;
     const d = path(capEdge(s)) ?? '';
-    out.push(strong
+    overlay.push(strong
       ? `<path d="${d}" fill="none" stroke="${theme.edgeStrong}" stroke-width="${n2(1.7 * unit)}"/>`
       : `<path d="${d}" fill="none" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`);
   }
-  out.push('</g>');
-  out.push(`<path d="${outlineD}" fill="none" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
+  overlay.push(`<path d="${outlineD}" fill="none" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
 
   // Sub-lunar point at greatest: a ring, hollow so that the zone shows through.
   const marker = projection([greatest.cap.centre[0], greatest.cap.centre[1]]);
   const labels: string[] = [];
   if (marker) {
     const [mx, my] = marker;
-    out.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}" stroke-opacity="0.9"/>`);
-    out.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
+    overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}" stroke-opacity="0.9"/>`);
+    overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
   }
 
   // Labels on the Moon-up edges, each stage at its own height so that none collide.
@@ -307,46 +301,41 @@ export function composeScene(input: SceneInput): Scene {
   const fieldLabelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'regular' };
   // Field labels climb a ladder, one rung per level, so that close lines keep readable labels.
   const rung = fieldLabelStyle.sizePx * 1.5;
-  fieldLines.forEach(({ minutes, lines }, index) => {
-    const targetY = frame.y + frame.height * 0.84 - index * rung;
-    const placed: number[] = [];
-    for (const line of lines) {
-      const points = line.map((p) => projection([p[0]!, p[1]!]));
-      for (const [x, y] of crossingsAtY(points, targetY, frame)) {
-        if (placed.some((px) => Math.abs(px - x) < 60 * unit)) continue;
-        placed.push(x);
-        labels.push(labelElement(`${minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle, theme, unit));
-      }
+  const levels = [...new Set(lines.map((l) => l.minutes))];
+  for (const l of lines) {
+    const targetY = frame.y + frame.height * 0.84 - levels.indexOf(l.minutes) * rung;
+    const points = l.line.map((p) => projection([p[0]!, p[1]!]));
+    for (const [x, y] of crossingsAtY(points, targetY, frame).slice(0, 1)) {
+      labels.push(labelElement(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle, theme, unit));
     }
-  });
-  out.push(...labels);
+  }
+  overlay.push(...labels);
 
   // Header.
-  out.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));
+  overlay.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));
   subtitleLines.forEach((line, i) => {
-    out.push(textElement(line, margin, subtitleBaseline + shiftDown + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
+    overlay.push(textElement(line, margin, subtitleBaseline + shiftDown + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
   });
 
   // Legend.
   legendRows.forEach((row, r) => {
     const y = footerTop + r * legendRowHeight;
     for (const item of row) {
-      out.push(legendSwatch(item.key as LegendKey, item.x, y, swatch, theme, unit));
-      out.push(textElement(item.label, item.x + swatch + 6 * unit, y + swatch * 0.8, layout.legendStyle, theme.text));
+      overlay.push(legendSwatch(item.key as LegendKey, item.x, y, swatch, theme, unit));
+      overlay.push(textElement(item.label, item.x + swatch + 6 * unit, y + swatch * 0.8, layout.legendStyle, theme.text));
     }
   });
   smallLines.forEach((line, i) => {
     const y = footerTop + legendRows.length * legendRowHeight + 10 * unit + layout.smallStyle.sizePx * (1 + i * 1.4) - layout.smallStyle.sizePx * 0.4;
-    out.push(textElement(line, margin, y, layout.smallStyle, theme.textMuted));
+    overlay.push(textElement(line, margin, y, layout.smallStyle, theme.textMuted));
   });
-  out.push('</svg>');
-
   return {
-    svg: out.join('\n'),
+    svg: [open, ...head, ...base, ...overlay, '</svg>'].join('\n'),
     title: texts.title,
     subtitle: texts.subtitle,
     smallPrint: texts.smallPrint,
     project: (place) => projection([place[0], place[1]]),
+    basemapDetail: basemap.detail,
   };
 }
 

@@ -1,6 +1,7 @@
 /**
  * SVG scene → image bytes with sharp (librsvg inside). Text is already
- * outlined, so no font is looked up; PNG density (pHYs) is written as asked.
+ * outlined, so no font is looked up; the density is recorded as asked (PNG
+ * pHYs), and a title and description travel in XMP.
  */
 import sharp from 'sharp';
 
@@ -11,16 +12,34 @@ export interface RasterOptions {
   readonly format: RasterFormat;
   /** Pixels per inch to record in the file. */
   readonly dpi: number;
-  /** PNG text chunks (e.g. a caption), written as tEXt/iTXt. */
-  readonly comment?: string;
+  /** Embedded as XMP dc:title and dc:description. */
+  readonly title?: string;
+  readonly description?: string;
+}
+
+const xmlText = (text: string) => text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
+
+export function xmpPacket(title: string, description: string): string {
+  const alt = (text: string) => `<rdf:Alt><rdf:li xml:lang="x-default">${xmlText(text)}</rdf:li></rdf:Alt>`;
+  return [
+    '<?xpacket begin="\uFEFF" id="W5M0MpCehiHzreSzNTczkc9d"?>',
+    '<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#">',
+    '<rdf:Description rdf:about="" xmlns:dc="http://purl.org/dc/elements/1.1/">',
+    `<dc:title>${alt(title)}</dc:title><dc:description>${alt(description)}</dc:description>`,
+    '</rdf:Description></rdf:RDF></x:xmpmeta>',
+    '<?xpacket end="w"?>',
+  ].join('');
 }
 
 export async function rasterise(svg: string, options: RasterOptions): Promise<Buffer> {
   // librsvg reads the SVG's own pixel size; density 72 keeps one SVG px = one image px.
-  let image = sharp(Buffer.from(svg), { density: 72, limitInputPixels: false }).withMetadata({ density: options.dpi });
+  // (Drawing layers side by side does not pay: libvips loads one SVG at a time,
+  // and every extra surface costs as much as a basemap.)
+  let image = sharp(Buffer.from(svg), { density: 72, limitInputPixels: false }).withDensity(options.dpi);
+  if (options.title !== undefined) image = image.withXmp(xmpPacket(options.title, options.description ?? ''));
   switch (options.format) {
     case 'png':
-      image = image.png({ compressionLevel: 6, adaptiveFiltering: false, palette: false });
+      image = image.png({ compressionLevel: 6, adaptiveFiltering: false });
       break;
     case 'webp':
       image = image.webp({ quality: 90, effort: 4 });

@@ -55,7 +55,7 @@ const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
  * d3-contour places value (i, j) at (i + ½, j + ½); we undo that offset.
  */
 export function traceRegion(grid: PlaceGrid, values: ArrayLike<number>, threshold = 0): PlanarMultiPolygon {
-  const [contour] = contours().size([grid.columns, grid.rows]).thresholds([threshold])(Array.from(values));
+  const [contour] = contours().size([grid.columns, grid.rows]).thresholds([threshold])(values as number[]);
   const res = grid.resolutionDeg;
   const toLonLat = ([x, y]: Position): Position => [
     round6(Math.min(180, Math.max(-180, -180 + (x! - 0.5) * res))),

@@ -5,9 +5,16 @@
  * reports, it does not fail.
  */
 import { NextLunarEclipse, SearchLunarEclipse } from 'astronomy-engine';
+import { geoEqualEarth, geoPath } from 'd3-geo';
 import { findLunarEclipses, SUPPORTED_RANGE } from '../../src/eclipse/catalogue.ts';
-import { catalogueDocument } from '../../src/outputs/catalogueRecord.ts';
 import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
+import { civilClock } from '../../src/ephemeris/civilTime.ts';
+import { loadBasemap, type BasemapDetail } from '../../src/map/basemap.ts';
+import { THEMES } from '../../src/map/theme.ts';
+import { catalogueDocument } from '../../src/outputs/catalogueRecord.ts';
+import { renderMapFile, type MapRequest } from '../../src/outputs/mapFile.ts';
+import { rasterise } from '../../src/raster/raster.ts';
+import { stage, visibilityOf } from '../../src/visibility/visibility.ts';
 
 const ROUNDS = 5;
 
@@ -16,50 +23,79 @@ function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)]!;
 }
 
-function time(fn: () => unknown): number {
+async function time(fn: () => unknown): Promise<number> {
   const start = performance.now();
-  fn();
+  await fn();
   return performance.now() - start;
 }
 
+/** Run each job once to warm up, then alternate them ROUNDS times so that drift hits all alike. */
+async function alternate(jobs: Record<string, () => unknown>): Promise<Record<string, number>> {
+  for (const job of Object.values(jobs)) await job();
+  const times: Record<string, number[]> = Object.fromEntries(Object.keys(jobs).map((k) => [k, []]));
+  for (let round = 0; round < ROUNDS; round++) {
+    for (const [name, job] of Object.entries(jobs)) times[name]!.push(await time(job));
+  }
+  return Object.fromEntries(Object.entries(times).map(([k, v]) => [k, median(v)]));
+}
+
+const line = (label: string, value: string) => console.log(`${label.padEnd(64)} ${value}`);
+console.log(`umbracast bench (median of ${ROUNDS} rounds, Node ${process.version})`);
+
+// Catalogue against a bare astronomy-engine search over the same years.
 const from = new Date('1900-01-01T00:00:00Z');
 const to = new Date('2101-01-01T00:00:00Z');
-
-function bareSearch(): number {
-  let count = 0;
-  let eclipse = SearchLunarEclipse(from);
-  while (eclipse.peak.date < to) {
-    count++;
-    eclipse = NextLunarEclipse(eclipse.peak);
-  }
-  return count;
-}
-
-function fullCatalogue(): number {
-  const deltaT = standardDeltaTModel();
-  const eclipses = findLunarEclipses({ from, to, deltaT });
-  const doc = catalogueDocument(eclipses, { convention: 'danjon', deltaTModel: deltaT.name, from, to });
-  return doc.eclipses.length;
-}
-
-// Warm both paths once, then alternate so that drift hits both alike.
-const bareCount = bareSearch();
-const ourCount = fullCatalogue();
-const bareTimes: number[] = [];
-const ourTimes: number[] = [];
-for (let round = 0; round < ROUNDS; round++) {
-  bareTimes.push(time(bareSearch));
-  ourTimes.push(time(fullCatalogue));
-}
-const bareMs = median(bareTimes);
-const ourMs = median(ourTimes);
-
-const wholeMs = median([0, 1, 2].map(() => time(() => findLunarEclipses({ from: SUPPORTED_RANGE.from, to: SUPPORTED_RANGE.to }))));
+let bareCount = 0;
+let ourCount = 0;
+const catalogue = await alternate({
+  bare: () => {
+    bareCount = 0;
+    let eclipse = SearchLunarEclipse(from);
+    while (eclipse.peak.date < to) {
+      bareCount++;
+      eclipse = NextLunarEclipse(eclipse.peak);
+    }
+  },
+  ours: () => {
+    const deltaT = standardDeltaTModel();
+    const eclipses = findLunarEclipses({ from, to, deltaT });
+    ourCount = catalogueDocument(eclipses, { convention: 'danjon', deltaTModel: deltaT.name, from, to }).eclipses.length;
+  },
+});
+line('catalogue 1900–2100, all fields (eclipses)', `${catalogue.ours!.toFixed(0)} ms (${ourCount})`);
+line('bare astronomy-engine lunar-eclipse search 1900–2100', `${catalogue.bare!.toFixed(0)} ms (${bareCount})`);
+line('ratio catalogue / bare search (target ≤ 1.5)', (catalogue.ours! / catalogue.bare!).toFixed(2));
+const wholeStart = performance.now();
 const wholeCount = findLunarEclipses({ from: SUPPORTED_RANGE.from, to: SUPPORTED_RANGE.to }).length;
+line(`whole supported range, ${SUPPORTED_RANGE.description} (eclipses)`, `${(performance.now() - wholeStart).toFixed(0)} ms (${wholeCount})`);
 
-const line = (label: string, value: string) => console.log(`${label.padEnd(58)} ${value}`);
-console.log(`umbracast bench (median of ${ROUNDS} rounds, Node ${process.version})`);
-line('catalogue 1900–2100, all fields (eclipses)', `${ourMs.toFixed(0)} ms (${ourCount})`);
-line('bare astronomy-engine lunar-eclipse search 1900–2100', `${bareMs.toFixed(0)} ms (${bareCount})`);
-line('ratio catalogue / bare search (target ≤ 1.5)', (ourMs / bareMs).toFixed(2));
-line(`whole supported range ${SUPPORTED_RANGE.description} (eclipses)`, `${wholeMs.toFixed(0)} ms (${wholeCount})`);
+// A world map against rasterising the bare basemap: same projection, world data and size.
+const [eclipse] = findLunarEclipses({ from: new Date('2026-03-03T00:00:00Z'), to: new Date('2026-03-04T00:00:00Z') });
+const mapRequest = (widthPx: number, heightPx: number): MapRequest => ({
+  eclipse: eclipse!,
+  style: { theme: THEMES.light, view: { projection: 'equal-earth' }, borders: 'countries', clock: civilClock('UTC') },
+  size: { widthPx, heightPx },
+  dpi: 72,
+  format: 'png',
+  generator: 'umbracast bench',
+});
+const probe = await renderMapFile(mapRequest(2400, 1200));
+const detail: BasemapDetail = probe.scene!.basemapDetail;
+const centralMeridian = Math.round(stage(visibilityOf(eclipse!), 'greatest').cap.centre[0] / 5) * 5;
+function bareBasemapSvg(): string {
+  const basemap = loadBasemap(detail);
+  const projection = geoEqualEarth().rotate([-centralMeridian, 0]).fitSize([2400, 1200], { type: 'Sphere' });
+  const path = geoPath(projection).digits(1);
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="2400" height="1200"><rect width="2400" height="1200" fill="#faf8f3"/>`
+    + `<path d="${path({ type: 'Sphere' })}" fill="#eef0f2"/><path d="${path(basemap.land as never)}" fill="#ffffff" stroke="#5d6470"/>`
+    + `<path d="${path(basemap.borders)}" fill="none" stroke="#999999"/></svg>`;
+}
+const maps = await alternate({
+  basemap: () => rasterise(bareBasemapSvg(), { format: 'png', dpi: 72 }),
+  world: () => renderMapFile(mapRequest(2400, 1200)),
+  card: () => renderMapFile(mapRequest(1200, 675)),
+});
+line(`world map 2400×1200 PNG, all layers (basemap ${detail})`, `${maps.world!.toFixed(0)} ms`);
+line('bare basemap 2400×1200 PNG, same projection and data', `${maps.basemap!.toFixed(0)} ms`);
+line('ratio map / bare basemap (target ≤ 1.3)', (maps.world! / maps.basemap!).toFixed(2));
+line('social card 1200×675 PNG', `${maps.card!.toFixed(0)} ms`);

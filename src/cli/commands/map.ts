@@ -1,0 +1,163 @@
+/** `umbracast map [WHEN]`: one eclipse as a publication-ready visibility map. */
+import { mkdirSync } from 'node:fs';
+import { extname, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { InputError } from '../../errors.ts';
+import { eclipseNear, nextEclipse } from '../../eclipse/catalogue.ts';
+import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
+import type { LunarEclipse } from '../../eclipse/types.ts';
+import { civilClock } from '../../ephemeris/civilTime.ts';
+import { fixedDeltaTModel, standardDeltaTModel } from '../../ephemeris/deltaT.ts';
+import { BORDER_STYLES } from '../../map/basemap.ts';
+import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
+import { THEME_NAMES, THEMES } from '../../map/theme.ts';
+import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
+import { MAP_FORMATS, renderMapFile, type MapFormat } from '../../outputs/mapFile.ts';
+import type { CommandContext } from '../context.ts';
+import { toolVersion } from '../version.ts';
+import {
+  checkPixelSize,
+  parseBoundingBox,
+  parseChoice,
+  parseLatLon,
+  parseNumber,
+  parseSize,
+  parseWhen,
+  WHEN_EXPECTED,
+  type PixelSize,
+} from '../options.ts';
+import { DELTA_T_LIMITS } from './list.ts';
+
+export interface MapOptions {
+  projection: string;
+  bbox?: string;
+  centre?: string;
+  span?: string;
+  tz: string;
+  borders: string;
+  title?: string;
+  theme: string;
+  size?: string;
+  preset?: string;
+  widthMm?: string;
+  dpi?: string;
+  output?: string;
+  format?: string;
+  convention: string;
+  deltaT?: string;
+}
+
+export type SizePreset = 'card' | 'square' | 'print';
+export const SIZE_PRESETS: readonly SizePreset[] = ['card', 'square', 'print'];
+export const DEFAULT_SIZE: PixelSize = { widthPx: 2400, heightPx: 1350 };
+const PRESET_SIZES: Record<'card' | 'square', PixelSize> = {
+  card: { widthPx: 1200, heightPx: 675 },
+  square: { widthPx: 1080, heightPx: 1080 },
+};
+/** Print pages are 0.62 as tall as wide: a world map with its title and legend. */
+const PRINT_ASPECT = 0.62;
+
+export function registerMap(program: Command, context: CommandContext): void {
+  program
+    .command('map')
+    .description('render one eclipse as a visibility map (PNG, SVG, WebP, JPEG or GeoJSON)')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
+    .option('--projection <name>', `${PROJECTION_NAMES.join(', ')}`, 'equal-earth')
+    .option('--bbox <W,S,E,N>', 'regional view of this box, degrees (implies --projection region)')
+    .option('--centre <LAT,LON>', 'regional view around this point (with --span; implies --projection region)')
+    .option('--span <degrees>', 'angular width of a --centre view', '60')
+    .option('--tz <zone>', 'show times in this IANA time zone', 'UTC')
+    .option('--borders <style>', `${BORDER_STYLES.join(' or ')}`, 'countries')
+    .option('--title <text>', 'replace the generated title')
+    .option('--theme <name>', `${THEME_NAMES.join(', ')}`, 'light')
+    .option('--size <WxH>', `image size in pixels (default ${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx})`)
+    .option('--preset <name>', 'card (1200x675), square (1080x1080) or print (see --width-mm, --dpi)')
+    .option('--width-mm <mm>', 'print width in millimetres (with --preset print)', '180')
+    .option('--dpi <n>', 'pixels per inch to record in the file (default 300 for print, else 72)')
+    .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png)')
+    .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`)
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .action(async (whenText: string | undefined, options: MapOptions) => {
+      // The path written, on stdout, so that scripts can pick it up.
+      context.stdout(`${await runMap(whenText, options, context)}\n`);
+    });
+}
+
+function parseView(options: MapOptions): View {
+  const projection = parseChoice('--projection', options.projection, PROJECTION_NAMES);
+  if (options.bbox !== undefined && options.centre !== undefined) throw new InputError('--bbox', 'either --bbox or --centre, not both', options.bbox);
+  if (options.bbox !== undefined) return { projection: 'region', bbox: parseBoundingBox(options.bbox) };
+  if (options.centre !== undefined) {
+    return { projection: 'region', centre: parseLatLon('--centre', options.centre), spanDeg: parseNumber('--span', options.span ?? '60', { min: 2, max: 180, unit: 'degrees' }) };
+  }
+  if (projection === 'region') throw new InputError('--projection', 'region together with --bbox W,S,E,N or --centre LAT,LON', 'region alone');
+  return { projection };
+}
+
+function parseSizeAndDpi(options: MapOptions): { size: PixelSize; dpi: number } {
+  const dpiOf = (fallback: number) => (options.dpi === undefined ? fallback : parseNumber('--dpi', options.dpi, { min: 36, max: 1200, unit: 'pixels per inch' }));
+  if (options.size !== undefined && options.preset !== undefined) throw new InputError('--size', 'either --size or --preset, not both', options.size);
+  if (options.size !== undefined) return { size: parseSize(options.size), dpi: dpiOf(72) };
+  if (options.preset === undefined) return { size: DEFAULT_SIZE, dpi: dpiOf(72) };
+  const preset = parseChoice('--preset', options.preset, SIZE_PRESETS);
+  if (preset !== 'print') return { size: PRESET_SIZES[preset], dpi: dpiOf(72) };
+  const dpi = dpiOf(300);
+  const widthMm = parseNumber('--width-mm', options.widthMm ?? '180', { min: 20, max: 2000, unit: 'millimetres' });
+  const widthPx = Math.round((widthMm / 25.4) * dpi);
+  const size = { widthPx, heightPx: Math.round(widthPx * PRINT_ASPECT) };
+  return { size: checkPixelSize('--width-mm', size, `${widthMm} mm at ${dpi} dpi = ${size.widthPx}x${size.heightPx} px`), dpi };
+}
+
+const EXTENSION_FORMATS: Record<string, MapFormat> = {
+  '.png': 'png', '.svg': 'svg', '.webp': 'webp', '.jpg': 'jpg', '.jpeg': 'jpg', '.geojson': 'geojson', '.json': 'geojson',
+};
+
+function parseOutput(options: MapOptions, eclipse: LunarEclipse): { path: string; format: MapFormat } {
+  const format = options.format === undefined ? undefined : parseChoice('--format', options.format, MAP_FORMATS);
+  if (options.output === undefined) {
+    const chosen = format ?? 'png';
+    const folder = resolve('out');
+    mkdirSync(folder, { recursive: true });
+    return { path: resolve(folder, `${eclipse.id}-${eclipse.kind}.${chosen}`), format: chosen };
+  }
+  const extension = extname(options.output).toLowerCase();
+  const fromExtension = EXTENSION_FORMATS[extension];
+  if (!fromExtension) throw new InputError('--output', 'a file name ending in .png, .svg, .webp, .jpg or .geojson', options.output);
+  if (format && format !== fromExtension) throw new InputError('--format', `${fromExtension} to match --output ${options.output}`, options.format);
+  const path = resolve(options.output);
+  checkOutputFolder('--output', path);
+  return { path, format: fromExtension };
+}
+
+export function resolveEclipse(whenText: string | undefined, options: MapOptions, now: Date): LunarEclipse {
+  const when = parseWhen(whenText);
+  const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
+  const deltaT = options.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
+  const found = when.kind === 'next' ? nextEclipse(now, { convention, deltaT }) : eclipseNear(when.date, 7.5, { convention, deltaT });
+  if (!found) throw new InputError('WHEN', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
+  return found;
+}
+
+/** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
+export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
+  const view = parseView(options);
+  const { size, dpi } = parseSizeAndDpi(options);
+  const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
+  const borders = parseChoice('--borders', options.borders, BORDER_STYLES);
+  const clock = civilClock(options.tz.trim(), '--tz');
+  const title = options.title;
+  if (title !== undefined && title.trim() === '') throw new InputError('--title', 'some text', title);
+  const eclipse = resolveEclipse(whenText, options, context.now());
+  const { path, format } = parseOutput(options, eclipse);
+  const file = await renderMapFile({
+    eclipse,
+    style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) },
+    size,
+    dpi,
+    format,
+    generator: `umbracast ${toolVersion()}`,
+  });
+  await writeFileAtomic(path, file.bytes);
+  return path;
+}

@@ -1,0 +1,111 @@
+/** The rendered map: what its pixels say, that it is the same everywhere, and that its files are valid. */
+import assert from 'node:assert/strict';
+import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { test } from 'node:test';
+import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import sharp from 'sharp';
+import { THEMES } from '../../src/map/theme.ts';
+import { stage, visibilityOf, ZONE_ORDER, type ZoneName } from '../../src/visibility/visibility.ts';
+import { eclipseOn, render } from './support.ts';
+
+const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
+
+async function pixelAt(png: Uint8Array, [x, y]: [number, number]): Promise<[number, number, number]> {
+  const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
+  const channels: number[][] = [[], [], []];
+  for (let dy = -1; dy <= 1; dy++) {
+    for (let dx = -1; dx <= 1; dx++) {
+      const offset = ((Math.round(y) + dy) * info.width + Math.round(x) + dx) * info.channels;
+      for (let c = 0; c < 3; c++) channels[c]!.push(data[offset + c]!);
+    }
+  }
+  return channels.map((values) => values.sort((a, b) => a - b)[4]!) as [number, number, number];
+}
+
+/** The zone whose fill (over sea, or under the land tint) is nearest to a colour. */
+function nearestZone(rgb: [number, number, number]): ZoneName {
+  const theme = THEMES.light;
+  const parse = (hex: string) => [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16));
+  const land = parse(theme.land);
+  let best: { zone: ZoneName; distance: number } | undefined;
+  for (const zone of ZONE_ORDER) {
+    const sea = parse(theme.zones[zone]);
+    const tinted = sea.map((v, i) => v * (1 - theme.landOpacity) + land[i]! * theme.landOpacity);
+    for (const candidate of [sea, tinted]) {
+      const distance = Math.hypot(...candidate.map((v, i) => v - rgb[i]!));
+      if (!best || distance < best.distance) best = { zone, distance };
+    }
+  }
+  return best!.zone;
+}
+
+test('the pixel at the sub-lunar point at greatest shows the whole-eclipse zone; at its antipode, the nothing-seen zone (2026-03-03; TRADE.md §3)', async () => {
+  const eclipse = eclipseOn('2026-03-03');
+  const point = stage(visibilityOf(eclipse), 'greatest').cap.centre;
+  const world = await render({ borders: 'land' });
+  const at = world.scene!.project(point)!;
+  assert.equal(nearestZone(await pixelAt(world.bytes, at)), 'sees-all');
+  const antipode: [number, number] = [point[0] > 0 ? point[0] - 180 : point[0] + 180, -point[1]];
+  const around = await render({ borders: 'land', view: { projection: 'region', centre: antipode, spanDeg: 60 } });
+  assert.equal(nearestZone(await pixelAt(around.bytes, around.scene!.project(antipode)!)), 'sees-none');
+});
+
+test('determinism: two renders give the same bytes, PNG and SVG', async () => {
+  assert.equal(sha256((await render()).bytes), sha256((await render()).bytes));
+  assert.equal(sha256((await render({ format: 'svg' })).bytes), sha256((await render({ format: 'svg' })).bytes));
+});
+
+test('determinism: a render with an empty font configuration (no system fonts at all) gives the same bytes', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-fonts-'));
+  const config = join(dir, 'fonts.conf');
+  writeFileSync(config, '<?xml version="1.0"?>\n<!DOCTYPE fontconfig SYSTEM "fonts.dtd">\n<fontconfig><cachedir>' + dir + '</cachedir></fontconfig>\n');
+  const child = spawnSync(process.execPath, ['--import', 'tsx', new URL('./renderHash.ts', import.meta.url).pathname], {
+    encoding: 'utf8',
+    env: { ...process.env, FONTCONFIG_FILE: config, FONTCONFIG_PATH: dir, HOME: dir, XDG_DATA_HOME: dir },
+  });
+  assert.equal(child.status, 0, child.stderr);
+  assert.equal(child.stdout, sha256((await render({ theme: 'light' })).bytes));
+});
+
+test('PNG dimensions and density are as asked', async () => {
+  const file = await render({ width: 1000, height: 640, dpi: 300 });
+  const meta = await sharp(file.bytes).metadata();
+  assert.equal(meta.format, 'png');
+  assert.deepEqual([meta.width, meta.height, meta.density], [1000, 640, 300]);
+  const webp = await sharp((await render({ format: 'webp', width: 640, height: 360 })).bytes).metadata();
+  assert.deepEqual([webp.format, webp.width, webp.height], ['webp', 640, 360]);
+  const jpg = await sharp((await render({ format: 'jpg', width: 640, height: 360 })).bytes).metadata();
+  assert.deepEqual([jpg.format, jpg.width, jpg.height], ['jpeg', 640, 360]);
+});
+
+test('the SVG parses as XML, and a title with <, &, quotes and non-Latin letters survives escaped (W3C XML 1.0)', async () => {
+  const title = `Затмение <Σελήνη> & "Moon" 'eclipse' — Kestrel Ridge`;
+  const file = await render({ format: 'svg', title });
+  const svg = Buffer.from(file.bytes).toString('utf8');
+  assert.equal(XMLValidator.validate(svg), true);
+  const parsed = new XMLParser({ ignoreAttributes: false, processEntities: true }).parse(svg);
+  assert.equal(parsed.svg.title['#text'], title);
+  assert.ok(!svg.includes('<Σελήνη>'), 'raw markup from the title must not reach the SVG');
+  assert.ok(!svg.includes('<text'), 'letters are outlines, not system-font text');
+  assert.ok(!svg.includes('NaN'));
+});
+
+test('a long title is shortened to fit, not spilled off the page', async () => {
+  const file = await render({ format: 'svg', width: 640, height: 360, title: 'A very long headline '.repeat(12) });
+  const svg = Buffer.from(file.bytes).toString('utf8');
+  const titlePath = svg.split('\n').find((line) => line.startsWith('<path d="M') && line.includes('fill="#161a26"'));
+  assert.ok(titlePath);
+  const xs = [...titlePath.matchAll(/[ML](-?[\d.]+) /g)].map((m) => Number(m[1]));
+  assert.ok(Math.max(...xs) <= 640, `title reaches x = ${Math.max(...xs)}`);
+});
+
+test('the PNG carries its title and description in XMP', async () => {
+  const meta = await sharp((await render()).bytes).metadata();
+  const xmp = meta.xmp!.toString('utf8');
+  assert.match(xmp, /Total lunar eclipse · 3 March 2026/);
+  assert.match(xmp, /Danjon convention; ΔT 69\.1 s/);
+});

@@ -8,6 +8,7 @@ import { InputError } from '../errors.ts';
 import type { CommandContext } from './context.ts';
 import { registerList } from './commands/list.ts';
 import { registerMap } from './commands/map.ts';
+import { registerLocal } from './commands/local.ts';
 import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
@@ -31,6 +32,7 @@ function buildProgram(context: CommandContext): Command {
     });
   registerList(program, context);
   registerMap(program, context);
+  registerLocal(program, context);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({ writeOut: (t) => context.stdout(t), writeErr: () => undefined, outputError: () => undefined });
   }

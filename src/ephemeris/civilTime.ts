@@ -38,8 +38,8 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
   const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
   const dateFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, day: 'numeric', month: 'long', year: 'numeric' });
   const isoFormat = new Intl.DateTimeFormat('en-CA', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' });
-  // British English names European zones (CET, BST), American English the American ones (CST).
-  const shortNames = ['en-GB', 'en-US'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
+  // Each English names its own zones: British (CET, BST), American (CST), Australian (AEDT), Indian (IST), New Zealand (NZDT).
+  const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
   const part = (format: Intl.DateTimeFormat, utDays: number) =>
     format.formatToParts(dateFromDays(utDays)).find((p) => p.type === 'timeZoneName')?.value ?? '';

@@ -8,6 +8,7 @@ import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
 import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
+import { DELTA_T_LIMITS } from '../choose.ts';
 
 interface ListOptions {
   from?: string;
@@ -18,8 +19,6 @@ interface ListOptions {
   format: string;
 }
 
-/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
-export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
 
 export function registerList(program: Command, context: CommandContext): void {
   program

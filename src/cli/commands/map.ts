@@ -3,11 +3,9 @@ import { mkdirSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
-import { eclipseNear, nextEclipse } from '../../eclipse/catalogue.ts';
 import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
 import type { LunarEclipse } from '../../eclipse/types.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
-import { fixedDeltaTModel, standardDeltaTModel } from '../../ephemeris/deltaT.ts';
 import { BORDER_STYLES } from '../../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
 import { THEME_NAMES, THEMES } from '../../map/theme.ts';
@@ -22,11 +20,10 @@ import {
   parseLatLon,
   parseNumber,
   parseSize,
-  parseWhen,
   WHEN_EXPECTED,
   type PixelSize,
 } from '../options.ts';
-import { DELTA_T_LIMITS } from './list.ts';
+import { chooseEclipse } from '../choose.ts';
 
 export interface MapOptions {
   projection: string;
@@ -130,15 +127,6 @@ function parseOutput(options: MapOptions, eclipse: LunarEclipse): { path: string
   return { path, format: fromExtension };
 }
 
-export function resolveEclipse(whenText: string | undefined, options: MapOptions, now: Date): LunarEclipse {
-  const when = parseWhen(whenText);
-  const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
-  const deltaT = options.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
-  const found = when.kind === 'next' ? nextEclipse(now, { convention, deltaT }) : eclipseNear(when.date, 7.5, { convention, deltaT });
-  if (!found) throw new InputError('WHEN', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
-  return found;
-}
-
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
 export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
   const view = parseView(options);
@@ -148,7 +136,7 @@ export async function runMap(whenText: string | undefined, options: MapOptions, 
   const clock = civilClock(options.tz.trim(), '--tz');
   const title = options.title;
   if (title !== undefined && title.trim() === '') throw new InputError('--title', 'some text', title);
-  const eclipse = resolveEclipse(whenText, options, context.now());
+  const eclipse = chooseEclipse(whenText, options, context.now());
   const { path, format } = parseOutput(options, eclipse);
   const file = await renderMapFile({
     eclipse,

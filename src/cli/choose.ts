@@ -1,0 +1,53 @@
+/** What several commands choose the same way: the eclipse (WHEN, convention, ΔT) and the place (--place, --at, --tz). */
+import { InputError } from '../errors.ts';
+import { eclipseNear, nextEclipse } from '../eclipse/catalogue.ts';
+import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
+import type { LunarEclipse } from '../eclipse/types.ts';
+import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
+import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
+import { findPlace } from '../places/gazetteer.ts';
+import { timeZoneAt } from '../places/timeZone.ts';
+import type { PlaceLabel } from '../outputs/localFormats.ts';
+import { parseChoice, parseLatLon, parseNumber, parseWhen, WHEN_EXPECTED } from './options.ts';
+
+/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
+export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
+
+export interface EclipseChoice {
+  convention: string;
+  deltaT?: string;
+}
+
+export function chooseEclipse(whenText: string | undefined, options: EclipseChoice, now: Date): LunarEclipse {
+  const when = parseWhen(whenText);
+  const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
+  const deltaT = options.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
+  const found = when.kind === 'next' ? nextEclipse(now, { convention, deltaT }) : eclipseNear(when.date, 7.5, { convention, deltaT });
+  if (!found) throw new InputError('WHEN', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
+  return found;
+}
+
+export interface PlaceChoice {
+  place?: string;
+  at?: string;
+  tz?: string;
+}
+
+/** --place NAME or --at LAT,LON (one of them), and the time zone: --tz, else the zone at that point. */
+export function choosePlace(options: PlaceChoice, required = true): { place: PlaceLabel; clock: CivilClock } | undefined {
+  if (options.place !== undefined && options.at !== undefined) throw new InputError('--at', 'either --place or --at, not both', options.at);
+  let place: Omit<PlaceLabel, 'tz'>;
+  if (options.place !== undefined) {
+    const found = findPlace(options.place, '--place');
+    place = { name: found.name, latDeg: found.latDeg, lonDeg: found.lonDeg };
+  } else if (options.at !== undefined) {
+    const [lonDeg, latDeg] = parseLatLon('--at', options.at);
+    place = { name: `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? 'N' : 'S'} ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? 'E' : 'W'}`, latDeg, lonDeg };
+  } else {
+    if (required) throw new InputError('--place', 'a place: --place NAME or --at LAT,LON', undefined);
+    return undefined;
+  }
+  const tz = options.tz !== undefined ? options.tz.trim() : timeZoneAt(place.latDeg, place.lonDeg);
+  const clock = civilClock(tz, '--tz');
+  return { place: { ...place, tz: clock.zone }, clock };
+}

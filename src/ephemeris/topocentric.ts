@@ -1,0 +1,77 @@
+/**
+ * A body's altitude and azimuth for an observer on the WGS 84 ellipsoid:
+ * geocentric position (EQJ) → true equator of date → Earth-fixed (GAST from
+ * our own UT) → minus the observer's position → local east/north/up. Apparent
+ * altitude adds Saemundsson's refraction (Meeus, Astronomical Algorithms
+ * eq. 16.4), held at its −1° value below that, as JPL Horizons does.
+ */
+import { RotateVector, Rotation_EQJ_EQD, Vector } from 'astronomy-engine';
+import { greenwichApparentSiderealDeg } from './earth.ts';
+import { astroTimeOf, type Moment } from './time.ts';
+import type { Vec3 } from './vector.ts';
+
+const DEG = Math.PI / 180;
+const WGS84_A_KM = 6378.137;
+const WGS84_F = 1 / 298.257223563;
+const WGS84_E2 = WGS84_F * (2 - WGS84_F);
+
+export interface Observer {
+  readonly latDeg: number;
+  readonly lonDeg: number;
+  readonly heightKm?: number;
+}
+
+export interface Horizontal {
+  /** Apparent altitude of the body's centre, with refraction, degrees. */
+  readonly altitudeDeg: number;
+  /** Altitude without refraction, degrees. */
+  readonly geometricAltitudeDeg: number;
+  /** Azimuth from north through east, degrees in [0, 360). */
+  readonly azimuthDeg: number;
+  /** Observer to body, km. */
+  readonly distanceKm: number;
+}
+
+/** Saemundsson: refraction in degrees for a true (airless) altitude in degrees. */
+export function refractionDeg(trueAltitudeDeg: number): number {
+  if (trueAltitudeDeg > 90) return 0;
+  const h = Math.max(-1, trueAltitudeDeg);
+  return 1.02 / Math.tan((h + 10.3 / (h + 5.11)) * DEG) / 60;
+}
+
+/** The observer's position in the Earth-fixed frame, km. */
+export function observerPositionKm({ latDeg, lonDeg, heightKm = 0 }: Observer): Vec3 {
+  const phi = latDeg * DEG;
+  const lambda = lonDeg * DEG;
+  const n = WGS84_A_KM / Math.sqrt(1 - WGS84_E2 * Math.sin(phi) ** 2);
+  return [
+    (n + heightKm) * Math.cos(phi) * Math.cos(lambda),
+    (n + heightKm) * Math.cos(phi) * Math.sin(lambda),
+    (n * (1 - WGS84_E2) + heightKm) * Math.sin(phi),
+  ];
+}
+
+/** Geocentric EQJ position (km) → Earth-fixed (km), true equator and equinox of date turned by GAST. */
+export function earthFixedKm(positionEQJ: Vec3, moment: Moment): Vec3 {
+  const time = astroTimeOf(moment);
+  const ofDate = RotateVector(Rotation_EQJ_EQD(time), new Vector(positionEQJ[0], positionEQJ[1], positionEQJ[2], time));
+  const theta = greenwichApparentSiderealDeg(moment) * DEG;
+  const c = Math.cos(theta);
+  const s = Math.sin(theta);
+  return [c * ofDate.x + s * ofDate.y, -s * ofDate.x + c * ofDate.y, ofDate.z];
+}
+
+export function horizontal(positionEQJKm: Vec3, moment: Moment, observer: Observer): Horizontal {
+  const body = earthFixedKm(positionEQJKm, moment);
+  const site = observerPositionKm(observer);
+  const t: Vec3 = [body[0] - site[0], body[1] - site[1], body[2] - site[2]];
+  const phi = observer.latDeg * DEG;
+  const lambda = observer.lonDeg * DEG;
+  const east = -Math.sin(lambda) * t[0] + Math.cos(lambda) * t[1];
+  const north = -Math.sin(phi) * Math.cos(lambda) * t[0] - Math.sin(phi) * Math.sin(lambda) * t[1] + Math.cos(phi) * t[2];
+  const up = Math.cos(phi) * Math.cos(lambda) * t[0] + Math.cos(phi) * Math.sin(lambda) * t[1] + Math.sin(phi) * t[2];
+  const distanceKm = Math.hypot(east, north, up);
+  const geometricAltitudeDeg = Math.asin(up / distanceKm) / DEG;
+  const azimuthDeg = ((Math.atan2(east, north) / DEG) % 360 + 360) % 360;
+  return { altitudeDeg: geometricAltitudeDeg + refractionDeg(geometricAltitudeDeg), geometricAltitudeDeg, azimuthDeg, distanceKm };
+}

@@ -9,6 +9,8 @@ import type { CommandContext } from './context.ts';
 import { registerList } from './commands/list.ts';
 import { registerMap } from './commands/map.ts';
 import { registerLocal } from './commands/local.ts';
+import { registerSky } from './commands/sky.ts';
+import { registerCaption } from './commands/caption.ts';
 import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
@@ -33,6 +35,8 @@ function buildProgram(context: CommandContext): Command {
   registerList(program, context);
   registerMap(program, context);
   registerLocal(program, context);
+  registerSky(program, context);
+  registerCaption(program, context);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({ writeOut: (t) => context.stdout(t), writeErr: () => undefined, outputError: () => undefined });
   }

@@ -16,7 +16,8 @@ import { stage, type Stage, type Visibility, type ZoneName } from '../visibility
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
-import { escapeXml, FONT_CREDIT, fitText, measureText, textOutline, wrapText, type TextStyle } from './typography.ts';
+import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
+import { labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box } from './draw.ts';
 
 export interface MapStyle {
   readonly theme: Theme;
@@ -25,6 +26,13 @@ export interface MapStyle {
   readonly clock: CivilClock;
   /** Replaces the generated title. */
   readonly title?: string;
+}
+
+/** A place marked on the map with a short label ("Lisbon · sets 06:54 WET"). */
+export interface MapMark {
+  readonly lonDeg: number;
+  readonly latDeg: number;
+  readonly label: string;
 }
 
 export interface MapSize {
@@ -39,6 +47,7 @@ export interface SceneInput {
   readonly size: MapSize;
   /** "umbracast 0.1.0", for the small print. */
   readonly generator: string;
+  readonly marks?: readonly MapMark[];
 }
 
 export interface Scene {
@@ -96,42 +105,39 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
   return { title, subtitle, smallPrint };
 }
 
-interface Layout {
-  readonly unit: number;
-  readonly margin: number;
-  readonly titleStyle: TextStyle;
-  readonly subtitleStyle: TextStyle;
-  readonly legendStyle: TextStyle;
-  readonly smallStyle: TextStyle;
-  readonly labelStyle: TextStyle;
+/**
+ * Places marked on the map, each a dot and a label; the label takes the
+ * first spot around its dot that overlaps no label already placed.
+ */
+function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[]): string[] {
+  const out: string[] = [];
+  const gap = 7 * unit;
+  const inFrame = (b: Box) => b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height;
+  const dots = marks.map((m) => projection([m.lonDeg, m.latDeg]));
+  dots.forEach((p) => {
+    if (p) taken.push({ left: p[0] - 4 * unit, top: p[1] - 4 * unit, right: p[0] + 4 * unit, bottom: p[1] + 4 * unit });
+  });
+  marks.forEach((mark, i) => {
+    const p = dots[i];
+    if (!p) return;
+    const [x, y] = p;
+    const lift = style.sizePx * 0.3;
+    const spots: [number, number, 'start' | 'middle' | 'end'][] = [
+      [x + gap, y + lift, 'start'], [x - gap, y + lift, 'end'], [x, y - gap, 'middle'], [x, y + gap + style.sizePx * 0.8, 'middle'],
+      [x + gap, y - gap, 'start'], [x - gap, y - gap, 'end'], [x + gap, y + gap + style.sizePx * 0.6, 'start'], [x - gap, y + gap + style.sizePx * 0.6, 'end'],
+    ];
+    const scored = spots.map(([sx, sy, anchor]) => {
+      const box = textBox(mark.label, sx, sy, style, anchor);
+      return { sx, sy, anchor, box, clashes: taken.filter((t) => overlaps(t, box)).length + (inFrame(box) ? 0 : 10) };
+    });
+    const best = scored.find((c) => c.clashes === 0) ?? scored.reduce((a, b) => (b.clashes < a.clashes ? b : a));
+    taken.push(best.box);
+    out.push(`<circle cx="${n2(x)}" cy="${n2(y)}" r="${n2(3.2 * unit)}" fill="${theme.marker}" stroke="${theme.halo}" stroke-width="${n2(1.6 * unit)}"/>`);
+    out.push(labelElement(mark.label, best.sx, best.sy, style, theme, unit, best.anchor));
+  });
+  return out;
 }
 
-function layoutFor({ widthPx, heightPx }: MapSize): Layout {
-  const unit = Math.sqrt(widthPx * heightPx) / 900;
-  return {
-    unit,
-    margin: 22 * unit,
-    titleStyle: { sizePx: 27 * unit, weight: 'semibold' },
-    subtitleStyle: { sizePx: 13.5 * unit, weight: 'regular' },
-    legendStyle: { sizePx: 11.5 * unit, weight: 'regular' },
-    smallStyle: { sizePx: 9 * unit, weight: 'regular' },
-    labelStyle: { sizePx: 10.5 * unit, weight: 'semibold' },
-  };
-}
-
-const n2 = (v: number) => (Math.round(v * 100) / 100).toString();
-
-/** One line of outlined text as an SVG path element. */
-function textElement(text: string, x: number, y: number, style: TextStyle, fill: string, anchor: 'start' | 'middle' | 'end' = 'start'): string {
-  const d = textOutline(text, x, y, style, anchor);
-  return d ? `<path d="${d}" fill="${fill}"/>` : '';
-}
-
-/** A map label: outlined text over a soft halo. */
-function labelElement(text: string, x: number, y: number, style: TextStyle, theme: Theme, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): string {
-  const d = textOutline(text, x, y, style, anchor);
-  return `<path d="${d}" fill="${theme.text}" stroke="${theme.halo}" stroke-opacity="${theme.haloOpacity}" stroke-width="${n2(3.2 * unit)}" stroke-linejoin="round" paint-order="stroke"/>`;
-}
 
 function capPolygon(s: Stage): GeoPermissibleObjects {
   return geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)();
@@ -282,6 +288,11 @@ export function composeScene(input: SceneInput): Scene {
   // Sub-lunar point at greatest: a ring, hollow so that the zone shows through.
   const marker = projection([greatest.cap.centre[0], greatest.cap.centre[1]]);
   const labels: string[] = [];
+  const taken: Box[] = [];
+  const label = (text: string, x: number, y: number, style: TextStyle) => {
+    taken.push(textBox(text, x, y, style, 'middle'));
+    labels.push(labelElement(text, x, y, style, theme, unit));
+  };
   if (marker) {
     const [mx, my] = marker;
     overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}" stroke-opacity="0.9"/>`);
@@ -295,7 +306,7 @@ export function composeScene(input: SceneInput): Scene {
     const points = capEdge(s).coordinates.map((p) => projection([p[0]!, p[1]!]));
     const name = s.name === 'greatest' ? 'Greatest' : s.name;
     for (const [x, y] of crossingsAtY(points, targetY, frame)) {
-      labels.push(labelElement(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle, theme, unit));
+      label(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle);
     }
   });
   const fieldLabelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'regular' };
@@ -306,10 +317,11 @@ export function composeScene(input: SceneInput): Scene {
     const targetY = frame.y + frame.height * 0.84 - levels.indexOf(l.minutes) * rung;
     const points = l.line.map((p) => projection([p[0]!, p[1]!]));
     for (const [x, y] of crossingsAtY(points, targetY, frame).slice(0, 1)) {
-      labels.push(labelElement(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle, theme, unit));
+      label(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
     }
   }
   overlay.push(...labels);
+  overlay.push(...markElements(input.marks ?? [], projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken));
 
   // Header.
   overlay.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));

@@ -3,6 +3,7 @@
  * zones stay apart in greyscale print and for readers with a colour-vision
  * deficiency; pinned by a simulation in test/map/theme.test.ts.
  */
+import type { SkyClass } from '../visibility/local.ts';
 import type { ZoneName } from '../visibility/visibility.ts';
 
 export type ThemeName = 'light' | 'dark' | 'print';
@@ -31,6 +32,11 @@ export interface Theme {
   /** Halo behind map labels. */
   readonly halo: string;
   readonly haloOpacity: number;
+  /** The "view from here" figure: the sky's brightness behind the Moon's path. */
+  readonly sky: Readonly<Record<SkyClass, string>>;
+  readonly ground: string;
+  /** The Moon's path, by phase. */
+  readonly path: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
 }
 
 export const THEMES: Readonly<Record<ThemeName, Theme>> = {
@@ -51,6 +57,9 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     textMuted: '#4b5263',
     halo: '#faf8f3',
     haloOpacity: 0.85,
+    sky: { day: '#e7eef5', civil: '#c3d0e2', nautical: '#8c9dbd', astronomical: '#56658c', night: '#2b3457' },
+    ground: '#d9d3c4',
+    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
   },
   dark: {
     name: 'dark',
@@ -69,6 +78,9 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     textMuted: '#b4bccb',
     halo: '#0d111b',
     haloOpacity: 0.8,
+    sky: { day: '#3b4a66', civil: '#2c3852', nautical: '#1f2840', astronomical: '#161d30', night: '#0d111b' },
+    ground: '#252a33',
+    path: { outside: '#59627a', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
   },
   print: {
     name: 'print',
@@ -87,5 +99,8 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     textMuted: '#333333',
     halo: '#ffffff',
     haloOpacity: 0.85,
+    sky: { day: '#f4f4f4', civil: '#dcdcdc', nautical: '#bdbdbd', astronomical: '#9a9a9a', night: '#7a7a7a' },
+    ground: '#e6e6e6',
+    path: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
   },
 };

@@ -1,12 +1,17 @@
 /**
- * One eclipse → one map file: the scene, rasterised or not, or GeoJSON.
- * Everything here is a function of its inputs: same request, same bytes.
+ * One eclipse → one map file: the scene, rasterised or not, or GeoJSON; with
+ * its caption. Everything here is a function of its inputs: same request,
+ * same bytes.
  */
 import type { LunarEclipse } from '../eclipse/types.ts';
-import { composeScene, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
+import { civilClock } from '../ephemeris/civilTime.ts';
+import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
 import { rasterise, type RasterFormat } from '../raster/raster.ts';
+import { localCircumstances } from '../visibility/local.ts';
 import { visibilityOf } from '../visibility/visibility.ts';
+import { eclipseCaption, type Caption } from './caption.ts';
 import { visibilityGeoJson } from './geojson.ts';
+import type { PlaceLabel } from './localFormats.ts';
 
 export type MapFormat = RasterFormat | 'svg' | 'geojson';
 export const MAP_FORMATS: readonly MapFormat[] = ['png', 'svg', 'webp', 'jpg', 'geojson'];
@@ -18,11 +23,35 @@ export interface MapRequest {
   readonly dpi: number;
   readonly format: MapFormat;
   readonly generator: string;
+  /** Places to mark, each labelled in its own time zone. */
+  readonly marks?: readonly PlaceLabel[];
 }
 
 export interface MapFile {
   readonly bytes: Uint8Array;
   readonly scene?: Scene;
+  /** For pictures: the caption and alt text to publish beside them. */
+  readonly caption?: Caption;
+}
+
+/** "Lisbon · greatest 06:59 WET", "Sydney · rises 19:14 AEDT", "Cairo · not seen". */
+export function markLabel(eclipse: LunarEclipse, place: PlaceLabel): string {
+  const clock = civilClock(place.tz);
+  const local = localCircumstances(eclipse, place);
+  const when = (utDays: number) => `${clock.time(utDays)} ${clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(utDays).split(',')[0]!}`;
+  const greatest = local.events.find((e) => e.event === 'greatest')!;
+  const rise = local.events.find((e) => e.event === 'moonrise');
+  const set = local.events.find((e) => e.event === 'moonset');
+  const phrase = greatest.moonUp
+    ? `greatest ${when(greatest.moment.utDays)}`
+    : rise ? `rises ${when(rise.moment.utDays)}`
+      : set ? `sets ${when(set.moment.utDays)}` : 'not seen';
+  return `${place.name} · ${phrase}`;
+}
+
+/** The caption file published beside a picture. */
+export function captionText(caption: Caption): string {
+  return `${caption.caption}\n\nAlt text: ${caption.altText}\n`;
 }
 
 export async function renderMapFile(request: MapRequest): Promise<MapFile> {
@@ -30,13 +59,15 @@ export async function renderMapFile(request: MapRequest): Promise<MapFile> {
   if (request.format === 'geojson') {
     return { bytes: Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`) };
   }
-  const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator });
-  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene };
+  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p) }));
+  const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
+  const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
+  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene, caption };
   const bytes = await rasterise(scene.svg, {
     format: request.format,
     dpi: request.dpi,
     title: scene.title,
-    description: `${scene.subtitle}. ${scene.smallPrint}`,
+    description: `${caption.caption} Alt text: ${caption.altText}`,
   });
-  return { bytes, scene };
+  return { bytes, scene, caption };
 }

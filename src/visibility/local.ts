@@ -115,6 +115,26 @@ export function localCircumstances(eclipse: LunarEclipse, observer: Observer): L
   return { eclipse, observer, events: stages.map((s) => eventAt(s.event, s.moment, observer)) };
 }
 
+/** The Moon's and Sun's altitudes through a span, every `stepMinutes`: the curve of the "view from here" figure. */
+export interface AltitudeSample {
+  readonly moment: Moment;
+  readonly moonAltitudeDeg: number;
+  readonly sunAltitudeDeg: number;
+}
+
+export function altitudeTrack(observer: Observer, from: Moment, to: Moment, stepMinutes = 2): AltitudeSample[] {
+  const steps = Math.max(2, Math.ceil(((to.utDays - from.utDays) * 1440) / stepMinutes));
+  return Array.from({ length: steps + 1 }, (_, i) => {
+    const moment = momentFromUT(from.utDays + ((to.utDays - from.utDays) * i) / steps, from.deltaTSeconds);
+    const time = ephemerisTime(moment.ttDays);
+    return {
+      moment,
+      moonAltitudeDeg: horizontal(moonPositionKm(time), moment, observer).altitudeDeg,
+      sunAltitudeDeg: horizontal(sunPositionKm(time), moment, observer).geometricAltitudeDeg,
+    };
+  });
+}
+
 // ---- plain words -------------------------------------------------------------------------
 
 const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'];

@@ -103,9 +103,10 @@ test('a long title is shortened to fit, not spilled off the page', async () => {
   assert.ok(Math.max(...xs) <= 640, `title reaches x = ${Math.max(...xs)}`);
 });
 
-test('the PNG carries its title and description in XMP', async () => {
+test('the PNG carries its title, caption and alt text in XMP (dc:title, dc:description)', async () => {
   const meta = await sharp((await render()).bytes).metadata();
   const xmp = meta.xmp!.toString('utf8');
-  assert.match(xmp, /Total lunar eclipse · 3 March 2026/);
-  assert.match(xmp, /Danjon convention; ΔT 69\.1 s/);
+  assert.match(xmp, /<dc:title><rdf:Alt><rdf:li xml:lang="x-default">Total lunar eclipse · 3 March 2026</);
+  assert.match(xmp, /<dc:description><rdf:Alt><rdf:li xml:lang="x-default">Total lunar eclipse of 3 March 2026\. Greatest eclipse at 11:34 UTC/);
+  assert.match(xmp, /Alt text: World map of where the total lunar eclipse/);
 });

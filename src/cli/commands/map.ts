@@ -4,13 +4,12 @@ import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
 import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
-import type { LunarEclipse } from '../../eclipse/types.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
 import { THEME_NAMES, THEMES } from '../../map/theme.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
-import { MAP_FORMATS, renderMapFile, type MapFormat } from '../../outputs/mapFile.ts';
+import { captionText, MAP_FORMATS, renderMapFile, type MapFormat } from '../../outputs/mapFile.ts';
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import {
@@ -23,7 +22,7 @@ import {
   WHEN_EXPECTED,
   type PixelSize,
 } from '../options.ts';
-import { chooseEclipse } from '../choose.ts';
+import { chooseEclipse, choosePlace } from '../choose.ts';
 
 export interface MapOptions {
   projection: string;
@@ -42,6 +41,7 @@ export interface MapOptions {
   format?: string;
   convention: string;
   deltaT?: string;
+  mark: string[];
 }
 
 export type SizePreset = 'card' | 'square' | 'print';
@@ -75,6 +75,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`)
     .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
     .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .option('--mark <place>', 'mark a place with its local time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
     .action(async (whenText: string | undefined, options: MapOptions) => {
       // The path written, on stdout, so that scripts can pick it up.
       context.stdout(`${await runMap(whenText, options, context)}\n`);
@@ -92,11 +93,18 @@ function parseView(options: MapOptions): View {
   return { projection };
 }
 
-function parseSizeAndDpi(options: MapOptions): { size: PixelSize; dpi: number } {
+export interface SizeOptions {
+  size?: string;
+  preset?: string;
+  widthMm?: string;
+  dpi?: string;
+}
+
+export function parseSizeAndDpi(options: SizeOptions, defaultSize: PixelSize = DEFAULT_SIZE): { size: PixelSize; dpi: number } {
   const dpiOf = (fallback: number) => (options.dpi === undefined ? fallback : parseNumber('--dpi', options.dpi, { min: 36, max: 1200, unit: 'pixels per inch' }));
   if (options.size !== undefined && options.preset !== undefined) throw new InputError('--size', 'either --size or --preset, not both', options.size);
   if (options.size !== undefined) return { size: parseSize(options.size), dpi: dpiOf(72) };
-  if (options.preset === undefined) return { size: DEFAULT_SIZE, dpi: dpiOf(72) };
+  if (options.preset === undefined) return { size: defaultSize, dpi: dpiOf(72) };
   const preset = parseChoice('--preset', options.preset, SIZE_PRESETS);
   if (preset !== 'print') return { size: PRESET_SIZES[preset], dpi: dpiOf(72) };
   const dpi = dpiOf(300);
@@ -106,25 +114,38 @@ function parseSizeAndDpi(options: MapOptions): { size: PixelSize; dpi: number } 
   return { size: checkPixelSize('--width-mm', size, `${widthMm} mm at ${dpi} dpi = ${size.widthPx}x${size.heightPx} px`), dpi };
 }
 
+const listOr = (items: string[]) => (items.length > 1 ? `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}` : items.join(''));
+
 const EXTENSION_FORMATS: Record<string, MapFormat> = {
   '.png': 'png', '.svg': 'svg', '.webp': 'webp', '.jpg': 'jpg', '.jpeg': 'jpg', '.geojson': 'geojson', '.json': 'geojson',
 };
 
-function parseOutput(options: MapOptions, eclipse: LunarEclipse): { path: string; format: MapFormat } {
-  const format = options.format === undefined ? undefined : parseChoice('--format', options.format, MAP_FORMATS);
+/**
+ * Where a picture goes: --output (its extension picks the format; its folder
+ * must exist), else out/<defaultStem>.<format> in the working folder.
+ */
+export function parseOutput<F extends MapFormat>(options: { output?: string; format?: string }, defaultStem: string, formats: readonly F[]): { path: string; format: F } {
+  const format = options.format === undefined ? undefined : parseChoice('--format', options.format, formats);
   if (options.output === undefined) {
-    const chosen = format ?? 'png';
+    const chosen = format ?? formats[0]!;
     const folder = resolve('out');
     mkdirSync(folder, { recursive: true });
-    return { path: resolve(folder, `${eclipse.id}-${eclipse.kind}.${chosen}`), format: chosen };
+    return { path: resolve(folder, `${defaultStem}.${chosen}`), format: chosen };
   }
   const extension = extname(options.output).toLowerCase();
-  const fromExtension = EXTENSION_FORMATS[extension];
-  if (!fromExtension) throw new InputError('--output', 'a file name ending in .png, .svg, .webp, .jpg or .geojson', options.output);
+  const fromExtension = EXTENSION_FORMATS[extension] as F | undefined;
+  if (!fromExtension || !formats.includes(fromExtension)) {
+    throw new InputError('--output', `a file name ending in ${listOr(formats.map((f) => `.${f}`))}`, options.output);
+  }
   if (format && format !== fromExtension) throw new InputError('--format', `${fromExtension} to match --output ${options.output}`, options.format);
   const path = resolve(options.output);
   checkOutputFolder('--output', path);
   return { path, format: fromExtension };
+}
+
+/** out/2026-03-03-total.png → out/2026-03-03-total.txt */
+export function captionPathFor(path: string): string {
+  return path.slice(0, path.length - extname(path).length) + '.txt';
 }
 
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
@@ -136,8 +157,10 @@ export async function runMap(whenText: string | undefined, options: MapOptions, 
   const clock = civilClock(options.tz.trim(), '--tz');
   const title = options.title;
   if (title !== undefined && title.trim() === '') throw new InputError('--title', 'some text', title);
+  if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
+  const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
   const eclipse = chooseEclipse(whenText, options, context.now());
-  const { path, format } = parseOutput(options, eclipse);
+  const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}`, MAP_FORMATS);
   const file = await renderMapFile({
     eclipse,
     style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) },
@@ -145,7 +168,10 @@ export async function runMap(whenText: string | undefined, options: MapOptions, 
     dpi,
     format,
     generator: `umbracast ${toolVersion()}`,
+    marks,
   });
   await writeFileAtomic(path, file.bytes);
+  // Every picture gets its caption beside it.
+  if (file.caption) await writeFileAtomic(captionPathFor(path), captionText(file.caption));
   return path;
 }

@@ -1,0 +1,39 @@
+/** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
+import type { Command } from 'commander';
+import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
+import { civilClock } from '../../ephemeris/civilTime.ts';
+import { eclipseCaption } from '../../outputs/caption.ts';
+import { captionText } from '../../outputs/mapFile.ts';
+import { visibilityOf } from '../../visibility/visibility.ts';
+import { chooseEclipse, choosePlace } from '../choose.ts';
+import type { CommandContext } from '../context.ts';
+import { WHEN_EXPECTED } from '../options.ts';
+import { localReport } from './local.ts';
+
+interface CaptionOptions {
+  tz: string;
+  place?: string;
+  at?: string;
+  convention: string;
+  deltaT?: string;
+}
+
+export function registerCaption(program: Command, context: CommandContext): void {
+  program
+    .command('caption')
+    .description('a caption and alt text for one eclipse, naming the continents and countries that see it')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
+    .option('--tz <zone>', 'give times in this IANA time zone', 'UTC')
+    .option('--place <name>', 'add what readers in this place will see')
+    .option('--at <LAT,LON>', 'add what is seen from this point')
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .action((whenText: string | undefined, options: CaptionOptions) => {
+      const clock = civilClock(options.tz.trim(), '--tz');
+      // The place's own summary uses the caption's zone, so that one text reads in one time.
+      const chosen = choosePlace({ ...options, tz: options.tz }, false);
+      const eclipse = chooseEclipse(whenText, options, context.now());
+      const extra = chosen ? localReport(eclipse, chosen).summary : undefined;
+      context.stdout(captionText(eclipseCaption(eclipse, visibilityOf(eclipse), clock, extra)));
+    });
+}

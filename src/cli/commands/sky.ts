@@ -1,0 +1,66 @@
+/** `umbracast sky [WHEN] --place NAME`: the view from one place — the Moon's path through the night, the phases, the twilight. */
+import type { Command } from 'commander';
+import { InputError } from '../../errors.ts';
+import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
+import { foldName } from '../../places/gazetteer.ts';
+import { THEME_NAMES, THEMES } from '../../map/theme.ts';
+import { writeFileAtomic } from '../../outputs/files.ts';
+import { renderSkyFile, SKY_FORMATS } from '../../outputs/skyFile.ts';
+import { chooseEclipse, choosePlace } from '../choose.ts';
+import type { CommandContext } from '../context.ts';
+import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { toolVersion } from '../version.ts';
+import { localReport } from './local.ts';
+import { parseOutput, parseSizeAndDpi, type SizeOptions } from './map.ts';
+
+interface SkyOptions extends SizeOptions {
+  place?: string;
+  at?: string;
+  tz?: string;
+  theme: string;
+  title?: string;
+  output?: string;
+  format?: string;
+  convention: string;
+  deltaT?: string;
+}
+
+export function registerSky(program: Command, context: CommandContext): void {
+  program
+    .command('sky')
+    .description('the view from one place: the Moon\'s altitude through the night, the eclipse phases, twilight')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
+    .option('--place <name>', 'a place from the GeoNames gazetteer: "Lisbon", "Springfield, US-IL"')
+    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
+    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)')
+    .option('--theme <name>', THEME_NAMES.join(', '), 'light')
+    .option('--title <text>', 'replace the generated title')
+    .option('--size <WxH>', 'image size in pixels (default 1600x900)')
+    .option('--preset <name>', 'card (1200x675), square (1080x1080) or print (see --width-mm, --dpi)')
+    .option('--width-mm <mm>', 'print width in millimetres (with --preset print)', '180')
+    .option('--dpi <n>', 'pixels per inch to record in the file (default 300 for print, else 72)')
+    .option('-o, --output <file>', 'output file; .png, .svg, .webp or .jpg (default out/<id>-<kind>-sky-<place>.png)')
+    .option('--format <name>', SKY_FORMATS.join(', '))
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .action(async (whenText: string | undefined, options: SkyOptions) => {
+      const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
+      const { size, dpi } = parseSizeAndDpi(options, { widthPx: 1600, heightPx: 900 });
+      if (options.title !== undefined && options.title.trim() === '') throw new InputError('--title', 'some text', options.title);
+      const chosen = choosePlace(options)!;
+      const eclipse = chooseEclipse(whenText, options, context.now());
+      const slug = foldName(chosen.place.name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
+      const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-sky-${slug}`, SKY_FORMATS);
+      const file = await renderSkyFile({
+        report: localReport(eclipse, chosen),
+        theme,
+        size,
+        dpi,
+        format,
+        generator: `umbracast ${toolVersion()}`,
+        ...(options.title !== undefined ? { title: options.title } : {}),
+      });
+      await writeFileAtomic(path, file.bytes);
+      context.stdout(`${path}\n`);
+    });
+}

@@ -1,0 +1,62 @@
+/** Drawing helpers shared by every figure: page units, outlined text, labels with halos, label boxes. */
+import type { Theme } from './theme.ts';
+import { measureText, textOutline, type TextStyle } from './typography.ts';
+
+export interface PageSize {
+  readonly widthPx: number;
+  readonly heightPx: number;
+}
+
+export interface Layout {
+  readonly unit: number;
+  readonly margin: number;
+  readonly titleStyle: TextStyle;
+  readonly subtitleStyle: TextStyle;
+  readonly legendStyle: TextStyle;
+  readonly smallStyle: TextStyle;
+  readonly labelStyle: TextStyle;
+}
+
+export function layoutFor({ widthPx, heightPx }: PageSize): Layout {
+  const unit = Math.sqrt(widthPx * heightPx) / 900;
+  return {
+    unit,
+    margin: 22 * unit,
+    titleStyle: { sizePx: 27 * unit, weight: 'semibold' },
+    subtitleStyle: { sizePx: 13.5 * unit, weight: 'regular' },
+    legendStyle: { sizePx: 11.5 * unit, weight: 'regular' },
+    smallStyle: { sizePx: 9 * unit, weight: 'regular' },
+    labelStyle: { sizePx: 10.5 * unit, weight: 'semibold' },
+  };
+}
+
+/** Two decimals for SVG numbers. */
+export const n2 = (v: number) => (Math.round(v * 100) / 100).toString();
+
+/** One line of outlined text as an SVG path element. */
+export function textElement(text: string, x: number, y: number, style: TextStyle, fill: string, anchor: 'start' | 'middle' | 'end' = 'start'): string {
+  const d = textOutline(text, x, y, style, anchor);
+  return d ? `<path d="${d}" fill="${fill}"/>` : '';
+}
+
+export interface Box {
+  readonly left: number;
+  readonly top: number;
+  readonly right: number;
+  readonly bottom: number;
+}
+
+export const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
+
+/** The box a line of text takes, baseline at y. */
+export function textBox(text: string, x: number, y: number, style: TextStyle, anchor: 'start' | 'middle' | 'end'): Box {
+  const width = measureText(text, style);
+  const left = anchor === 'start' ? x : anchor === 'middle' ? x - width / 2 : x - width;
+  return { left, top: y - style.sizePx * 0.8, right: left + width, bottom: y + style.sizePx * 0.25 };
+}
+
+/** A map label: outlined text over a soft halo. */
+export function labelElement(text: string, x: number, y: number, style: TextStyle, theme: Theme, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): string {
+  const d = textOutline(text, x, y, style, anchor);
+  return `<path d="${d}" fill="${theme.text}" stroke="${theme.halo}" stroke-opacity="${theme.haloOpacity}" stroke-width="${n2(3.2 * unit)}" stroke-linejoin="round" paint-order="stroke"/>`;
+}

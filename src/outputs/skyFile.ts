@@ -1,0 +1,53 @@
+/** One eclipse, one place → the "view from here" figure as PNG, SVG, WebP or JPEG. */
+import type { LunarEclipse } from '../eclipse/types.ts';
+import { momentFromUT } from '../ephemeris/time.ts';
+import type { PageSize } from '../map/draw.ts';
+import { composeSkyScene } from '../map/skyScene.ts';
+import type { Theme } from '../map/theme.ts';
+import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
+import { rasterise, type RasterFormat } from '../raster/raster.ts';
+import { altitudeTrack } from '../visibility/local.ts';
+import type { LocalReport } from './localFormats.ts';
+
+export type SkyFormat = RasterFormat | 'svg';
+export const SKY_FORMATS: readonly SkyFormat[] = ['png', 'svg', 'webp', 'jpg'];
+/** The figure shows an hour either side of the eclipse. */
+const MARGIN_DAYS = 1 / 24;
+
+export interface SkyRequest {
+  readonly report: LocalReport;
+  readonly theme: Theme;
+  readonly size: PageSize;
+  readonly dpi: number;
+  readonly format: SkyFormat;
+  readonly generator: string;
+  readonly title?: string;
+}
+
+export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string }> {
+  const { report } = request;
+  const eclipse: LunarEclipse = report.local.eclipse;
+  const p1 = eclipse.contacts.P1!;
+  const p4 = eclipse.contacts.P4!;
+  const track = altitudeTrack(
+    report.local.observer,
+    momentFromUT(p1.utDays - MARGIN_DAYS, p1.deltaTSeconds),
+    momentFromUT(p4.utDays + MARGIN_DAYS, p4.deltaTSeconds),
+  );
+  const scene = composeSkyScene({
+    eclipse,
+    placeName: report.place.name,
+    clock: report.clock,
+    events: report.local.events,
+    track,
+    summary: report.summary,
+    theme: request.theme,
+    size: request.size,
+    generator: request.generator,
+    credits: report.place.name.includes('°') ? '' : `${GAZETTEER_CREDIT}.`,
+    ...(request.title !== undefined ? { title: request.title } : {}),
+  });
+  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description };
+  const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
+  return { bytes, svg: scene.svg, description: scene.description };
+}

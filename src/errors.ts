@@ -8,8 +8,9 @@ export class InputError extends Error {
   readonly expected: string;
   readonly received: string;
 
-  constructor(parameter: string, expected: string, received: unknown) {
-    const shown = describeReceived(received);
+  /** `received` is quoted and shortened; pass `asIs` when it is already a description. */
+  constructor(parameter: string, expected: string, received: unknown, asIs = false) {
+    const shown = asIs ? String(received) : describeReceived(received);
     super(`${parameter}: expected ${expected}, received ${shown}`);
     this.name = 'InputError';
     this.parameter = parameter;

@@ -3,4 +3,6 @@ export interface CommandContext {
   stdout(text: string): void;
   stderr(text: string): void;
   now(): Date;
+  /** Is stderr a terminal (progress bar) or not (plain lines)? */
+  isTerminal?(): boolean;
 }

@@ -11,11 +11,14 @@ import { registerMap } from './commands/map.ts';
 import { registerLocal } from './commands/local.ts';
 import { registerSky } from './commands/sky.ts';
 import { registerCaption } from './commands/caption.ts';
+import { BatchInterrupted, registerBatch } from './commands/batch.ts';
 import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
 export const EXIT_FAILURE = 1;
 export const EXIT_USAGE = 2;
+/** 128 + SIGINT, as shells report an interrupted command. */
+export const EXIT_INTERRUPTED = 130;
 
 export { toolVersion };
 
@@ -37,6 +40,7 @@ function buildProgram(context: CommandContext): Command {
   registerLocal(program, context);
   registerSky(program, context);
   registerCaption(program, context);
+  registerBatch(program, context);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({ writeOut: (t) => context.stdout(t), writeErr: () => undefined, outputError: () => undefined });
   }
@@ -47,6 +51,7 @@ const defaultContext: CommandContext = {
   stdout: (text) => process.stdout.write(text),
   stderr: (text) => process.stderr.write(text),
   now: () => new Date(),
+  isTerminal: () => Boolean(process.stderr.isTTY),
 };
 
 /** Run the CLI with arguments (without node and script); resolves to the exit code. */
@@ -68,6 +73,10 @@ export async function main(args: readonly string[], context: CommandContext = de
     if (error instanceof InputError) {
       context.stderr(`umbracast: ${error.message}\n`);
       return EXIT_USAGE;
+    }
+    if (error instanceof BatchInterrupted) {
+      context.stderr(`umbracast: ${error.message}\n`);
+      return EXIT_INTERRUPTED;
     }
     const message = error instanceof Error ? error.message : String(error);
     context.stderr(`umbracast: failed: ${message.split('\n')[0]}\n`);

@@ -11,6 +11,9 @@ import { THEME_NAMES, THEMES } from '../../map/theme.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
 import { captionText, MAP_FORMATS, renderMapFile, type MapFormat } from '../../outputs/mapFile.ts';
 import type { CommandContext } from '../context.ts';
+import type { MapStyle } from '../../map/scene.ts';
+import type { PlaceLabel } from '../../outputs/localFormats.ts';
+import { loadStyle, type HouseStyle } from '../../batch/style.ts';
 import { toolVersion } from '../version.ts';
 import {
   checkPixelSize,
@@ -42,6 +45,7 @@ export interface MapOptions {
   convention: string;
   deltaT?: string;
   mark: string[];
+  style?: string;
 }
 
 export type SizePreset = 'card' | 'square' | 'print';
@@ -76,7 +80,16 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
     .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
     .option('--mark <place>', 'mark a place with its local time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
-    .action(async (whenText: string | undefined, options: MapOptions) => {
+    .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
+    .action(async (whenText: string | undefined, options: MapOptions, command: Command) => {
+      if (options.style !== undefined) {
+        const fromStyle = optionsFromStyle(loadStyle(options.style)) as Record<string, unknown>;
+        const given = options as unknown as Record<string, unknown>;
+        for (const [key, value] of Object.entries(fromStyle)) {
+          const source = command.getOptionValueSource(key);
+          if (source === undefined || source === 'default') given[key] = value;
+        }
+      }
       // The path written, on stdout, so that scripts can pick it up.
       context.stdout(`${await runMap(whenText, options, context)}\n`);
     });
@@ -148,8 +161,15 @@ export function captionPathFor(path: string): string {
   return path.slice(0, path.length - extname(path).length) + '.txt';
 }
 
-/** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
-export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
+/** Everything a map needs besides the eclipse, parsed and checked (shared by map and batch). */
+export interface MapSettings {
+  readonly style: MapStyle;
+  readonly size: PixelSize;
+  readonly dpi: number;
+  readonly marks: readonly PlaceLabel[];
+}
+
+export function mapSettings(options: MapOptions): MapSettings {
   const view = parseView(options);
   const { size, dpi } = parseSizeAndDpi(options);
   const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
@@ -159,17 +179,35 @@ export async function runMap(whenText: string | undefined, options: MapOptions, 
   if (title !== undefined && title.trim() === '') throw new InputError('--title', 'some text', title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
+  return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+}
+
+/** A house style as map options, for whatever the command line leaves unset. */
+export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
+  return {
+    theme: style.theme,
+    projection: style.bbox || style.centre ? 'region' : style.projection,
+    ...(style.bbox ? { bbox: style.bbox.join(',') } : {}),
+    ...(style.centre ? { centre: style.centre.join(','), span: String(style.span ?? 60) } : {}),
+    ...(style.size ? { size: style.size } : {}),
+    ...(style.preset ? { preset: style.preset } : {}),
+    ...(style.widthMm !== undefined ? { widthMm: String(style.widthMm) } : {}),
+    ...(style.dpi !== undefined ? { dpi: String(style.dpi) } : {}),
+    tz: style.tz,
+    borders: style.borders,
+    ...(style.title !== undefined ? { title: style.title } : {}),
+    mark: style.marks,
+    convention: style.convention,
+    ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
+  };
+}
+
+/** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
+export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
+  const settings = mapSettings(options);
   const eclipse = chooseEclipse(whenText, options, context.now());
   const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}`, MAP_FORMATS);
-  const file = await renderMapFile({
-    eclipse,
-    style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) },
-    size,
-    dpi,
-    format,
-    generator: `umbracast ${toolVersion()}`,
-    marks,
-  });
+  const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });
   await writeFileAtomic(path, file.bytes);
   // Every picture gets its caption beside it.
   if (file.caption) await writeFileAtomic(captionPathFor(path), captionText(file.caption));

@@ -1,0 +1,80 @@
+/**
+ * index.html: a contact sheet of a batch that works offline from its folder —
+ * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
+ * remote fonts or styles; relative links only.
+ */
+import { escapeXml } from '../map/typography.ts';
+import type { Manifest } from './manifest.ts';
+
+const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
+
+const hm = (seconds: number) => {
+  const minutes = Math.round(seconds / 60);
+  return minutes >= 60 ? `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min` : `${minutes} min`;
+};
+
+/** A relative URL for a file path: each segment percent-encoded. */
+const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
+
+export function contactSheet(manifest: Manifest, title: string): string {
+  const cards = manifest.eclipses.map((entry) => {
+    const r = entry.record;
+    const thumb = entry.files.find((f) => f.role === 'thumbnail');
+    const greatestMinute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' ');
+    const facts = [
+      `Greatest ${greatestMinute} UTC`,
+      r.kind === 'penumbral' ? `penumbral magnitude ${r.penumbralMagnitude.toFixed(3)}` : `umbral magnitude ${r.umbralMagnitude.toFixed(3)}`,
+      ...(r.durations.total !== undefined ? [`totality ${hm(r.durations.total)}`] : []),
+      ...(r.durations.partial !== undefined ? [`in the umbra ${hm(r.durations.partial)}`] : [`penumbral phase ${hm(r.durations.penumbral)}`]),
+      `saros ${r.saros}`,
+    ];
+    const links = entry.files
+      .filter((f) => f.role !== 'thumbnail')
+      .map((f) => `<li><a href="${escapeXml(href(f.path))}">${escapeXml(f.path.split('/').pop()!)}</a> <span>${ROLE_WORDS[f.role] ?? f.role}, ${(f.bytes / 1024).toFixed(0)} KiB</span></li>`)
+      .join('\n        ');
+    const image = thumb
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${r.id}`)}" width="480" height="270" loading="lazy"></a>`
+      : '';
+    return `    <article class="${escapeXml(r.kind)}">
+      ${image}
+      <h2>${escapeXml(r.id)} <small>${escapeXml(r.kind)}</small></h2>
+      <p>${facts.map(escapeXml).join(' · ')}</p>
+      <ul>
+        ${links}
+      </ul>
+    </article>`;
+  });
+  return `<!doctype html>
+<html lang="en">
+<head>
+<meta charset="utf-8">
+<meta name="viewport" content="width=device-width, initial-scale=1">
+<title>${escapeXml(title)}</title>
+<style>
+  :root { color-scheme: light; --ink: #161a26; --muted: #4b5263; --paper: #faf8f3; --rule: #d8d4ca; }
+  body { margin: 0; padding: 2rem; background: var(--paper); color: var(--ink); font: 15px/1.45 system-ui, sans-serif; }
+  header { margin-bottom: 1.5rem; }
+  h1 { margin: 0 0 .25rem; font-size: 1.6rem; }
+  header p { margin: 0; color: var(--muted); }
+  main { display: grid; grid-template-columns: repeat(auto-fill, minmax(300px, 1fr)); gap: 1.25rem; }
+  article { background: #fff; border: 1px solid var(--rule); border-radius: 6px; padding: .75rem; }
+  article.total { border-top: 4px solid #27366b; } article.partial { border-top: 4px solid #6d78b0; } article.penumbral { border-top: 4px solid #a9c4d6; }
+  img { width: 100%; height: auto; display: block; border-radius: 3px; }
+  h2 { font-size: 1.05rem; margin: .6rem 0 .2rem; } h2 small { font-weight: normal; color: var(--muted); }
+  p { margin: 0 0 .4rem; } ul { margin: 0; padding-left: 1.1rem; } li span { color: var(--muted); font-size: .85em; }
+  footer { margin-top: 2rem; color: var(--muted); font-size: .85em; }
+</style>
+</head>
+<body>
+<header>
+  <h1>${escapeXml(title)}</h1>
+  <p>${manifest.eclipses.length} eclipses · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
+</header>
+<main>
+${cards.join('\n')}
+</main>
+<footer>Predictions: weather and the local horizon decide what is seen. Basemap: Natural Earth via world-atlas (public domain). Places: GeoNames (CC BY 4.0). See manifest.json and catalogue.csv.</footer>
+</body>
+</html>
+`;
+}

@@ -1,0 +1,134 @@
+/**
+ * House style files (JSON or YAML): how a publication wants its maps. One
+ * schema (zod) for `umbracast batch --style` and `umbracast map --style`; an
+ * error names the file, the field and what was expected.
+ */
+import { createHash } from 'node:crypto';
+import { readFileSync, statSync } from 'node:fs';
+import { extname } from 'node:path';
+import { parse as parseYaml } from 'yaml';
+import { z } from 'zod';
+import { InputError, describeReceived } from '../errors.ts';
+import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
+import { isKnownTimeZone } from '../ephemeris/civilTime.ts';
+import { BORDER_STYLES } from '../map/basemap.ts';
+import { PROJECTION_NAMES } from '../map/projection.ts';
+import { THEME_NAMES } from '../map/theme.ts';
+import { LOCAL_FORMATS } from '../outputs/localFormats.ts';
+import { MAP_FORMATS } from '../outputs/mapFile.ts';
+
+/** Placeholders a naming template may use. */
+export const NAMING_FIELDS = ['id', 'kind', 'year', 'saros'] as const;
+export const DEFAULT_NAMING = '{id}-{kind}';
+/** Style files larger than this are refused: a style is a page of settings. */
+export const MAX_STYLE_BYTES = 256 * 1024;
+
+const enumOf = <T extends string>(values: readonly T[]) => z.enum(values as [T, ...T[]]);
+
+/** A file-name stem: letters, digits, dot, dash, underscore and {placeholders}; no folders, no leading dot. */
+const namingTemplate = z
+  .string()
+  .min(1)
+  .max(120)
+  .regex(/^[A-Za-z0-9{][A-Za-z0-9._{}-]*$/, 'a file-name template of letters, digits, . _ - and {id} {kind} {year} {saros}, with no folders')
+  .refine((t) => !t.includes('..'), 'a template without ".."')
+  .refine((t) => [...t.matchAll(/\{([^}]*)\}/g)].every((m) => (NAMING_FIELDS as readonly string[]).includes(m[1]!)), `placeholders among {${NAMING_FIELDS.join('}, {')}}`)
+  .refine((t) => t.includes('{id}'), 'a template containing {id}, so that every eclipse gets its own files');
+
+const styleObject = z
+  .object({
+    theme: enumOf(THEME_NAMES).default('light'),
+    projection: enumOf(PROJECTION_NAMES).default('equal-earth'),
+    bbox: z.tuple([z.number().min(-180).max(180), z.number().min(-90).max(90), z.number().min(-180).max(180), z.number().min(-90).max(90)]).optional(),
+    centre: z.tuple([z.number().min(-90).max(90), z.number().min(-180).max(180)]).optional(),
+    span: z.number().min(2).max(180).optional(),
+    size: z.string().regex(/^\d{3,5}x\d{3,5}$/, 'WxH in pixels, e.g. 2400x1350').optional(),
+    preset: z.enum(['card', 'square', 'print']).optional(),
+    widthMm: z.number().min(20).max(2000).optional(),
+    dpi: z.number().min(36).max(1200).optional(),
+    tz: z.string().refine(isKnownTimeZone, 'an IANA time zone such as Europe/Lisbon, or UTC').default('UTC'),
+    borders: enumOf(BORDER_STYLES).default('countries'),
+    title: z.string().min(1).max(300).optional(),
+    marks: z.array(z.string().min(1).max(200)).max(20).default([]),
+    places: z.array(z.string().min(1).max(200)).max(20).default([]),
+    formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
+    localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),
+    sky: z.boolean().default(true),
+    naming: namingTemplate.default(DEFAULT_NAMING),
+    convention: enumOf(SHADOW_CONVENTIONS).default('danjon'),
+    deltaT: z.number().min(-86_400).max(86_400).optional(),
+  })
+  .strict();
+
+export const houseStyleSchema = styleObject
+  .refine((s) => !(s.size && s.preset), { message: 'either size or preset, not both', path: ['size'] })
+  .refine((s) => !(s.bbox && s.centre), { message: 'either bbox or centre, not both', path: ['bbox'] });
+
+export type HouseStyle = z.infer<typeof houseStyleSchema>;
+
+export const DEFAULT_STYLE: HouseStyle = houseStyleSchema.parse({});
+
+/** Turn the first schema problem into our one-line error: file, field, expected, received. */
+function styleError(file: string, issue: z.core.$ZodIssue, input: unknown): InputError {
+  const path = issue.path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${String(p)}`)).join('').replace(/^\./, '');
+  let received: unknown = input;
+  for (const key of issue.path) received = received && typeof received === 'object' ? (received as Record<PropertyKey, unknown>)[key as PropertyKey] : undefined;
+  if (issue.code === 'unrecognized_keys') {
+    const keys = (issue as unknown as { keys: string[] }).keys;
+    const where = path ? `${path}.${keys[0]}` : keys[0]!;
+    return new InputError(`${file}: ${where}`, `a known style field (${Object.keys(styleObject.shape).join(', ')})`, 'a field of that name', true);
+  }
+  const expected = issue.code === 'invalid_value' && 'values' in issue
+    ? `one of ${(issue.values as unknown[]).join(', ')}`
+    : issue.code === 'invalid_type' ? `${(issue as unknown as { expected: string }).expected}` : issue.message.replace(/^Invalid input: /, '');
+  return new InputError(`${file}: ${path || '(top level)'}`, expected, received);
+}
+
+/** Validate parsed style data. */
+export function validateStyle(data: unknown, file = 'style'): HouseStyle {
+  const result = houseStyleSchema.safeParse(data ?? {});
+  if (!result.success) throw styleError(file, result.error.issues[0]!, data);
+  return result.data;
+}
+
+/** Read a style file: .json, .yaml or .yml. */
+export function loadStyle(path: string): HouseStyle {
+  const extension = extname(path).toLowerCase();
+  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('--style', 'a .json, .yaml or .yml file', path);
+  let text: string;
+  try {
+    if (statSync(path).size > MAX_STYLE_BYTES) throw new InputError('--style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
+    text = readFileSync(path, 'utf8');
+  } catch (error) {
+    if (error instanceof InputError) throw error;
+    throw new InputError('--style', 'a readable style file', path);
+  }
+  let data: unknown;
+  try {
+    data = extension === '.json' ? JSON.parse(text) : parseYaml(text, { maxAliasCount: 100 });
+  } catch (error) {
+    const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
+    throw new InputError(`${path}`, `valid ${extension === '.json' ? 'JSON' : 'YAML'}`, `a file that does not parse (${describeReceived(reason).slice(1, -1)})`, true);
+  }
+  if (data !== null && data !== undefined && (typeof data !== 'object' || Array.isArray(data))) {
+    throw new InputError(`${path}: (top level)`, 'a mapping of style fields', JSON.stringify(data));
+  }
+  return validateStyle(data, path);
+}
+
+/** A stable hash of a style's effective settings (key order does not matter). */
+export function styleHash(style: HouseStyle): string {
+  const sorted = JSON.stringify(style, Object.keys(style).sort());
+  return createHash('sha256').update(sorted).digest('hex').slice(0, 16);
+}
+
+/** Fill a naming template for one eclipse. */
+export function fileStem(template: string, eclipse: { id: string; kind: string; saros: number }): string {
+  const values: Record<(typeof NAMING_FIELDS)[number], string> = {
+    id: eclipse.id,
+    kind: eclipse.kind,
+    year: eclipse.id.slice(0, 4),
+    saros: String(eclipse.saros),
+  };
+  return template.replace(/\{(id|kind|year|saros)\}/g, (_, key: (typeof NAMING_FIELDS)[number]) => values[key]);
+}

@@ -1,0 +1,93 @@
+/**
+ * One eclipse of a batch, in a worker thread: every file the house style asks
+ * for, each written atomically; returns what it wrote, with sizes and hashes.
+ */
+import { createHash } from 'node:crypto';
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import sharp from 'sharp';
+import type { LunarEclipse } from '../eclipse/types.ts';
+import { foldName } from '../places/gazetteer.ts';
+import { THEMES } from '../map/theme.ts';
+import { writeFileAtomic } from '../outputs/files.ts';
+import { localCsv, localIcs, localJson, localMarkdown, localTable, type LocalFormat } from '../outputs/localFormats.ts';
+import { captionText, renderMapFile } from '../outputs/mapFile.ts';
+import { renderSkyFile } from '../outputs/skyFile.ts';
+import { choosePlace } from '../cli/choose.ts';
+import { localReport } from '../cli/commands/local.ts';
+import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/commands/map.ts';
+import { fileStem, type HouseStyle } from './style.ts';
+
+export interface TaskInput {
+  readonly eclipse: LunarEclipse;
+  readonly style: HouseStyle;
+  readonly outDir: string;
+  readonly generator: string;
+}
+
+export type FileRole = 'map' | 'caption' | 'thumbnail' | 'local' | 'sky';
+
+export interface WrittenFile {
+  readonly path: string;
+  readonly role: FileRole;
+  readonly bytes: number;
+  readonly sha256: string;
+}
+
+export const THUMBNAIL_WIDTH_PX = 480;
+const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
+
+export function sha256(bytes: Uint8Array | string): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
+
+export function placeSlug(name: string): string {
+  return foldName(name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
+}
+
+export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
+  const { eclipse, style, outDir, generator } = input;
+  const stem = fileStem(style.naming, eclipse);
+  const settings = mapSettings(optionsFromStyle(style) as MapOptions);
+  const written: WrittenFile[] = [];
+  const write = async (relative: string, role: FileRole, data: Uint8Array | string) => {
+    const bytes = typeof data === 'string' ? Buffer.from(data) : data;
+    await writeFileAtomic(join(outDir, relative), bytes);
+    written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
+  };
+
+  let caption: string | undefined;
+  let thumbnailSource: Uint8Array | undefined;
+  for (const format of style.formats) {
+    const file = await renderMapFile({ eclipse, ...settings, format, generator });
+    await write(`${stem}.${format}`, 'map', file.bytes);
+    if (file.caption) caption ??= captionText(file.caption);
+    if (format === 'png' || format === 'webp' || format === 'jpg') thumbnailSource ??= file.bytes;
+  }
+  if (!thumbnailSource) {
+    const small = await renderMapFile({ eclipse, ...settings, size: { widthPx: 960, heightPx: 540 }, format: 'png', generator });
+    thumbnailSource = small.bytes;
+    caption ??= small.caption ? captionText(small.caption) : undefined;
+  }
+  if (caption) await write(`${stem}.txt`, 'caption', caption);
+  mkdirSync(join(outDir, 'thumbs'), { recursive: true });
+  const thumbnail = await sharp(thumbnailSource).resize({ width: THUMBNAIL_WIDTH_PX }).png({ compressionLevel: 9 }).toBuffer();
+  await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail);
+
+  for (const name of style.places) {
+    const chosen = choosePlace({ place: name })!;
+    const report = localReport(eclipse, chosen);
+    const slug = placeSlug(chosen.place.name);
+    for (const format of style.localFormats) {
+      const text = { table: localTable, markdown: localMarkdown, csv: localCsv, json: localJson, ics: (r: typeof report) => localIcs(r, generator) }[format](report);
+      await write(`${stem}-${slug}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
+    }
+    if (style.sky) {
+      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: { widthPx: 1600, heightPx: 900 }, dpi: settings.dpi, format: 'png', generator });
+      await write(`${stem}-${slug}-sky.png`, 'sky', sky.bytes);
+    }
+  }
+  return written;
+}
+
+export default renderEclipse;

@@ -1,0 +1,140 @@
+/** `umbracast batch`: a range of eclipses in a house style, in parallel, resumable; or --merge shard manifests. */
+import { existsSync, readdirSync, statSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { dirname, join, resolve } from 'node:path';
+import cliProgress from 'cli-progress';
+import type { Command } from 'commander';
+import { InputError } from '../../errors.ts';
+import { ECLIPSE_KINDS } from '../../eclipse/types.ts';
+import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
+import { mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
+import { DEFAULT_STYLE, loadStyle } from '../../batch/style.ts';
+import type { CommandContext } from '../context.ts';
+import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
+import { toolVersion } from '../version.ts';
+
+interface BatchCommandOptions {
+  from?: string;
+  to?: string;
+  kind?: string;
+  style?: string;
+  out: string;
+  jobs?: string;
+  force?: boolean;
+  shard?: string;
+  merge?: string[];
+}
+
+export function parseShard(text: string): Shard {
+  const match = /^\s*(\d{1,4})\s*\/\s*(\d{1,4})\s*$/.exec(text);
+  const index = Number(match?.[1]);
+  const count = Number(match?.[2]);
+  if (!match || count < 1 || index < 1 || index > count) throw new InputError('--shard', 'I/N with 1 ≤ I ≤ N ≤ 9999, e.g. 2/3', text);
+  return { index, count };
+}
+
+export const MAX_JOBS = 64;
+
+export function registerBatch(program: Command, context: CommandContext): void {
+  program
+    .command('batch')
+    .description('render every eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable')
+    .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
+    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
+    .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
+    .option('--style <file>', 'house style, JSON or YAML (see README)')
+    .option('--out <dir>', 'output folder (made if its parent exists)', 'out')
+    .option('--jobs <n>', 'worker threads (default: the number of cores)')
+    .option('--force', 'redo everything, even what is up to date')
+    .option('--shard <I/N>', 'render only the I-th of N disjoint parts of the range')
+    .option('--merge <dirs...>', 'combine the shard manifests found in these folders into --out/manifest.json')
+    .action(async (options: BatchCommandOptions) => {
+      const outDir = resolve(options.out);
+      if (!existsSync(dirname(outDir)) || (existsSync(outDir) && !statSync(outDir).isDirectory())) {
+        throw new InputError('--out', 'a folder, or a new folder inside an existing one', options.out);
+      }
+      if (options.merge) {
+        const manifests = options.merge.flatMap((dir) => {
+          const folder = resolve(dir);
+          if (!existsSync(folder)) throw new InputError('--merge', 'folders that exist', dir);
+          if (statSync(folder).isFile()) return [readManifestOrFail(folder)];
+          const files = readdirSync(folder).filter((n) => /^manifest(\.shard-\d+-of-\d+)?\.json$/.test(n) && n !== MANIFEST_NAME);
+          return files.map((n) => readManifestOrFail(join(folder, n)));
+        });
+        const merged = await mergeManifests(outDir, manifests, `umbracast ${toolVersion()}`);
+        context.stdout(`umbracast batch: merged ${manifests.length} manifests, ${merged.eclipses.length} eclipses → ${join(outDir, MANIFEST_NAME)}\n`);
+        return;
+      }
+      const range = parseRange(options.from, options.to, context.now());
+      const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
+      const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
+      const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker threads' });
+      if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker threads from 1 to ${MAX_JOBS}`, options.jobs);
+      const shard = options.shard === undefined ? null : parseShard(options.shard);
+      const progress = progressReporter(context);
+      const controller = new AbortController();
+      const onSignal = () => controller.abort();
+      process.once('SIGINT', onSignal);
+      process.once('SIGTERM', onSignal);
+      try {
+        const summary = await runBatch({ ...range, kinds, style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
+        progress.stop();
+        const size = `${(summary.bytes / 1e6).toFixed(1)} MB`;
+        context.stdout(`umbracast batch: ${summary.planned} eclipses — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${summary.files} files, ${size}, ${summary.seconds.toFixed(1)} s → ${outDir}\n`);
+        if (summary.interrupted) throw new BatchInterrupted();
+        if (summary.failed.length > 0) {
+          throw new Error(`${summary.failed.length} eclipse(s) failed: ${summary.failed.map((f) => `${f.id} (${f.message})`).join('; ')}; rerun to finish them`);
+        }
+      } finally {
+        progress.stop();
+        process.off('SIGINT', onSignal);
+        process.off('SIGTERM', onSignal);
+      }
+    });
+}
+
+/** Interrupted by Ctrl-C or SIGTERM: what finished is on disk and in the manifest. */
+export class BatchInterrupted extends Error {
+  constructor() {
+    super('interrupted: finished eclipses are kept and listed in the manifest; rerun to finish the rest');
+  }
+}
+
+/** A progress bar on a terminal; one plain line per eclipse otherwise. */
+function progressReporter(context: CommandContext): { report: (event: ProgressEvent) => void; stop: () => void } {
+  const tty = context.isTerminal?.() ?? false;
+  let bar: cliProgress.SingleBar | undefined;
+  let done = 0;
+  let total = 0;
+  return {
+    report(event) {
+      switch (event.type) {
+        case 'planned':
+          total = event.total;
+          done = event.upToDate;
+          if (tty) {
+            bar = new cliProgress.SingleBar({ format: 'umbracast batch {bar} {value}/{total} eclipses | {current} | {eta_formatted} left', stream: process.stderr, hideCursor: true }, cliProgress.Presets.shades_classic);
+            bar.start(total, done, { current: 'starting' });
+          } else {
+            context.stderr(`umbracast batch: ${total} eclipses, ${event.upToDate} already up to date\n`);
+          }
+          break;
+        case 'done':
+        case 'failed':
+          done++;
+          if (bar) bar.update(done, { current: `${event.id} ${event.kind}` });
+          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${event.message}`}\n`);
+          break;
+        case 'notice':
+          if (!bar) context.stderr(`umbracast batch: ${event.message}\n`);
+          break;
+        default:
+          break;
+      }
+    },
+    stop() {
+      bar?.stop();
+      bar = undefined;
+    },
+  };
+}

@@ -3,7 +3,7 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only.
  */
-import { escapeXml } from '../map/typography.ts';
+import { escapeXml } from '../map/xml.ts';
 import type { Manifest } from './manifest.ts';
 
 const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };

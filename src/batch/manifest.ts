@@ -10,7 +10,7 @@ import { z } from 'zod';
 import { InputError } from '../errors.ts';
 import { writeFileAtomic } from '../outputs/files.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
-import { sha256, type WrittenFile } from './task.ts';
+import { sha256, type WrittenFile } from './written.ts';
 
 export const MANIFEST_SCHEMA = 'umbracast.manifest/1';
 export const MANIFEST_NAME = 'manifest.json';

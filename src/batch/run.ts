@@ -1,14 +1,17 @@
 /**
  * A batch: every eclipse of a range, in every format of a house style,
- * rendered by a pool of worker threads (piscina). Resumable and idempotent:
+ * rendered by a pool of worker processes. Resumable and idempotent:
  * an eclipse whose key (record, style, tool version) and files match the
  * manifest is skipped. Files are written atomically and the manifest after
  * each finished eclipse, so an interrupted run leaves only whole files and a
  * manifest that lists them.
+ *
+ * Workers are processes (workerpool), not threads: libvips loads one SVG at a
+ * time per process, so threads would wait on each other where processes do not.
  */
 import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, rmSync, unlinkSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
-import { Piscina } from 'piscina';
+import workerpool from 'workerpool';
 import { InputError } from '../errors.ts';
 import { findLunarEclipses } from '../eclipse/catalogue.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
@@ -19,7 +22,7 @@ import { writeFileAtomic } from '../outputs/files.ts';
 import { contactSheet } from './contactSheet.ts';
 import { filesIntact, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
-import { sha256, type TaskInput, type WrittenFile } from './task.ts';
+import { sha256, type TaskInput, type WrittenFile } from './written.ts';
 
 export interface Shard {
   readonly index: number;
@@ -70,6 +73,8 @@ export function entryKey(record: EclipseRecord, hash: string, tool: string): str
 }
 
 export const LOCK_NAME = '.umbracast.lock';
+/** Heap ceiling of each worker process, MB. */
+export const WORKER_HEAP_MB = 192;
 
 /** One batch per output folder: a lock file made with O_EXCL; a lock whose process is gone is taken over. */
 export function acquireLock(outDir: string): () => void {
@@ -186,16 +191,19 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     let rendered = 0;
     let interrupted = false;
     if (todo.length > 0) {
-      const pool = new Piscina<TaskInput, WrittenFile[]>({
-        filename: new URL('./worker.mjs', import.meta.url).href,
-        minThreads: Math.min(options.jobs, todo.length),
-        maxThreads: Math.min(options.jobs, todo.length),
-        idleTimeout: 1000,
+      const workers = Math.min(options.jobs, todo.length);
+      const pool = workerpool.pool(new URL('./worker.mjs', import.meta.url).pathname, {
+        workerType: 'process',
+        maxWorkers: workers,
+        minWorkers: workers,
+        // A modest heap makes each worker collect its large SVG strings early; one malloc arena keeps
+        // glibc from holding a pool of freed native memory per libvips thread.
+        forkOpts: { execArgv: [`--max-old-space-size=${WORKER_HEAP_MB}`], env: { ...process.env, MALLOC_ARENA_MAX: '1' }, stdio: 'inherit' },
+        workerTerminateTimeout: 2000,
       });
-      const abort = new AbortController();
       const onAbort = () => {
         interrupted = true;
-        abort.abort();
+        void pool.terminate(true);
       };
       options.signal?.addEventListener('abort', onAbort, { once: true });
       try {
@@ -203,7 +211,8 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
           todo.map(async ({ eclipse, record, key }) => {
             const t0 = performance.now();
             try {
-              const files = await pool.run({ eclipse, style, outDir, generator: options.tool }, { signal: abort.signal, name: 'default' });
+              const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
+              const files = (await pool.exec('renderEclipse', [input])) as WrittenFile[];
               if (interrupted) return;
               const entry: ManifestEntry = { id: eclipse.id, kind: eclipse.kind, key, record, files };
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
@@ -220,7 +229,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
         );
       } finally {
         options.signal?.removeEventListener('abort', onAbort);
-        await pool.destroy();
+        await pool.terminate(interrupted);
       }
     }
     if (interrupted) removeLeftovers(outDir);

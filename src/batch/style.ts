@@ -14,8 +14,7 @@ import { isKnownTimeZone } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
-import { LOCAL_FORMATS } from '../outputs/localFormats.ts';
-import { MAP_FORMATS } from '../outputs/mapFile.ts';
+import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
 
 /** Placeholders a naming template may use. */
 export const NAMING_FIELDS = ['id', 'kind', 'year', 'saros'] as const;

@@ -2,11 +2,9 @@
  * One eclipse of a batch, in a worker thread: every file the house style asks
  * for, each written atomically; returns what it wrote, with sizes and hashes.
  */
-import { createHash } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import type { LunarEclipse } from '../eclipse/types.ts';
 import { foldName } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
 import { writeFileAtomic } from '../outputs/files.ts';
@@ -16,30 +14,15 @@ import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../cli/choose.ts';
 import { localReport } from '../cli/commands/local.ts';
 import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/commands/map.ts';
-import { fileStem, type HouseStyle } from './style.ts';
-
-export interface TaskInput {
-  readonly eclipse: LunarEclipse;
-  readonly style: HouseStyle;
-  readonly outDir: string;
-  readonly generator: string;
-}
-
-export type FileRole = 'map' | 'caption' | 'thumbnail' | 'local' | 'sky';
-
-export interface WrittenFile {
-  readonly path: string;
-  readonly role: FileRole;
-  readonly bytes: number;
-  readonly sha256: string;
-}
+import { fileStem } from './style.ts';
+import { sha256, type FileRole, type TaskInput, type WrittenFile } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
-const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
 
-export function sha256(bytes: Uint8Array | string): string {
-  return createHash('sha256').update(bytes).digest('hex');
-}
+// A worker renders one picture at a time: no operation cache to hold old images, one libvips thread.
+sharp.cache(false);
+sharp.concurrency(1);
+const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
 
 export function placeSlug(name: string): string {
   return foldName(name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';

@@ -25,10 +25,15 @@ export interface Basemap {
 const require = createRequire(import.meta.url);
 const cache = new Map<BasemapDetail, Basemap>();
 
-/** Natural Earth detail for a scale: 1:110m up to 10 px/°, 1:50m up to 40 px/°, then 1:10m. */
+/**
+ * Natural Earth detail for a scale. 1:110m drops the small islands that
+ * eclipse zones cross (much of the Pacific) and shows its corners by about
+ * 4 px/° (a world map some 1500 px wide); 1:50m holds up to about 20 px/°;
+ * beyond that, regional views take 1:10m.
+ */
 export function detailForScale(pixelsPerDegree: number): BasemapDetail {
-  if (pixelsPerDegree <= 10) return '110m';
-  if (pixelsPerDegree <= 40) return '50m';
+  if (pixelsPerDegree <= 4) return '110m';
+  if (pixelsPerDegree <= 20) return '50m';
   return '10m';
 }
 

@@ -5,7 +5,7 @@
  * graticule, the field's lines, the Moon-up edges, the sub-lunar point,
  * labels; then title, legend and small print around the map.
  */
-import { geoCircle, geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
+import { geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
 import type { LineString, MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
@@ -139,22 +139,29 @@ function markElements(marks: readonly MapMark[], projection: GeoProjection, fram
 }
 
 
-function capPolygon(s: Stage): GeoPermissibleObjects {
-  return geoCircle().center([s.cap.centre[0], s.cap.centre[1]]).radius(s.cap.radiusDeg).precision(0.5)();
-}
-
 /**
- * Where two Moon-up caps overlap, as one spherical polygon: the arc of each
- * circle inside the other, each in its own direction. Drawing it directly
- * costs far less to rasterise than a clip path.
+ * The zones a start cap S and an end cap E make, as disjoint spherical
+ * polygons built from arcs of the two circles, each ring clockwise around
+ * what it encloses (d3-geo's rule): both caps (sees all), S only (sets
+ * during), E only (rises during). Painting them once each over the
+ * nothing-seen background costs less than stacking caps or clipping.
  */
-export function capOverlap(a: Stage, b: Stage): GeoPermissibleObjects {
+export function zonePolygons(start: Stage, end: Stage): Record<'sees-all' | 'sets-during' | 'rises-during', GeoPermissibleObjects> {
   const inside = (s: Stage) => (p: Position) => angularDistanceDeg(s.cap.centre, p) < s.cap.radiusDeg;
-  // circleRing runs clockwise around its centre, as d3-geo wants a ring around what it encloses.
-  const ringOf = (s: Stage) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.1);
-  const ring = [...runWhere(ringOf(a), inside(b)), ...runWhere(ringOf(b), inside(a))];
-  if (ring.length < 3) return { type: 'Polygon', coordinates: [] };
-  return { type: 'Polygon', coordinates: [[...ring, ring[0]!]] };
+  // circleRing runs clockwise around its centre.
+  const ringOf = (s: Stage) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.25);
+  const sRing = ringOf(start);
+  const eRing = ringOf(end);
+  const sInE = runWhere(sRing, inside(end));
+  const eInS = runWhere(eRing, inside(start));
+  const sOutE = runWhere(sRing, (p) => !inside(end)(p));
+  const eOutS = runWhere(eRing, (p) => !inside(start)(p));
+  const polygon = (ring: Position[]): GeoPermissibleObjects => (ring.length < 3 ? { type: 'Polygon', coordinates: [] } : { type: 'Polygon', coordinates: [[...ring, ring[0]!]] });
+  return {
+    'sees-all': polygon([...sInE, ...eInS]),
+    'sets-during': polygon([...sOutE, ...[...eInS].reverse()]),
+    'rises-during': polygon([...eOutS, ...[...sInE].reverse()]),
+  };
 }
 
 function capEdge(s: Stage): LineString {
@@ -261,9 +268,8 @@ export function composeScene(input: SceneInput): Scene {
 
   // d3-geo clips every layer to the view (the sphere's edge, or the region's frame): no SVG clip paths needed.
   base.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
-  base.push(`<path d="${path(capPolygon(end)) ?? ''}" fill="${theme.zones['rises-during']}"/>`);
-  base.push(`<path d="${path(capPolygon(start)) ?? ''}" fill="${theme.zones['sets-during']}"/>`);
-  base.push(`<path d="${path(capOverlap(start, end)) ?? ''}" fill="${theme.zones['sees-all']}"/>`);
+  const zones = zonePolygons(start, end);
+  for (const zone of ['rises-during', 'sets-during', 'sees-all'] as const) base.push(`<path d="${path(zones[zone]) ?? ''}" fill="${theme.zones[zone]}"/>`);
   base.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
   if (style.borders === 'countries') {
     base.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);

@@ -106,33 +106,70 @@ export function textOutline(text: string, x: number, y: number, style: TextStyle
   const left = anchor === 'start' ? x : anchor === 'middle' ? x - widthPx / 2 : x - widthPx;
   let d = '';
   glyphs.forEach((g, i) => {
-    // Glyph paths were taken at size = unitsPerEm with the baseline at 0 and y pointing down.
-    d += pathData(g.commands, left + positions[i]! * scale, y, scale);
+    const shape = glyphAtSize(style.weight, g, style.sizePx);
+    if (shape.body) d += `M${num(left + positions[i]! * scale + shape.startX)} ${num(y + shape.startY)}${shape.body}`;
   });
   return d;
 }
 
-/** A tenth of a pixel is finer than any output needs; never "-0". */
+/** A hundredth of a pixel, so that glyph shapes survive rounding; never "-0". */
 function num(value: number): string {
-  const rounded = Math.round(value * 10) / 10;
+  const rounded = Math.round(value * 100) / 100;
   return rounded === 0 ? '0' : String(rounded);
 }
 
 /**
- * Our own serialiser: opentype.js's toPathData rounds through a string
- * exponent and turns some coordinates into NaN.
+ * A glyph at one size as relative path data after its first point: the same
+ * string serves every place the glyph is drawn, so a map's thousand letters
+ * cost a thousand concatenations, not a hundred thousand number strings.
+ * (Our own serialiser: opentype.js's toPathData rounds through a string
+ * exponent and turns some coordinates into NaN.) Relative steps are
+ * differences of rounded points, so no error builds up along a contour.
  */
-function pathData(commands: readonly opentype.PathCommand[], dx: number, dy: number, k: number): string {
-  const X = (v: number) => num(dx + v * k);
-  const Y = (v: number) => num(dy + v * k);
-  let d = '';
-  for (const c of commands) {
-    if (c.type === 'M' || c.type === 'L') d += `${c.type}${X(c.x)} ${Y(c.y)}`;
-    else if (c.type === 'Q') d += `Q${X(c.x1)} ${Y(c.y1)} ${X(c.x)} ${Y(c.y)}`;
-    else if (c.type === 'C') d += `C${X(c.x1)} ${Y(c.y1)} ${X(c.x2)} ${Y(c.y2)} ${X(c.x)} ${Y(c.y)}`;
-    else d += 'Z';
+interface GlyphAtSize {
+  readonly startX: number;
+  readonly startY: number;
+  readonly body: string;
+}
+
+const sizedCache = new Map<string, GlyphAtSize>();
+
+function glyphAtSize(weight: FontWeight, g: GlyphShape, sizePx: number): GlyphAtSize {
+  const key = `${weight}:${g.index}:${sizePx}`;
+  const cached = sizedCache.get(key);
+  if (cached) return cached;
+  const k = sizePx / font(weight).unitsPerEm;
+  const r = (v: number) => Math.round(v * k * 100) / 100;
+  const first = g.commands[0];
+  const startX = first && first.type === 'M' ? r(first.x) : 0;
+  const startY = first && first.type === 'M' ? r(first.y) : 0;
+  let cx = startX;
+  let cy = startY;
+  let subpathX = startX;
+  let subpathY = startY;
+  let body = '';
+  for (const c of g.commands.slice(1)) {
+    if (c.type === 'Z') {
+      body += 'z';
+      cx = subpathX;
+      cy = subpathY;
+      continue;
+    }
+    const nx = r(c.x);
+    const ny = r(c.y);
+    if (c.type === 'M' || c.type === 'L') body += `${c.type === 'M' ? 'm' : 'l'}${num(nx - cx)} ${num(ny - cy)}`;
+    else if (c.type === 'Q') body += `q${num(r(c.x1) - cx)} ${num(r(c.y1) - cy)} ${num(nx - cx)} ${num(ny - cy)}`;
+    else body += `c${num(r(c.x1) - cx)} ${num(r(c.y1) - cy)} ${num(r(c.x2) - cx)} ${num(r(c.y2) - cy)} ${num(nx - cx)} ${num(ny - cy)}`;
+    if (c.type === 'M') {
+      subpathX = nx;
+      subpathY = ny;
+    }
+    cx = nx;
+    cy = ny;
   }
-  return d;
+  const sized = { startX, startY, body: first ? `${body}` : '' };
+  sizedCache.set(key, sized);
+  return sized;
 }
 
 /** Greedy word wrap to a width, px. */
@@ -160,14 +197,4 @@ export function fitText(text: string, style: TextStyle, maxWidthPx: number): str
   return `${chars.join('').trimEnd()}…`;
 }
 
-/** Escape text for SVG/XML content and attribute values. */
-export function escapeXml(text: string): string {
-  return text
-    // Characters XML 1.0 forbids outright.
-    .replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, '')
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&apos;');
-}
+export { escapeXml } from './xml.ts';

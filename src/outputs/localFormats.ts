@@ -8,8 +8,7 @@ import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
 import type { LocalCircumstances, LocalEvent, LocalEventName } from '../visibility/local.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
-export type LocalFormat = 'table' | 'markdown' | 'csv' | 'ics' | 'json';
-export const LOCAL_FORMATS: readonly LocalFormat[] = ['table', 'markdown', 'csv', 'ics', 'json'];
+export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
 
 export interface PlaceLabel {
   readonly name: string;

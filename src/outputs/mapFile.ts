@@ -6,15 +6,15 @@
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { civilClock } from '../ephemeris/civilTime.ts';
 import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
-import { rasterise, type RasterFormat } from '../raster/raster.ts';
+import { rasterise } from '../raster/raster.ts';
 import { localCircumstances } from '../visibility/local.ts';
 import { visibilityOf } from '../visibility/visibility.ts';
 import { eclipseCaption, type Caption } from './caption.ts';
 import { visibilityGeoJson } from './geojson.ts';
 import type { PlaceLabel } from './localFormats.ts';
 
-export type MapFormat = RasterFormat | 'svg' | 'geojson';
-export const MAP_FORMATS: readonly MapFormat[] = ['png', 'svg', 'webp', 'jpg', 'geojson'];
+import type { MapFormat } from './formatNames.ts';
+export { MAP_FORMATS, type MapFormat } from './formatNames.ts';
 
 export interface MapRequest {
   readonly eclipse: LunarEclipse;

@@ -8,6 +8,7 @@ import { geoArea, geoCentroid } from 'd3-geo';
 import type { Feature, Geometry, Position } from 'geojson';
 import { countries as countryTable, continents as continentNames } from 'countries-list';
 import isoCountries from 'i18n-iso-countries';
+import { normalAt, type Normal } from './moonUp.ts';
 import type { Visibility, VisibilityEvaluator, ZoneName } from './visibility.ts';
 import { visibilityEvaluator, ZONE_ORDER } from './visibility.ts';
 
@@ -35,7 +36,7 @@ export interface ContinentShare {
 function samplePoints(geometry: Geometry): Position[] {
   const points: Position[] = [];
   const addRing = (ring: Position[]) => {
-    const step = Math.max(1, Math.floor(ring.length / 200));
+    const step = Math.max(1, Math.floor(ring.length / 80));
     for (let i = 0; i < ring.length; i += step) points.push(ring[i]!);
   };
   if (geometry.type === 'Polygon') geometry.coordinates.forEach(addRing);
@@ -43,12 +44,29 @@ function samplePoints(geometry: Geometry): Position[] {
   return points;
 }
 
+/** What each country's outline gives, computed once per feature: world data is immutable. */
+interface CountryGeometry {
+  readonly normals: readonly Normal[];
+  readonly area: number;
+}
+const geometryCache = new WeakMap<Feature, CountryGeometry>();
+
+function countryGeometry(feature: Feature<Geometry>): CountryGeometry {
+  let cached = geometryCache.get(feature);
+  if (!cached) {
+    const points = [...samplePoints(feature.geometry), geoCentroid(feature)];
+    cached = { normals: points.map((p) => normalAt([p[0]!, p[1]!])), area: geoArea(feature) };
+    geometryCache.set(feature, cached);
+  }
+  return cached;
+}
+
 export function countryShares(visibility: Visibility, countries: readonly Feature<Geometry, { name: string }>[], evaluator: VisibilityEvaluator = visibilityEvaluator(visibility)): CountryShare[] {
   return countries.map((feature) => {
-    const points = [...samplePoints(feature.geometry), geoCentroid(feature)];
+    const { normals, area } = countryGeometry(feature);
     const counts = Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;
-    for (const p of points) counts[evaluator.zoneAt([p[0]!, p[1]!])]++;
-    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, counts[z] / points.length])) as Record<ZoneName, number>;
+    for (const n of normals) counts[evaluator.zoneAtNormal(n)]++;
+    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, counts[z] / normals.length])) as Record<ZoneName, number>;
     const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
     const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
     const continentCode = code ? (countryTable as Record<string, { continent: string }>)[code]?.continent : undefined;
@@ -59,7 +77,7 @@ export function countryShares(visibility: Visibility, countries: readonly Featur
       name: feature.properties.name,
       ...(code ? { code } : {}),
       ...(continent ? { continent } : {}),
-      area: geoArea(feature),
+      area,
       shares,
       ...(wholly ? { wholly } : {}),
       mostly,

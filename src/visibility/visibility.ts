@@ -101,6 +101,7 @@ export function zoneFromMargins(m: SpanMargins): ZoneName {
 /** A fast evaluator for one eclipse: zone, totality zone and field at any place. */
 export interface VisibilityEvaluator {
   zoneAt(place: LonLat): ZoneName;
+  zoneAtNormal(n: Normal): ZoneName;
   totalityZoneAt(place: LonLat): TotalityZoneName | undefined;
   minutesUpAt(place: LonLat): number;
   /** The same, from a precomputed normal (for grids). */
@@ -124,11 +125,10 @@ export function visibilityEvaluator(visibility: Visibility): VisibilityEvaluator
     }
     return minutes;
   };
+  const zoneAtNormal = (n: Normal): ZoneName => zoneFromMargins({ start: moonUpMargin(zone.start, n), end: moonUpMargin(zone.end, n) });
   return {
-    zoneAt(place) {
-      const n = normalAt(place);
-      return zoneFromMargins({ start: moonUpMargin(zone.start, n), end: moonUpMargin(zone.end, n) });
-    },
+    zoneAt: (place) => zoneAtNormal(normalAt(place)),
+    zoneAtNormal,
     totalityZoneAt(place) {
       if (!totality) return undefined;
       const n = normalAt(place);

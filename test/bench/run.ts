@@ -17,6 +17,8 @@ import { rasterise } from '../../src/raster/raster.ts';
 import { stage, visibilityOf } from '../../src/visibility/visibility.ts';
 
 const ROUNDS = 5;
+/** Maps take a fraction of a second: more rounds steady their median. */
+const MAP_ROUNDS = 11;
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -29,11 +31,11 @@ async function time(fn: () => unknown): Promise<number> {
   return performance.now() - start;
 }
 
-/** Run each job once to warm up, then alternate them ROUNDS times so that drift hits all alike. */
-async function alternate(jobs: Record<string, () => unknown>): Promise<Record<string, number>> {
+/** Run each job once to warm up, then alternate them `rounds` times so that drift hits all alike. */
+async function alternate(jobs: Record<string, () => unknown>, rounds = ROUNDS): Promise<Record<string, number>> {
   for (const job of Object.values(jobs)) await job();
   const times: Record<string, number[]> = Object.fromEntries(Object.keys(jobs).map((k) => [k, []]));
-  for (let round = 0; round < ROUNDS; round++) {
+  for (let round = 0; round < rounds; round++) {
     for (const [name, job] of Object.entries(jobs)) times[name]!.push(await time(job));
   }
   return Object.fromEntries(Object.entries(times).map(([k, v]) => [k, median(v)]));
@@ -94,8 +96,54 @@ const maps = await alternate({
   basemap: () => rasterise(bareBasemapSvg(), { format: 'png', dpi: 72 }),
   world: () => renderMapFile(mapRequest(2400, 1200)),
   card: () => renderMapFile(mapRequest(1200, 675)),
-});
-line(`world map 2400×1200 PNG, all layers (basemap ${detail})`, `${maps.world!.toFixed(0)} ms`);
+}, MAP_ROUNDS);
+line(`world map 2400×1200 PNG, all layers (basemap ${detail}; median of ${MAP_ROUNDS})`, `${maps.world!.toFixed(0)} ms`);
 line('bare basemap 2400×1200 PNG, same projection and data', `${maps.basemap!.toFixed(0)} ms`);
 line('ratio map / bare basemap (target ≤ 1.3)', (maps.world! / maps.basemap!).toFixed(2));
 line('social card 1200×675 PNG', `${maps.card!.toFixed(0)} ms`);
+
+// A decade of maps (PNG 2400 px wide + SVG) with one worker and with two, each batch in its own process.
+// Memory is the whole batch: the peak of the summed RSS of its process tree (main, workers, helpers), sampled from /proc.
+const { spawn } = await import('node:child_process');
+const { mkdtempSync, readdirSync, readFileSync } = await import('node:fs');
+const { tmpdir } = await import('node:os');
+const { join } = await import('node:path');
+const child = new URL('./batchChild.ts', import.meta.url).pathname;
+
+function treeRssMB(root: number): number {
+  const parents = new Map<number, number>();
+  const rss = new Map<number, number>();
+  for (const name of readdirSync('/proc')) {
+    if (!/^\d+$/.test(name)) continue;
+    try {
+      const status = readFileSync(`/proc/${name}/status`, 'utf8');
+      parents.set(Number(name), Number(/^PPid:\s+(\d+)/m.exec(status)?.[1]));
+      rss.set(Number(name), Number(/^VmRSS:\s+(\d+)/m.exec(status)?.[1] ?? 0));
+    } catch {
+      // The process ended while we looked.
+    }
+  }
+  const inTree = (pid: number): boolean => pid === root || (parents.has(pid) && pid !== 1 && inTree(parents.get(pid)!));
+  let kb = 0;
+  for (const [pid, value] of rss) if (inTree(pid)) kb += value;
+  return kb / 1024;
+}
+
+async function decade(jobs: number): Promise<{ seconds: number; eclipses: number; maps: number; peakMB: number }> {
+  const out = mkdtempSync(join(tmpdir(), `umbracast-bench-${jobs}-`));
+  const proc = spawn(process.execPath, ['--import', 'tsx', child, out, String(jobs)], { stdio: ['ignore', 'pipe', 'inherit'] });
+  let text = '';
+  proc.stdout.on('data', (chunk) => (text += chunk));
+  let peakMB = 0;
+  const timer = setInterval(() => (peakMB = Math.max(peakMB, treeRssMB(proc.pid!))), 50);
+  await new Promise((resolve) => proc.once('exit', resolve));
+  clearInterval(timer);
+  return { ...JSON.parse(text), peakMB };
+}
+const one = await decade(1);
+const two = await decade(2);
+line(`batch 2026–2035, ${one.eclipses} eclipses, PNG 2400 px + SVG, --jobs 1`, `${one.seconds.toFixed(1)} s, peak ${one.peakMB.toFixed(0)} MB`);
+line(`batch 2026–2035, ${two.eclipses} eclipses, PNG 2400 px + SVG, --jobs 2`, `${two.seconds.toFixed(1)} s, peak ${two.peakMB.toFixed(0)} MB`);
+line('ratio jobs 2 / jobs 1 (target ≤ 0.6)', (two.seconds / one.seconds).toFixed(2));
+line('peak memory of the whole batch, jobs 2 (target ≤ 400 MB)', `${two.peakMB.toFixed(0)} MB`);
+line('maps per second, jobs 2', (two.maps / two.seconds).toFixed(2));

@@ -1,0 +1,24 @@
+/** What a batch task is given and what it reports back: plain data, safe to send between processes. */
+import { createHash } from 'node:crypto';
+import type { LunarEclipse } from '../eclipse/types.ts';
+import type { HouseStyle } from './style.ts';
+
+export interface TaskInput {
+  readonly eclipse: LunarEclipse;
+  readonly style: HouseStyle;
+  readonly outDir: string;
+  readonly generator: string;
+}
+
+export type FileRole = 'map' | 'caption' | 'thumbnail' | 'local' | 'sky';
+
+export interface WrittenFile {
+  readonly path: string;
+  readonly role: FileRole;
+  readonly bytes: number;
+  readonly sha256: string;
+}
+
+export function sha256(bytes: Uint8Array | string): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}

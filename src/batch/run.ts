@@ -6,12 +6,12 @@
  * each finished eclipse, so an interrupted run leaves only whole files and a
  * manifest that lists them.
  *
- * Workers are processes (workerpool), not threads: libvips loads one SVG at a
- * time per process, so threads would wait on each other where processes do not.
+ * Workers are processes (tinypool's child_process runtime): each has its own
+ * heap and allocator, and a worker that dies fails its eclipse, not the batch.
  */
 import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, rmSync, unlinkSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
-import workerpool from 'workerpool';
+import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
 import { findLunarEclipses } from '../eclipse/catalogue.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
@@ -74,7 +74,7 @@ export function entryKey(record: EclipseRecord, hash: string, tool: string): str
 
 export const LOCK_NAME = '.umbracast.lock';
 /** Heap ceiling of each worker process, MB. */
-export const WORKER_HEAP_MB = 192;
+export const WORKER_HEAP_MB = 256;
 
 /** One batch per output folder: a lock file made with O_EXCL; a lock whose process is gone is taken over. */
 export function acquireLock(outDir: string): () => void {
@@ -192,18 +192,21 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     let interrupted = false;
     if (todo.length > 0) {
       const workers = Math.min(options.jobs, todo.length);
-      const pool = workerpool.pool(new URL('./worker.mjs', import.meta.url).pathname, {
-        workerType: 'process',
-        maxWorkers: workers,
-        minWorkers: workers,
-        // A modest heap makes each worker collect its large SVG strings early; one malloc arena keeps
-        // glibc from holding a pool of freed native memory per libvips thread.
-        forkOpts: { execArgv: [`--max-old-space-size=${WORKER_HEAP_MB}`], env: { ...process.env, MALLOC_ARENA_MAX: '1' }, stdio: 'inherit' },
-        workerTerminateTimeout: 2000,
+      const pool = new Tinypool({
+        filename: new URL('./worker.mjs', import.meta.url).href,
+        runtime: 'child_process',
+        minThreads: workers,
+        maxThreads: workers,
+        // One lane per core: each worker keeps V8 to its own thread (--single-threaded), so that N
+        // workers on N cores do not fight over them; a bounded heap makes it collect its large SVG
+        // strings early; one malloc arena keeps glibc from holding freed native memory per thread.
+        execArgv: ['--single-threaded', `--max-old-space-size=${WORKER_HEAP_MB}`],
+        env: { ...(process.env as Record<string, string>), MALLOC_ARENA_MAX: '1' },
       });
+      const abort = new AbortController();
       const onAbort = () => {
         interrupted = true;
-        void pool.terminate(true);
+        abort.abort();
       };
       options.signal?.addEventListener('abort', onAbort, { once: true });
       try {
@@ -212,7 +215,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
             const t0 = performance.now();
             try {
               const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
-              const files = (await pool.exec('renderEclipse', [input])) as WrittenFile[];
+              const files = (await pool.run(input, { signal: abort.signal })) as WrittenFile[];
               if (interrupted) return;
               const entry: ManifestEntry = { id: eclipse.id, kind: eclipse.kind, key, record, files };
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
@@ -229,7 +232,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
         );
       } finally {
         options.signal?.removeEventListener('abort', onAbort);
-        await pool.terminate(interrupted);
+        await pool.destroy();
       }
     }
     if (interrupted) removeLeftovers(outDir);

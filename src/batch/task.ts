@@ -9,7 +9,8 @@ import { foldName } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
 import { writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localTable, type LocalFormat } from '../outputs/localFormats.ts';
-import { captionText, renderMapFile } from '../outputs/mapFile.ts';
+import { captionText, renderMapFiles } from '../outputs/mapFile.ts';
+import { thumbnail } from '../raster/raster.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../cli/choose.ts';
 import { localReport } from '../cli/commands/local.ts';
@@ -39,23 +40,11 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
     written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
   };
 
-  let caption: string | undefined;
-  let thumbnailSource: Uint8Array | undefined;
-  for (const format of style.formats) {
-    const file = await renderMapFile({ eclipse, ...settings, format, generator });
-    await write(`${stem}.${format}`, 'map', file.bytes);
-    if (file.caption) caption ??= captionText(file.caption);
-    if (format === 'png' || format === 'webp' || format === 'jpg') thumbnailSource ??= file.bytes;
-  }
-  if (!thumbnailSource) {
-    const small = await renderMapFile({ eclipse, ...settings, size: { widthPx: 960, heightPx: 540 }, format: 'png', generator });
-    thumbnailSource = small.bytes;
-    caption ??= small.caption ? captionText(small.caption) : undefined;
-  }
-  if (caption) await write(`${stem}.txt`, 'caption', caption);
+  const { files, scene, caption } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats);
+  for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
+  await write(`${stem}.txt`, 'caption', captionText(caption));
   mkdirSync(join(outDir, 'thumbs'), { recursive: true });
-  const thumbnail = await sharp(thumbnailSource).resize({ width: THUMBNAIL_WIDTH_PX }).png({ compressionLevel: 9 }).toBuffer();
-  await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail);
+  await write(`thumbs/${stem}.png`, 'thumbnail', await thumbnail(scene.svg, THUMBNAIL_WIDTH_PX, settings.size.widthPx));
 
   for (const name of style.places) {
     const chosen = choosePlace({ place: name })!;

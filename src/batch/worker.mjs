@@ -1,8 +1,10 @@
-// A batch worker process: load the TypeScript task through tsx and serve it to the pool.
-// Each worker is its own process, so each has its own libvips: SVGs rasterise in parallel.
-import workerpool from 'workerpool';
+// A batch worker process (tinypool, child_process runtime): run the TypeScript task through tsx.
+// Each worker is its own process, so each has its own libvips, V8 heap and malloc arena.
 import { register } from 'tsx/esm/api';
 
 register();
-const { renderEclipse } = await import('./task.ts');
-workerpool.worker({ renderEclipse });
+let task;
+export default async function renderEclipse(input) {
+  task ??= await import('./task.ts');
+  return task.renderEclipse(input);
+}

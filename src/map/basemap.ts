@@ -19,7 +19,8 @@ export interface Basemap {
   readonly detail: BasemapDetail;
   readonly land: FeatureCollection<Geometry> | Geometry;
   readonly borders: MultiLineString;
-  readonly countries: FeatureCollection<Geometry, { name: string }>;
+  /** Country outlines, built on first use (only captions need them). */
+  countries(): FeatureCollection<Geometry, { name: string }>;
 }
 
 const require = createRequire(import.meta.url);
@@ -37,19 +38,25 @@ export function detailForScale(pixelsPerDegree: number): BasemapDetail {
   return '10m';
 }
 
+type WorldTopology = Topology<{ countries: GeometryCollection<{ name: string }>; land: GeometryCollection }>;
+
+function readTopology(detail: BasemapDetail): [WorldTopology, GeometryCollection<{ name: string }>] {
+  const topology = JSON.parse(readFileSync(require.resolve(`world-atlas/countries-${detail}.json`), 'utf8')) as WorldTopology;
+  return [topology, topology.objects.countries];
+}
+
 /** World data is immutable: parse each detail once per process. */
 export function loadBasemap(detail: BasemapDetail): Basemap {
   let basemap = cache.get(detail);
   if (!basemap) {
-    const topology = JSON.parse(readFileSync(require.resolve(`world-atlas/countries-${detail}.json`), 'utf8')) as Topology<{
-      countries: GeometryCollection<{ name: string }>;
-      land: GeometryCollection;
-    }>;
+    const [topology] = readTopology(detail);
+    let countries: FeatureCollection<Geometry, { name: string }> | undefined;
     basemap = {
       detail,
       land: feature(topology, topology.objects.land),
       borders: mesh(topology, topology.objects.countries, (a, b) => a !== b),
-      countries: feature(topology, topology.objects.countries) as FeatureCollection<Geometry, { name: string }>,
+      // Read again when asked, rather than keep the whole topology alive for a caption.
+      countries: () => (countries ??= feature(...readTopology(detail)) as FeatureCollection<Geometry, { name: string }>),
     };
     cache.set(detail, basemap);
   }

@@ -49,7 +49,7 @@ function largestIn(countries: readonly CountryShare[], zone: ZoneName): string[]
 }
 
 export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, clock: CivilClock, extra?: string): Caption {
-  const countries = countryShares(visibility, loadBasemap('110m').countries.features);
+  const countries = countryShares(visibility, loadBasemap('110m').countries().features);
   const continents = continentShares(countries);
   const at = eclipse.greatest.utDays;
   const zone = clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(at).split(',')[0]!;

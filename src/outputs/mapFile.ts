@@ -55,19 +55,26 @@ export function captionText(caption: Caption): string {
 }
 
 export async function renderMapFile(request: MapRequest): Promise<MapFile> {
+  const { files, scene, caption } = await renderMapFiles(request, [request.format]);
+  return { bytes: files.get(request.format)!, ...(request.format === 'geojson' ? {} : { scene, caption }) };
+}
+
+/**
+ * One eclipse in several formats at once: the scene and caption are made
+ * once and serve every picture format (a batch asks for PNG and SVG together).
+ */
+export async function renderMapFiles(request: Omit<MapRequest, 'format'>, formats: readonly MapFormat[]): Promise<{ files: Map<MapFormat, Uint8Array>; scene: Scene; caption: Caption }> {
   const visibility = visibilityOf(request.eclipse);
-  if (request.format === 'geojson') {
-    return { bytes: Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`) };
-  }
   const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p) }));
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
-  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene, caption };
-  const bytes = await rasterise(scene.svg, {
-    format: request.format,
-    dpi: request.dpi,
-    title: scene.title,
-    description: `${caption.caption} Alt text: ${caption.altText}`,
-  });
-  return { bytes, scene, caption };
+  const files = new Map<MapFormat, Uint8Array>();
+  for (const format of formats) {
+    if (format === 'geojson') files.set(format, Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`));
+    else if (format === 'svg') files.set(format, Buffer.from(`${scene.svg}\n`));
+    else {
+      files.set(format, await rasterise(scene.svg, { format, dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` }));
+    }
+  }
+  return { files, scene, caption };
 }

@@ -31,6 +31,11 @@ export function xmpPacket(title: string, description: string): string {
   ].join('');
 }
 
+/** A small PNG of an SVG picture, drawn at reduced density (no full-size image in memory). */
+export async function thumbnail(svg: string, widthPx: number, fullWidthPx: number): Promise<Buffer> {
+  return sharp(Buffer.from(svg), { density: (72 * widthPx) / fullWidthPx }).png({ compressionLevel: 9 }).toBuffer();
+}
+
 export async function rasterise(svg: string, options: RasterOptions): Promise<Buffer> {
   // librsvg reads the SVG's own pixel size; density 72 keeps one SVG px = one image px.
   // (Drawing layers side by side does not pay: libvips loads one SVG at a time,

@@ -73,6 +73,8 @@ export function entryKey(record: EclipseRecord, hash: string, tool: string): str
 }
 
 export const LOCK_NAME = '.umbracast.lock';
+/** The most eclipses one batch call takes: some hours of work, bounded. */
+export const MAX_BATCH_ECLIPSES = 500;
 /** Heap ceiling of each worker process, MB. */
 export const WORKER_HEAP_MB = 256;
 
@@ -104,7 +106,7 @@ export function acquireLock(outDir: string): () => void {
         alive = false;
       }
       if (alive && holder !== process.pid) {
-        throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (batch with process ${holder} holds ${LOCK_NAME}; wait for it, or remove the lock if that process is gone)`);
+        throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (batch with process ${holder} holds ${LOCK_NAME}; wait for it, or remove the lock if that process is gone)`, true);
       }
       unlinkSync(path);
     }
@@ -165,6 +167,9 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
 
     const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);
     const all = findLunarEclipses({ from: options.from, to: options.to, convention: style.convention, deltaT }).filter((e) => options.kinds.includes(e.kind));
+    if (all.length > MAX_BATCH_ECLIPSES) {
+      throw new InputError('--to', `a range of at most ${MAX_BATCH_ECLIPSES} eclipses per batch (about two centuries); split it, or use --shard`, `${all.length} eclipses from ${options.from.toISOString().slice(0, 10)}`, true);
+    }
     const mine = shardOf(all, options.shard);
     const todo: { eclipse: LunarEclipse; record: EclipseRecord; key: string }[] = [];
     let skipped = 0;
@@ -224,7 +229,9 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
               options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - t0) / 1000 });
             } catch (error) {
               if (interrupted) return;
-              const message = (error instanceof Error ? error.message : String(error)).split('\n')[0]!;
+              // Errors from a worker process arrive as plain objects: take their message.
+              const text = error instanceof Error ? error.message : typeof error === 'object' && error !== null && 'message' in error ? String((error as { message: unknown }).message) : String(error);
+              const message = text.split('\n')[0]!;
               failed.push({ id: eclipse.id, message });
               options.onProgress?.({ type: 'failed', id: eclipse.id, kind: eclipse.kind, message });
             }

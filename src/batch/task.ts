@@ -7,7 +7,7 @@ import { join } from 'node:path';
 import sharp from 'sharp';
 import { foldName } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
-import { writeFileAtomic } from '../outputs/files.ts';
+import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localTable, type LocalFormat } from '../outputs/localFormats.ts';
 import { captionText, renderMapFiles } from '../outputs/mapFile.ts';
 import { thumbnail } from '../raster/raster.ts';
@@ -36,7 +36,7 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
   const written: WrittenFile[] = [];
   const write = async (relative: string, role: FileRole, data: Uint8Array | string) => {
     const bytes = typeof data === 'string' ? Buffer.from(data) : data;
-    await writeFileAtomic(join(outDir, relative), bytes);
+    await writeFileAtomic(pathInside(outDir, relative), bytes);
     written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
   };
 

@@ -3,9 +3,9 @@
  * target under a temporary name, then rename over it (atomic on one file
  * system). A failed write removes its temporary file.
  */
-import { existsSync, statSync } from 'node:fs';
+import { existsSync, realpathSync, statSync } from 'node:fs';
 import { rename, unlink, writeFile } from 'node:fs/promises';
-import { basename, dirname, join } from 'node:path';
+import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { InputError } from '../errors.ts';
 
 export function temporaryNameFor(path: string): string {
@@ -30,4 +30,23 @@ export function checkOutputFolder(option: string, path: string): void {
     throw new InputError(option, 'a file path in an existing folder', path);
   }
   if (existsSync(path) && statSync(path).isDirectory()) throw new InputError(option, 'a file path, not a folder', path);
+}
+
+/**
+ * A path for `relativePath` inside `root` that stays inside it: no absolute
+ * paths, no "..", and no symbolic link on the way that leads out of `root`.
+ * Throws a plain Error (a failure of the eclipse being written, not a usage error).
+ */
+export function pathInside(root: string, relativePath: string): string {
+  if (isAbsolute(relativePath) || relativePath.split(/[\\/]/).includes('..')) {
+    throw new Error(`refusing to write ${JSON.stringify(relativePath)}: outside the output folder`);
+  }
+  const target = resolve(root, relativePath);
+  const realRoot = realpathSync(root);
+  const realParent = realpathSync(dirname(target));
+  const inside = relative(realRoot, realParent);
+  if (inside === '..' || inside.startsWith(`..${sep}`) || isAbsolute(inside)) {
+    throw new Error(`refusing to write ${JSON.stringify(relativePath)}: a link leads out of the output folder`);
+  }
+  return join(realParent, basename(target));
 }

@@ -113,7 +113,11 @@ export function suggestPlaces(name: string, count = 3): Place[] {
   return found.sort((a, b) => a.distance - b.distance || b.place.population - a.place.population).slice(0, count).map((f) => f.place);
 }
 
+/** No place name is longer; longer input is refused before any search. */
+export const MAX_PLACE_CHARS = 200;
+
 export function findPlace(text: string, option = '--place'): Place {
+  if ([...text].length > MAX_PLACE_CHARS || text.trim() === '') throw new InputError(option, `${EXPECTED}, at most ${MAX_PLACE_CHARS} characters`, text);
   const query = parseQuery(text);
   const all = placesByName().get(foldName(query.name)) ?? [];
   const matches = all.filter((p) => (!query.country || p.country === query.country) && (!query.admin || p.admin.toUpperCase() === query.admin));

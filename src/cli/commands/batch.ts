@@ -8,7 +8,9 @@ import { InputError } from '../../errors.ts';
 import { ECLIPSE_KINDS } from '../../eclipse/types.ts';
 import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
 import { mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
-import { DEFAULT_STYLE, loadStyle } from '../../batch/style.ts';
+import { DEFAULT_STYLE, loadStyle, type HouseStyle } from '../../batch/style.ts';
+import { choosePlace } from '../choose.ts';
+import { mapSettings, optionsFromStyle, type MapOptions } from './map.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import { toolVersion } from '../version.ts';
@@ -68,6 +70,7 @@ export function registerBatch(program: Command, context: CommandContext): void {
       const range = parseRange(options.from, options.to, context.now());
       const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
       const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
+      checkStyleSettings(style, options.style ?? 'the default style');
       const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker threads' });
       if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker threads from 1 to ${MAX_JOBS}`, options.jobs);
       const shard = options.shard === undefined ? null : parseShard(options.shard);
@@ -91,6 +94,33 @@ export function registerBatch(program: Command, context: CommandContext): void {
         process.off('SIGTERM', onSignal);
       }
     });
+}
+
+const OPTION_FIELDS: Record<string, string> = {
+  '--size': 'size', '--preset': 'preset', '--width-mm': 'widthMm', '--dpi': 'dpi', '--bbox': 'bbox', '--centre': 'centre',
+  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--delta-t': 'deltaT', '--projection': 'projection',
+};
+
+/**
+ * Check a style as its maps will read it — sizes, views, zones, every place
+ * named — before any worker starts, so that a bad value is one usage error
+ * naming the style's field, not a failure repeated for every eclipse.
+ */
+export function checkStyleSettings(style: HouseStyle, file: string): void {
+  const field = (error: unknown, name: string) =>
+    error instanceof InputError ? new InputError(`${file}: ${name}`, error.expected, error.received, true) : error;
+  try {
+    mapSettings(optionsFromStyle(style) as MapOptions);
+  } catch (error) {
+    throw field(error, error instanceof InputError ? (OPTION_FIELDS[error.parameter] ?? (error.parameter === '--place' ? 'marks' : error.parameter)) : '');
+  }
+  style.places.forEach((name, i) => {
+    try {
+      choosePlace({ place: name });
+    } catch (error) {
+      throw field(error, `places[${i}]`);
+    }
+  });
 }
 
 /** Interrupted by Ctrl-C or SIGTERM: what finished is on disk and in the manifest. */

@@ -48,6 +48,9 @@ export interface MapOptions {
   style?: string;
 }
 
+/** A title longer than this would not fit any page we draw. */
+export const MAX_TITLE_CHARS = 300;
+
 export type SizePreset = 'card' | 'square' | 'print';
 export const SIZE_PRESETS: readonly SizePreset[] = ['card', 'square', 'print'];
 export const DEFAULT_SIZE: PixelSize = { widthPx: 2400, heightPx: 1350 };
@@ -176,7 +179,7 @@ export function mapSettings(options: MapOptions): MapSettings {
   const borders = parseChoice('--borders', options.borders, BORDER_STYLES);
   const clock = civilClock(options.tz.trim(), '--tz');
   const title = options.title;
-  if (title !== undefined && title.trim() === '') throw new InputError('--title', 'some text', title);
+  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
   return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };

@@ -11,7 +11,7 @@ import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 import { localReport } from './local.ts';
-import { parseOutput, parseSizeAndDpi, type SizeOptions } from './map.ts';
+import { MAX_TITLE_CHARS, parseOutput, parseSizeAndDpi, type SizeOptions } from './map.ts';
 
 interface SkyOptions extends SizeOptions {
   place?: string;
@@ -46,7 +46,7 @@ export function registerSky(program: Command, context: CommandContext): void {
     .action(async (whenText: string | undefined, options: SkyOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
       const { size, dpi } = parseSizeAndDpi(options, { widthPx: 1600, heightPx: 900 });
-      if (options.title !== undefined && options.title.trim() === '') throw new InputError('--title', 'some text', options.title);
+      if (options.title !== undefined && (options.title.trim() === '' || [...options.title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, options.title);
       const chosen = choosePlace(options)!;
       const eclipse = chooseEclipse(whenText, options, context.now());
       const slug = foldName(chosen.place.name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';

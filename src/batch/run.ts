@@ -10,6 +10,7 @@
  * heap and allocator, and a worker that dies fails its eclipse, not the batch.
  */
 import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, rmSync, unlinkSync, writeSync } from 'node:fs';
+import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
@@ -209,6 +210,8 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
         env: { ...(process.env as Record<string, string>), MALLOC_ARENA_MAX: '1' },
       });
       const abort = new AbortController();
+      // Every task listens to the one signal: as many listeners as eclipses, by design.
+      setMaxListeners(Number.POSITIVE_INFINITY, abort.signal);
       const onAbort = () => {
         interrupted = true;
         abort.abort();

@@ -84,46 +84,6 @@ function orient(ring: Position[], counterClockwise: boolean): Position[] {
   return ringArea(ring) > 0 === counterClockwise ? ring : [...ring].reverse();
 }
 
-/**
- * Outlines of a traced region without the seams that only close it along
- * the grid's edge (±180°, the poles): what should be drawn as a line.
- */
-export function regionOutlines(region: PlanarMultiPolygon): Position[][] {
-  const lines: Position[][] = [];
-  const onSeam = (a: Position, b: Position) =>
-    (Math.abs(a[0]!) === 180 && a[0] === b[0]) || (Math.abs(a[1]!) === 90 && a[1] === b[1]);
-  for (const polygon of region) {
-    for (const ring of polygon) {
-      let current: Position[] = [];
-      for (let k = 0; k < ring.length - 1; k++) {
-        const a = ring[k]!;
-        const b = ring[k + 1]!;
-        if (onSeam(a, b)) {
-          if (current.length > 1) lines.push(current);
-          current = [];
-          continue;
-        }
-        if (current.length === 0) current.push(a);
-        current.push(b);
-      }
-      if (current.length > 1) lines.push(current);
-    }
-  }
-  return mergeTouching(lines);
-}
-
-/** Join lines where one ends exactly where the next begins (a ring cut open at its first point). */
-function mergeTouching(lines: Position[][]): Position[][] {
-  const out: Position[][] = [];
-  for (const line of lines) {
-    const last = out[out.length - 1];
-    const end = last?.[last.length - 1];
-    if (last && end && end[0] === line[0]![0] && end[1] === line[0]![1]) last.push(...line.slice(1));
-    else out.push(line);
-  }
-  return out;
-}
-
 /** Planar point-in-region (even–odd over all rings). */
 export function regionContains(region: PlanarMultiPolygon, [x, y]: LonLat): boolean {
   let inside = false;

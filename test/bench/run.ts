@@ -18,7 +18,7 @@ import { stage, visibilityOf } from '../../src/visibility/visibility.ts';
 
 const ROUNDS = 5;
 /** Maps take a fraction of a second: more rounds steady their median. */
-const MAP_ROUNDS = 11;
+const MAP_ROUNDS = 21;
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);

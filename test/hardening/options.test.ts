@@ -4,7 +4,7 @@
  * one line naming the parameter; never a stack trace, never a hang.
  */
 import assert from 'node:assert/strict';
-import { mkdtempSync, readdirSync } from 'node:fs';
+import { mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { test } from 'node:test';
@@ -75,4 +75,25 @@ test('local, caption and sky: random and hostile places, points and zones keep t
       }),
     { ...SETTINGS, numRuns: 120 },
   );
+});
+
+test('batch: random and hostile ranges, jobs, shards and folders keep the contract', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-prop-batch-'));
+  writeFileSync(join(dir, 'style.yaml'), 'preset: card\nformats: [svg]\nsky: false\n');
+  const day = fc.oneof({ arbitrary: fc.constantFrom('2026-03-01', '2026-03-05', '2026-08-20', '2026-09-01'), weight: 4 }, { arbitrary: hostile, weight: 1 });
+  const jobs = fc.oneof({ arbitrary: fc.constantFrom('1', '2'), weight: 3 }, { arbitrary: fc.oneof(hostile, fc.constantFrom('0', '65', '1.5', '-2')), weight: 1 });
+  const shard = fc.oneof({ arbitrary: fc.constant(undefined), weight: 3 }, { arbitrary: fc.oneof(fc.constantFrom('1/2', '2/2', '0/2', '3/2', '1/0', '1/ 2'), hostile), weight: 1 });
+  const out = fc.oneof({ arbitrary: fc.constant('out'), weight: 4 }, { arbitrary: fc.oneof(fc.constantFrom('missing/deeper/out', 'style.yaml', ''), hostile), weight: 1 });
+  let ran = 0;
+  await fc.assert(
+    fc.asyncProperty(day, day, jobs, shard, out, maybe(fc.oneof(hostile, fc.constantFrom('total', 'partial'))), async (from, to, j, s, o, kind) => {
+      const args = ['batch', '--from', from, '--to', to, '--jobs', j, ...flag('--shard', s), ...flag('--kind', kind), '--style', join(dir, 'style.yaml'), '--out', join(dir, o)];
+      const outcome = await run(args);
+      assertContract(outcome, args, NAMES_OPTION);
+      assert.ok(outcome.ms < 60_000, `bounded time: ${outcome.ms} ms`);
+      if (outcome.code === 0) ran++;
+    }),
+    { ...SETTINGS, numRuns: 40 },
+  );
+  assert.ok(ran >= 3, `some batches ran: ${ran}`);
 });

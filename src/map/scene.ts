@@ -281,10 +281,11 @@ export function composeScene(input: SceneInput): Scene {
   const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: lines.map((l) => l.line) };
   overlay.push(`<path d="${path(fieldGeometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
 
-  // Moon-up edges at each stage.
+  // Moon-up edges at each stage (drawn, then labelled).
+  const edges = new Map(visibility.stages.map((s) => [s.name, capEdge(s)]));
   for (const s of visibility.stages) {
     const strong = s.name === zoneSpan.start || s.name === zoneSpan.end;
-    const d = path(capEdge(s)) ?? '';
+    const d = path(edges.get(s.name)!) ?? '';
     overlay.push(strong
       ? `<path d="${d}" fill="none" stroke="${theme.edgeStrong}" stroke-width="${n2(1.7 * unit)}"/>`
       : `<path d="${d}" fill="none" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`);
@@ -309,7 +310,7 @@ export function composeScene(input: SceneInput): Scene {
   const stages = visibility.stages;
   stages.forEach((s, index) => {
     const targetY = frame.y + frame.height * (0.16 + (0.5 * index) / Math.max(1, stages.length - 1));
-    const points = capEdge(s).coordinates.map((p) => projection([p[0]!, p[1]!]));
+    const points = edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]));
     const name = s.name === 'greatest' ? 'Greatest' : s.name;
     for (const [x, y] of crossingsAtY(points, targetY, frame)) {
       label(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle);

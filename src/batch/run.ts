@@ -21,6 +21,7 @@ import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { writeFileAtomic } from '../outputs/files.ts';
 import { contactSheet } from './contactSheet.ts';
+import { workerScript } from './workerScript.ts';
 import { filesIntact, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
 import { sha256, type TaskInput, type WrittenFile } from './written.ts';
@@ -199,14 +200,14 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     if (todo.length > 0) {
       const workers = Math.min(options.jobs, todo.length);
       const pool = new Tinypool({
-        filename: new URL('./worker.mjs', import.meta.url).href,
+        filename: await workerScript(),
         runtime: 'child_process',
         minThreads: workers,
         maxThreads: workers,
         // One lane per core: each worker keeps V8 to its own thread (--single-threaded), so that N
         // workers on N cores do not fight over them; a bounded heap makes it collect its large SVG
         // strings early; one malloc arena keeps glibc from holding freed native memory per thread.
-        execArgv: ['--single-threaded', `--max-old-space-size=${WORKER_HEAP_MB}`],
+        execArgv: ['--single-threaded', `--max-old-space-size=${WORKER_HEAP_MB}`, '--max-semi-space-size=8'],
         env: { ...(process.env as Record<string, string>), MALLOC_ARENA_MAX: '1' },
       });
       const abort = new AbortController();

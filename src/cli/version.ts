@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
+import pkg from '../../package.json' with { type: 'json' };
 
 /** The version in package.json. */
 export function toolVersion(): string {
-  const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
   return pkg.version;
 }

@@ -11,7 +11,7 @@
  * - beyond 2150, and before 1600, the long-term fits ("long-term").
  * A user may replace all of it with a fixed value ("user").
  */
-import { readFileSync } from 'node:fs';
+import observed from '../../data/delta-t-observed.json' with { type: 'json' };
 
 export type DeltaTSource = 'observed' | 'historical' | 'forecast' | 'long-term' | 'user';
 
@@ -33,11 +33,10 @@ interface ObservedTable {
 }
 
 function loadObservedTable(): ObservedTable {
-  const url = new URL('../../data/delta-t-observed.json', import.meta.url);
-  const parsed = JSON.parse(readFileSync(url, 'utf8')) as { values: [number, number][] };
+  const values = observed.values as [number, number][];
   return {
-    years: parsed.values.map(([year]) => year),
-    seconds: parsed.values.map(([, seconds]) => seconds),
+    years: values.map(([year]) => year),
+    seconds: values.map(([, seconds]) => seconds),
   };
 }
 

@@ -1,0 +1,2 @@
+/** What a bundled batch worker exports: the one task. */
+export { renderEclipse as default } from './task.ts';

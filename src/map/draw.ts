@@ -56,7 +56,14 @@ export function textBox(text: string, x: number, y: number, style: TextStyle, an
 }
 
 /** A map label: outlined text over a soft halo. */
+/**
+ * A map label: outlined text on a small rounded plate of the page colour.
+ * (A plate reads as well as a stroked halo and costs far less to rasterise:
+ * one rectangle instead of stroking every letter's outline.)
+ */
 export function labelElement(text: string, x: number, y: number, style: TextStyle, theme: Theme, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): string {
-  const d = textOutline(text, x, y, style, anchor);
-  return `<path d="${d}" fill="${theme.text}" stroke="${theme.halo}" stroke-opacity="${theme.haloOpacity}" stroke-width="${n2(3.2 * unit)}" stroke-linejoin="round" paint-order="stroke"/>`;
+  const box = textBox(text, x, y, style, anchor);
+  const pad = 2.2 * unit;
+  const plate = `<rect x="${n2(box.left - pad)}" y="${n2(box.top - pad * 0.6)}" width="${n2(box.right - box.left + 2 * pad)}" height="${n2(box.bottom - box.top + pad * 1.2)}" rx="${n2(pad)}" fill="${theme.halo}" fill-opacity="${theme.haloOpacity}"/>`;
+  return `${plate}<path d="${textOutline(text, x, y, style, anchor)}" fill="${theme.text}"/>`;
 }

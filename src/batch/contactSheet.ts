@@ -3,15 +3,11 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only.
  */
+import { durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
 import type { Manifest } from './manifest.ts';
 
 const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
-
-const hm = (seconds: number) => {
-  const minutes = Math.round(seconds / 60);
-  return minutes >= 60 ? `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min` : `${minutes} min`;
-};
 
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
@@ -24,8 +20,8 @@ export function contactSheet(manifest: Manifest, title: string): string {
     const facts = [
       `Greatest ${greatestMinute} UTC`,
       r.kind === 'penumbral' ? `penumbral magnitude ${r.penumbralMagnitude.toFixed(3)}` : `umbral magnitude ${r.umbralMagnitude.toFixed(3)}`,
-      ...(r.durations.total !== undefined ? [`totality ${hm(r.durations.total)}`] : []),
-      ...(r.durations.partial !== undefined ? [`in the umbra ${hm(r.durations.partial)}`] : [`penumbral phase ${hm(r.durations.penumbral)}`]),
+      ...(r.durations.total !== undefined ? [`totality ${durationWords(r.durations.total)}`] : []),
+      ...(r.durations.partial !== undefined ? [`in the umbra ${durationWords(r.durations.partial)}`] : [`penumbral phase ${durationWords(r.durations.penumbral)}`]),
       `saros ${r.saros}`,
     ];
     const links = entry.files

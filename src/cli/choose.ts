@@ -1,4 +1,5 @@
 /** What several commands choose the same way: the eclipse (WHEN, convention, ΔT) and the place (--place, --at, --tz). */
+import type { Command } from 'commander';
 import { InputError } from '../errors.ts';
 import { eclipseNear, nextEclipse } from '../eclipse/catalogue.ts';
 import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
@@ -12,6 +13,21 @@ import { parseChoice, parseLatLon, parseNumber, parseWhen, WHEN_EXPECTED } from 
 
 /** ΔT beyond ±1 day makes no sense in years 1000–3000. */
 export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
+
+/** --convention and --delta-t, as every command that computes eclipses declares them. */
+export function withEclipseOptions(command: Command): Command {
+  return command
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model');
+}
+
+/** --place, --at and --tz, as the one-place commands declare them. */
+export function withPlaceOptions(command: Command): Command {
+  return command
+    .option('--place <name>', 'a place from the GeoNames gazetteer: "Lisbon", "Springfield, US-IL"')
+    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
+    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)');
+}
 
 export interface EclipseChoice {
   convention: string;

@@ -19,6 +19,15 @@ export interface CivilClock {
   zoneLabel(utDays: number): string;
   /** Offset from UTC at that instant: "+01:00". */
   offset(utDays: number): string;
+  /** The short name printed after a time: "CET", "UTC+09:00", or "UTC". */
+  abbreviation(utDays: number): string;
+}
+
+/** "58 min", "3 h 27 min": durations as printed on figures and in captions. */
+export function durationWords(seconds: number): string {
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
 }
 
 const MINUTE_DAYS = 1 / 1440;
@@ -60,5 +69,8 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
       return name ? `${name}, ${utcOffset}` : utcOffset;
     },
     offset,
+    abbreviation(utDays) {
+      return isUtc ? 'UTC' : this.zoneLabel(utDays).split(',')[0]!;
+    },
   };
 }

@@ -8,7 +8,7 @@
 import { geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
 import type { LineString, MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipse/types.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines } from '../visibility/fieldLines.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
@@ -70,16 +70,11 @@ const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
 
 const fmt = (value: number, digits: number) => value.toFixed(digits).replace('-', '−');
 
-export function durationWords(seconds: number): string {
-  const minutes = Math.round(seconds / 60);
-  if (minutes < 60) return `${minutes} min`;
-  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
-}
 
 export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
   const at = eclipse.greatest.utDays;
   const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} · ${clock.date(at)}`;
-  const zone = clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(at).split(',')[0]!;
+  const zone = clock.abbreviation(at);
   const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)}`;
   const c = eclipse.contacts;
   const parts = [`Greatest ${clock.time(at)} ${zone}`];
@@ -215,7 +210,7 @@ export function composeScene(input: SceneInput): Scene {
   const phaseName = eclipse.kind === 'penumbral' ? 'the penumbral eclipse' : 'the eclipse';
   const legendItems: { key: string; label: string }[] = [
     { key: 'sees-all', label: `Moon up for all of ${phaseName}` },
-    { key: 'sets-during', label: `Moon sets while ${phaseName === 'the eclipse' ? 'it' : 'it'} is on` },
+    { key: 'sets-during', label: 'Moon sets while it is on' },
     { key: 'rises-during', label: 'Moon rises while it is on' },
     { key: 'sees-none', label: 'Moon below the horizon' },
     { key: 'edge-strong', label: `Moonrise/moonset line at ${zoneSpan.start} and ${zoneSpan.end}` },

@@ -9,7 +9,7 @@ import type { ContactName } from '../eclipse/contacts.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../visibility/local.ts';
-import { skyClass } from '../visibility/local.ts';
+import { phaseAt, skyClass } from '../visibility/local.ts';
 import { labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
@@ -46,13 +46,10 @@ const KIND_WORDS: Record<LunarEclipse['kind'], string> = { total: 'total', parti
 
 type Phase = 'outside' | 'penumbral' | 'partial' | 'total';
 
-function phaseAt(eclipse: LunarEclipse, utDays: number): Phase {
-  const c = eclipse.contacts;
-  const within = (a?: { utDays: number }, b?: { utDays: number }) => a && b && utDays >= a.utDays && utDays <= b.utDays;
-  if (within(c.U2, c.U3)) return 'total';
-  if (within(c.U1, c.U4)) return 'partial';
-  if (within(c.P1, c.P4)) return 'penumbral';
-  return 'outside';
+/** The path's colour: the eclipse phase, or 'outside' before and after it. */
+function pathPhase(eclipse: LunarEclipse, utDays: number): Phase {
+  const phase = phaseAt(eclipse, utDays);
+  return phase === 'before' || phase === 'after' ? 'outside' : phase;
 }
 
 export function composeSkyScene(input: SkySceneInput): SkyScene {
@@ -176,7 +173,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     }
   };
   for (const sample of track) {
-    const phase = phaseAt(eclipse, sample.moment.utDays);
+    const phase = pathPhase(eclipse, sample.moment.utDays);
     const up = sample.moonAltitudeDeg > -0.3;
     const point = `${n2(x(sample.moment.utDays))},${n2(y(sample.moonAltitudeDeg))}`;
     if (phase !== segmentPhase || up !== segmentUp) {

@@ -5,9 +5,8 @@
  */
 import isoCountries from 'i18n-iso-countries';
 import type { LunarEclipse } from '../eclipse/types.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import { loadBasemap } from '../map/basemap.ts';
-import { durationWords } from '../map/scene.ts';
 import { continentShares, countryShares, type ContinentShare, type CountryShare } from '../visibility/countries.ts';
 import type { Visibility, ZoneName } from '../visibility/visibility.ts';
 
@@ -52,7 +51,7 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const countries = countryShares(visibility, loadBasemap('110m').countries().features);
   const continents = continentShares(countries);
   const at = eclipse.greatest.utDays;
-  const zone = clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(at).split(',')[0]!;
+  const zone = clock.abbreviation(at);
   const c = eclipse.contacts;
   const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)} ${zone}`;
   const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.time(at)} ${zone}`];

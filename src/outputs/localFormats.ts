@@ -5,7 +5,8 @@
 import { stringify } from 'csv-stringify/sync';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
-import type { LocalCircumstances, LocalEvent, LocalEventName } from '../visibility/local.ts';
+import type { LunarEclipse } from '../eclipse/types.ts';
+import { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
@@ -22,6 +23,13 @@ export interface LocalReport {
   readonly place: PlaceLabel;
   readonly clock: CivilClock;
   readonly summary: string;
+}
+
+/** Everything the local formats print, for one eclipse and one place in its clock. */
+export function localReport(eclipse: LunarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }): LocalReport {
+  const { place, clock } = chosen;
+  const local = localCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
+  return { local, place, clock, summary: localSummary(local, clock, place.name) };
 }
 
 export const EVENT_WORDS: Record<LocalEventName, string> = {

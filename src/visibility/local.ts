@@ -141,8 +141,10 @@ const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest'
 export const compassWord = (azimuthDeg: number) => COMPASS[Math.round(azimuthDeg / 45) % 8]!;
 const heightWord = (altitudeDeg: number) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the');
 
+export type EclipsePhase = 'before' | 'penumbral' | 'partial' | 'total' | 'after';
+
 /** What is happening at an instant: which phase is on. */
-function phaseAt(eclipse: LunarEclipse, utDays: number): 'before' | 'penumbral' | 'partial' | 'total' | 'after' {
+export function phaseAt(eclipse: LunarEclipse, utDays: number): EclipsePhase {
   const c = eclipse.contacts;
   if (utDays < c.P1!.utDays) return 'before';
   if (utDays > c.P4!.utDays) return 'after';
@@ -164,7 +166,7 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   const { eclipse, events } = local;
   const c = eclipse.contacts;
   const t = (m: Moment) => clock.time(m.utDays);
-  const zone = clock.zone === 'UTC' ? 'UTC' : clock.zoneLabel(eclipse.greatest.utDays).split(',')[0]!;
+  const zone = clock.abbreviation(eclipse.greatest.utDays);
   const byName = (name: LocalEventName) => events.find((e) => e.event === name);
   const up = (name: StageName) => byName(name)?.moonUp ?? false;
   const where = (e: LocalEvent) => `${heightWord(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg)}`;

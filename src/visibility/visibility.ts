@@ -41,8 +41,6 @@ export interface Visibility {
   /** The phase the field counts. */
   readonly fieldSpan: PhaseSpan;
   readonly fieldDurationMinutes: number;
-  /** Caps through the field's phase, evenly spaced in time. */
-  readonly fieldSamples: readonly CapTest[];
 }
 
 /** Field samples at most this far apart: the Moon's altitude is nearly linear over such a step. */
@@ -67,14 +65,18 @@ export function visibilityOf(eclipse: LunarEclipse): Visibility {
     stages.push({ name, cap: moonUpCap(moment) });
   }
   const fieldSpan = fieldSpanOf(eclipse);
-  const start = eclipse.contacts[fieldSpan.start]!;
-  const end = eclipse.contacts[fieldSpan.end]!;
-  const durationDays = end.utDays - start.utDays;
-  const steps = Math.max(8, Math.ceil((durationDays * 1440) / FIELD_STEP_MINUTES));
-  const fieldSamples = Array.from({ length: steps + 1 }, (_, i) =>
+  const durationDays = eclipse.contacts[fieldSpan.end]!.utDays - eclipse.contacts[fieldSpan.start]!.utDays;
+  return { eclipse, stages, zoneSpan: zoneSpanOf(eclipse), fieldSpan, fieldDurationMinutes: durationDays * 1440 };
+}
+
+/** Caps through the field's phase, evenly spaced in time: what minutesUpAt integrates over. */
+function fieldSamples(visibility: Visibility): CapTest[] {
+  const start = visibility.eclipse.contacts[visibility.fieldSpan.start]!;
+  const durationDays = visibility.fieldDurationMinutes / 1440;
+  const steps = Math.max(8, Math.ceil(visibility.fieldDurationMinutes / FIELD_STEP_MINUTES));
+  return Array.from({ length: steps + 1 }, (_, i) =>
     capTest(moonUpCap(momentFromUT(start.utDays + (durationDays * i) / steps, start.deltaTSeconds))),
   );
-  return { eclipse, stages, zoneSpan: zoneSpanOf(eclipse), fieldSpan, fieldDurationMinutes: durationDays * 1440, fieldSamples };
 }
 
 export function stage(visibility: Visibility, name: StageName): Stage {
@@ -111,9 +113,11 @@ export interface VisibilityEvaluator {
 export function visibilityEvaluator(visibility: Visibility): VisibilityEvaluator {
   const zone = spanTests(visibility, visibility.zoneSpan);
   const totality = visibility.eclipse.kind === 'total' ? spanTests(visibility, fieldSpanOf(visibility.eclipse)) : undefined;
-  const samples = visibility.fieldSamples;
-  const stepMinutes = visibility.fieldDurationMinutes / (samples.length - 1);
+  // Only the minutes-up field needs samples through the phase: take them on first use.
+  let samples: CapTest[] | undefined;
   const minutesUpAtNormal = (n: Normal): number => {
+    samples ??= fieldSamples(visibility);
+    const stepMinutes = visibility.fieldDurationMinutes / (samples.length - 1);
     let minutes = 0;
     let previous = moonUpMargin(samples[0]!, n);
     for (let i = 1; i < samples.length; i++) {

@@ -1,14 +1,13 @@
 /** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
 import type { Command } from 'commander';
-import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import { eclipseCaption } from '../../outputs/caption.ts';
 import { captionText } from '../../outputs/mapFile.ts';
+import { localReport } from '../../outputs/localFormats.ts';
 import { visibilityOf } from '../../visibility/visibility.ts';
-import { chooseEclipse, choosePlace } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { WHEN_EXPECTED } from '../options.ts';
-import { localReport } from './local.ts';
 
 interface CaptionOptions {
   tz: string;
@@ -19,15 +18,14 @@ interface CaptionOptions {
 }
 
 export function registerCaption(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('caption')
     .description('a caption and alt text for one eclipse, naming the continents and countries that see it')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
     .option('--tz <zone>', 'give times in this IANA time zone', 'UTC')
     .option('--place <name>', 'add what readers in this place will see')
-    .option('--at <LAT,LON>', 'add what is seen from this point')
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .option('--at <LAT,LON>', 'add what is seen from this point');
+  withEclipseOptions(command)
     .action((whenText: string | undefined, options: CaptionOptions) => {
       const clock = civilClock(options.tz.trim(), '--tz');
       // The place's own summary uses the caption's zone, so that one text reads in one time.

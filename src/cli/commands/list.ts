@@ -8,7 +8,7 @@ import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
 import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
-import { DELTA_T_LIMITS } from '../choose.ts';
+import { DELTA_T_LIMITS, withEclipseOptions } from '../choose.ts';
 
 interface ListOptions {
   from?: string;
@@ -21,15 +21,14 @@ interface ListOptions {
 
 
 export function registerList(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('list')
     .description('list the lunar eclipses in a date range (default: from today, ten years)')
     .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
     .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
     .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
-    .option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table')
+    .option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table');
+  withEclipseOptions(command)
     .action((options: ListOptions) => {
       const range = parseRange(options.from, options.to, context.now());
       const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);

@@ -1,10 +1,9 @@
 /** `umbracast local [WHEN] --place NAME | --at LAT,LON`: what one town sees, in its own time. */
 import type { Command } from 'commander';
-import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
-import { localCircumstances, localSummary } from '../../visibility/local.ts';
-import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localTable, type LocalReport } from '../../outputs/localFormats.ts';
+import type { LunarEclipse } from '../../eclipse/types.ts';
+import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localReport, localTable } from '../../outputs/localFormats.ts';
 import type { CommandContext } from '../context.ts';
-import { chooseEclipse, choosePlace } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions } from '../choose.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 
@@ -18,16 +17,11 @@ interface LocalOptions {
 }
 
 export function registerLocal(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('local')
     .description('local circumstances for one place: contacts in local time, Moon altitude and azimuth, the sky, a summary')
-    .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
-    .option('--place <name>', 'a place from the GeoNames gazetteer: "Lisbon", "Springfield, US-IL"')
-    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
-    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)')
-    .option('--format <name>', LOCAL_FORMATS.join(', '), 'table')
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
+  withEclipseOptions(withPlaceOptions(command).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
     .action((whenText: string | undefined, options: LocalOptions) => {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
       const chosen = choosePlace(options)!;
@@ -36,13 +30,7 @@ export function registerLocal(program: Command, context: CommandContext): void {
     });
 }
 
-export function localReport(eclipse: Parameters<typeof localCircumstances>[0], chosen: NonNullable<ReturnType<typeof choosePlace>>): LocalReport {
-  const { place, clock } = chosen;
-  const local = localCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
-  return { local, place, clock, summary: localSummary(local, clock, place.name) };
-}
-
-function renderLocal(eclipse: Parameters<typeof localCircumstances>[0], chosen: NonNullable<ReturnType<typeof choosePlace>>, format: (typeof LOCAL_FORMATS)[number]): string {
+function renderLocal(eclipse: LunarEclipse, chosen: NonNullable<ReturnType<typeof choosePlace>>, format: (typeof LOCAL_FORMATS)[number]): string {
   const report = localReport(eclipse, chosen);
   switch (format) {
     case 'table': return localTable(report);

@@ -3,7 +3,6 @@ import { mkdirSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
-import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
@@ -25,7 +24,7 @@ import {
   WHEN_EXPECTED,
   type PixelSize,
 } from '../options.ts';
-import { chooseEclipse, choosePlace } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions } from '../choose.ts';
 
 export interface MapOptions {
   projection: string;
@@ -61,8 +60,17 @@ const PRESET_SIZES: Record<'card' | 'square', PixelSize> = {
 /** Print pages are 0.62 as tall as wide: a world map with its title and legend. */
 const PRINT_ASPECT = 0.62;
 
+/** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
+export function withSizeOptions(command: Command, defaultSize: string): Command {
+  return command
+    .option('--size <WxH>', `image size in pixels (default ${defaultSize})`)
+    .option('--preset <name>', 'card (1200x675), square (1080x1080) or print (see --width-mm, --dpi)')
+    .option('--width-mm <mm>', 'print width in millimetres (with --preset print)', '180')
+    .option('--dpi <n>', 'pixels per inch to record in the file (default 300 for print, else 72)');
+}
+
 export function registerMap(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('map')
     .description('render one eclipse as a visibility map (PNG, SVG, WebP, JPEG or GeoJSON)')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
@@ -73,23 +81,19 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--tz <zone>', 'show times in this IANA time zone', 'UTC')
     .option('--borders <style>', `${BORDER_STYLES.join(' or ')}`, 'countries')
     .option('--title <text>', 'replace the generated title')
-    .option('--theme <name>', `${THEME_NAMES.join(', ')}`, 'light')
-    .option('--size <WxH>', `image size in pixels (default ${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx})`)
-    .option('--preset <name>', 'card (1200x675), square (1080x1080) or print (see --width-mm, --dpi)')
-    .option('--width-mm <mm>', 'print width in millimetres (with --preset print)', '180')
-    .option('--dpi <n>', 'pixels per inch to record in the file (default 300 for print, else 72)')
+    .option('--theme <name>', `${THEME_NAMES.join(', ')}`, 'light');
+  withSizeOptions(command, `${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx}`);
+  withEclipseOptions(command
     .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png)')
-    .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`)
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`))
     .option('--mark <place>', 'mark a place with its local time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
-    .action(async (whenText: string | undefined, options: MapOptions, command: Command) => {
+    .action(async (whenText: string | undefined, options: MapOptions, self: Command) => {
       if (options.style !== undefined) {
         const fromStyle = optionsFromStyle(loadStyle(options.style)) as Record<string, unknown>;
         const given = options as unknown as Record<string, unknown>;
         for (const [key, value] of Object.entries(fromStyle)) {
-          const source = command.getOptionValueSource(key);
+          const source = self.getOptionValueSource(key);
           if (source === undefined || source === 'default') given[key] = value;
         }
       }

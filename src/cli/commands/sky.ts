@@ -1,17 +1,16 @@
 /** `umbracast sky [WHEN] --place NAME`: the view from one place — the Moon's path through the night, the phases, the twilight. */
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
-import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
 import { foldName } from '../../places/gazetteer.ts';
 import { THEME_NAMES, THEMES } from '../../map/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
 import { renderSkyFile, SKY_FORMATS } from '../../outputs/skyFile.ts';
-import { chooseEclipse, choosePlace } from '../choose.ts';
+import { localReport } from '../../outputs/localFormats.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
-import { localReport } from './local.ts';
-import { MAX_TITLE_CHARS, parseOutput, parseSizeAndDpi, type SizeOptions } from './map.ts';
+import { MAX_TITLE_CHARS, parseOutput, parseSizeAndDpi, withSizeOptions, type SizeOptions } from './map.ts';
 
 interface SkyOptions extends SizeOptions {
   place?: string;
@@ -26,23 +25,17 @@ interface SkyOptions extends SizeOptions {
 }
 
 export function registerSky(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('sky')
     .description('the view from one place: the Moon\'s altitude through the night, the eclipse phases, twilight')
-    .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
-    .option('--place <name>', 'a place from the GeoNames gazetteer: "Lisbon", "Springfield, US-IL"')
-    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
-    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
+  withPlaceOptions(command)
     .option('--theme <name>', THEME_NAMES.join(', '), 'light')
-    .option('--title <text>', 'replace the generated title')
-    .option('--size <WxH>', 'image size in pixels (default 1600x900)')
-    .option('--preset <name>', 'card (1200x675), square (1080x1080) or print (see --width-mm, --dpi)')
-    .option('--width-mm <mm>', 'print width in millimetres (with --preset print)', '180')
-    .option('--dpi <n>', 'pixels per inch to record in the file (default 300 for print, else 72)')
+    .option('--title <text>', 'replace the generated title');
+  withSizeOptions(command, '1600x900');
+  withEclipseOptions(command
     .option('-o, --output <file>', 'output file; .png, .svg, .webp or .jpg (default out/<id>-<kind>-sky-<place>.png)')
-    .option('--format <name>', SKY_FORMATS.join(', '))
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model')
+    .option('--format <name>', SKY_FORMATS.join(', ')))
     .action(async (whenText: string | undefined, options: SkyOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
       const { size, dpi } = parseSizeAndDpi(options, { widthPx: 1600, heightPx: 900 });

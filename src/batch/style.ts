@@ -15,10 +15,8 @@ import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
+import { DEFAULT_NAMING, NAMING_FIELDS } from './naming.ts';
 
-/** Placeholders a naming template may use. */
-export const NAMING_FIELDS = ['id', 'kind', 'year', 'saros'] as const;
-export const DEFAULT_NAMING = '{id}-{kind}';
 /** Style files larger than this are refused: a style is a page of settings. */
 export const MAX_STYLE_BYTES = 256 * 1024;
 
@@ -119,15 +117,4 @@ export function loadStyle(path: string): HouseStyle {
 export function styleHash(style: HouseStyle): string {
   const sorted = JSON.stringify(style, Object.keys(style).sort());
   return createHash('sha256').update(sorted).digest('hex').slice(0, 16);
-}
-
-/** Fill a naming template for one eclipse. */
-export function fileStem(template: string, eclipse: { id: string; kind: string; saros: number }): string {
-  const values: Record<(typeof NAMING_FIELDS)[number], string> = {
-    id: eclipse.id,
-    kind: eclipse.kind,
-    year: eclipse.id.slice(0, 4),
-    saros: String(eclipse.saros),
-  };
-  return template.replace(/\{(id|kind|year|saros)\}/g, (_, key: (typeof NAMING_FIELDS)[number]) => values[key]);
 }

@@ -9,12 +9,12 @@ import { foldName } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
-import { captionText, renderMapFiles } from '../outputs/mapFile.ts';
-import { thumbnail } from '../raster/raster.ts';
+import { captionText } from '../outputs/caption.ts';
+import { renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../cli/choose.ts';
-import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/commands/map.ts';
-import { fileStem } from './style.ts';
+import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/mapSettings.ts';
+import { fileStem } from './naming.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
@@ -39,11 +39,11 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
     written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
   };
 
-  const { files, scene, caption } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats);
+  const { files, caption, thumbnail } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats, THUMBNAIL_WIDTH_PX);
   for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
   await write(`${stem}.txt`, 'caption', captionText(caption));
   mkdirSync(join(outDir, 'thumbs'), { recursive: true });
-  await write(`thumbs/${stem}.png`, 'thumbnail', await thumbnail(scene.svg, THUMBNAIL_WIDTH_PX, settings.size.widthPx));
+  await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail!);
 
   for (const name of style.places) {
     const chosen = choosePlace({ place: name })!;

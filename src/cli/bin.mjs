@@ -1,7 +1,17 @@
 #!/usr/bin/env node
-// Entry point for `npx umbracast`: load the TypeScript sources through tsx.
-import { register } from 'tsx/esm/api';
+// Entry point for `npx umbracast`: run our build (plain JavaScript, made on
+// first use and whenever the sources change; see src/bundle/bundle.mjs), or
+// the TypeScript sources through tsx if no build can be made.
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { ensureBundle } from '../bundle/bundle.mjs';
 
-register();
-const { main } = await import('./main.ts');
+let main;
+try {
+  ({ main } = await import(pathToFileURL(join(await ensureBundle(), 'main.js')).href));
+} catch {
+  const { register } = await import('tsx/esm/api');
+  register();
+  ({ main } = await import('./main.ts'));
+}
 process.exitCode = await main(process.argv.slice(2));

@@ -83,3 +83,8 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const altText = `World map of where the ${eclipse.kind} lunar eclipse of ${clock.date(at)} can be seen: ${altParts.join('; ')}${hidden.length > 0 ? `; not from ${listWords(hidden)}` : ''}.`;
   return { caption, altText, countries };
 }
+
+/** The caption file published beside a picture. */
+export function captionText(caption: Caption): string {
+  return `${caption.caption}\n\nAlt text: ${caption.altText}\n`;
+}

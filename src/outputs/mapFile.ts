@@ -6,7 +6,7 @@
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { civilClock } from '../ephemeris/civilTime.ts';
 import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
-import { rasterise } from '../raster/raster.ts';
+import { rasteriseSet, RASTER_FORMATS, type RasterFormat } from '../raster/raster.ts';
 import { localCircumstances } from '../visibility/local.ts';
 import { visibilityOf } from '../visibility/visibility.ts';
 import { eclipseCaption, type Caption } from './caption.ts';
@@ -49,11 +49,6 @@ export function markLabel(eclipse: LunarEclipse, place: PlaceLabel): string {
   return `${place.name} · ${phrase}`;
 }
 
-/** The caption file published beside a picture. */
-export function captionText(caption: Caption): string {
-  return `${caption.caption}\n\nAlt text: ${caption.altText}\n`;
-}
-
 export async function renderMapFile(request: MapRequest): Promise<MapFile> {
   const { files, scene, caption } = await renderMapFiles(request, [request.format]);
   return { bytes: files.get(request.format)!, ...(request.format === 'geojson' ? {} : { scene, caption }) };
@@ -61,20 +56,30 @@ export async function renderMapFile(request: MapRequest): Promise<MapFile> {
 
 /**
  * One eclipse in several formats at once: the scene and caption are made
- * once and serve every picture format (a batch asks for PNG and SVG together).
+ * once and serve every picture format (a batch asks for PNG and SVG
+ * together), and the raster formats, with a thumbnail if asked, come from
+ * one drawing of the scene.
  */
-export async function renderMapFiles(request: Omit<MapRequest, 'format'>, formats: readonly MapFormat[]): Promise<{ files: Map<MapFormat, Uint8Array>; scene: Scene; caption: Caption }> {
+export async function renderMapFiles(
+  request: Omit<MapRequest, 'format'>,
+  formats: readonly MapFormat[],
+  thumbnailWidthPx?: number,
+): Promise<{ files: Map<MapFormat, Uint8Array>; scene: Scene; caption: Caption; thumbnail?: Uint8Array }> {
   const visibility = visibilityOf(request.eclipse);
   const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p) }));
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
+  const rasters = await rasteriseSet(
+    { svg: scene.svg, widthPx: request.size.widthPx },
+    formats.filter((f): f is RasterFormat => (RASTER_FORMATS as readonly string[]).includes(f)),
+    { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` },
+    thumbnailWidthPx,
+  );
   const files = new Map<MapFormat, Uint8Array>();
   for (const format of formats) {
     if (format === 'geojson') files.set(format, Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`));
     else if (format === 'svg') files.set(format, Buffer.from(`${scene.svg}\n`));
-    else {
-      files.set(format, await rasterise(scene.svg, { format, dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` }));
-    }
+    else files.set(format, rasters.files.get(format)!);
   }
-  return { files, scene, caption };
+  return { files, scene, caption, ...(rasters.thumbnail ? { thumbnail: rasters.thumbnail } : {}) };
 }

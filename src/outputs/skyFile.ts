@@ -5,12 +5,12 @@ import type { PageSize } from '../map/draw.ts';
 import { composeSkyScene } from '../map/skyScene.ts';
 import type { Theme } from '../map/theme.ts';
 import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
-import { rasterise, type RasterFormat } from '../raster/raster.ts';
+import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../visibility/local.ts';
 import type { LocalReport } from './localFormats.ts';
 
-export type SkyFormat = RasterFormat | 'svg';
-export const SKY_FORMATS: readonly SkyFormat[] = ['png', 'svg', 'webp', 'jpg'];
+import type { SkyFormat } from './formatNames.ts';
+export { SKY_FORMATS, type SkyFormat } from './formatNames.ts';
 /** The figure shows an hour either side of the eclipse. */
 const MARGIN_DAYS = 1 / 24;
 

@@ -3,7 +3,7 @@
  * outlined, so no font is looked up; the density is recorded as asked (PNG
  * pHYs), and a title and description travel in XMP.
  */
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 
 export type RasterFormat = 'png' | 'webp' | 'jpg';
 export const RASTER_FORMATS: readonly RasterFormat[] = ['png', 'webp', 'jpg'];
@@ -33,14 +33,13 @@ export function xmpPacket(title: string, description: string): string {
 
 /** A small PNG of an SVG picture, drawn at reduced density (no full-size image in memory). */
 export async function thumbnail(svg: string, widthPx: number, fullWidthPx: number): Promise<Buffer> {
-  return sharp(Buffer.from(svg), { density: (72 * widthPx) / fullWidthPx }).png({ compressionLevel: 9 }).toBuffer();
+  return sharp(Buffer.from(svg), { density: (72 * widthPx) / fullWidthPx }).png(THUMBNAIL_PNG).toBuffer();
 }
 
-export async function rasterise(svg: string, options: RasterOptions): Promise<Buffer> {
-  // librsvg reads the SVG's own pixel size; density 72 keeps one SVG px = one image px.
-  // (Drawing layers side by side does not pay: libvips loads one SVG at a time,
-  // and every extra surface costs as much as a basemap.)
-  let image = sharp(Buffer.from(svg), { density: 72, limitInputPixels: false }).withDensity(options.dpi);
+const THUMBNAIL_PNG = { compressionLevel: 9 } as const;
+
+function encode(image: Sharp, options: RasterOptions): Promise<Buffer> {
+  image = image.withDensity(options.dpi);
   if (options.title !== undefined) image = image.withXmp(xmpPacket(options.title, options.description ?? ''));
   switch (options.format) {
     case 'png':
@@ -54,4 +53,48 @@ export async function rasterise(svg: string, options: RasterOptions): Promise<Bu
       break;
   }
   return image.toBuffer();
+}
+
+// librsvg reads the SVG's own pixel size; density 72 keeps one SVG px = one image px.
+// (Drawing layers side by side does not pay: libvips loads one SVG at a time,
+// and every extra surface costs as much as a basemap.)
+const drawing = (svg: string) => sharp(Buffer.from(svg), { density: 72, limitInputPixels: false });
+
+export async function rasterise(svg: string, options: RasterOptions): Promise<Buffer> {
+  return encode(drawing(svg), options);
+}
+
+export interface RasterSet {
+  readonly files: Map<RasterFormat, Buffer>;
+  readonly thumbnail?: Buffer;
+}
+
+const shrink = (image: Buffer | Sharp, widthPx: number) => (Buffer.isBuffer(image) ? sharp(image) : image).resize({ width: widthPx }).png(THUMBNAIL_PNG).toBuffer();
+
+/**
+ * The raster files of one SVG picture, and optionally a thumbnail of it.
+ * librsvg's cost is in the paths, not the pixels, so the SVG is drawn once:
+ * one file is drawn straight into its encoder and the thumbnail shrunk from
+ * that file (decoding it costs a fraction of drawing again, and the pixels
+ * live in libvips only while it runs); several files share one drawing held
+ * as raw pixels. With no raster file, the thumbnail is drawn small.
+ */
+export async function rasteriseSet(
+  picture: { readonly svg: string; readonly widthPx: number },
+  formats: readonly RasterFormat[],
+  options: Omit<RasterOptions, 'format'>,
+  thumbnailWidthPx?: number,
+): Promise<RasterSet> {
+  const { svg } = picture;
+  const files = new Map<RasterFormat, Buffer>();
+  if (formats.length <= 1) {
+    const format = formats[0];
+    if (format !== undefined) files.set(format, await rasterise(svg, { ...options, format }));
+    if (thumbnailWidthPx === undefined) return { files };
+    return { files, thumbnail: format !== undefined ? await shrink(files.get(format)!, thumbnailWidthPx) : await thumbnail(svg, thumbnailWidthPx, picture.widthPx) };
+  }
+  const { data, info } = await drawing(svg).raw().toBuffer({ resolveWithObject: true });
+  const pixels = () => sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels }, limitInputPixels: false });
+  for (const format of formats) files.set(format, await encode(pixels(), { ...options, format }));
+  return thumbnailWidthPx === undefined ? { files } : { files, thumbnail: await shrink(pixels(), thumbnailWidthPx) };
 }

@@ -9,6 +9,7 @@ import { test } from 'node:test';
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import sharp from 'sharp';
 import { THEMES } from '../../src/map/theme.ts';
+import { rasterise, rasteriseSet } from '../../src/raster/raster.ts';
 import { stage, visibilityOf, ZONE_ORDER, type ZoneName } from '../../src/visibility/visibility.ts';
 import { eclipseOn, render } from './support.ts';
 
@@ -109,4 +110,32 @@ test('the PNG carries its title, caption and alt text in XMP (dc:title, dc:descr
   assert.match(xmp, /<dc:title><rdf:Alt><rdf:li xml:lang="x-default">Total lunar eclipse · 3 March 2026</);
   assert.match(xmp, /<dc:description><rdf:Alt><rdf:li xml:lang="x-default">Total lunar eclipse of 3 March 2026\. Greatest eclipse at 11:34 UTC/);
   assert.match(xmp, /Alt text: World map of where the total lunar eclipse/);
+});
+
+test('one drawing for several files: each raster file and the thumbnail match drawing the SVG for each alone', async () => {
+  const svgFile = await render({ format: 'svg', width: 960, height: 540 });
+  const svg = Buffer.from(svgFile.bytes).toString('utf8');
+  const options = { dpi: 150, title: 'Check', description: 'One drawing' };
+  const alone = await rasterise(svg, { ...options, format: 'png' });
+  const pixels = async (image: Uint8Array) => (await sharp(image).ensureAlpha().raw().toBuffer()).toString('base64');
+
+  // One file: drawn straight into its encoder, byte for byte as alone; the thumbnail is shrunk from it.
+  const single = await rasteriseSet({ svg, widthPx: 960 }, ['png'], options, 240);
+  assert.equal(sha256(single.files.get('png')!), sha256(alone));
+  const thumb = await sharp(single.thumbnail!).metadata();
+  assert.deepEqual([thumb.format, thumb.width, thumb.height], ['png', 240, 135]);
+
+  // Several files: every one decodes at full size; the PNG has the same pixels as the lone drawing.
+  const several = await rasteriseSet({ svg, widthPx: 960 }, ['png', 'webp', 'jpg'], options, 240);
+  assert.equal(await pixels(several.files.get('png')!), await pixels(alone));
+  for (const [format, name] of [['webp', 'webp'], ['jpg', 'jpeg']] as const) {
+    const meta = await sharp(several.files.get(format)!).metadata();
+    assert.deepEqual([meta.format, meta.width, meta.height], [name, 960, 540]);
+  }
+  assert.equal(await pixels(several.thumbnail!), await pixels(single.thumbnail!), 'the thumbnail is the same whichever way it was made');
+
+  // No raster file at all (an SVG-only style): the thumbnail is drawn small.
+  const none = await rasteriseSet({ svg, widthPx: 960 }, [], options, 240);
+  assert.equal(none.files.size, 0);
+  assert.equal((await sharp(none.thumbnail!).metadata()).width, 240);
 });

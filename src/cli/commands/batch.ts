@@ -10,7 +10,7 @@ import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
 import { mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
 import { DEFAULT_STYLE, loadStyle, type HouseStyle } from '../../batch/style.ts';
 import { choosePlace } from '../choose.ts';
-import { mapSettings, optionsFromStyle, type MapOptions } from './map.ts';
+import { mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import { toolVersion } from '../version.ts';
@@ -46,7 +46,7 @@ export function registerBatch(program: Command, context: CommandContext): void {
     .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
     .option('--style <file>', 'house style, JSON or YAML (see README)')
     .option('--out <dir>', 'output folder (made if its parent exists)', 'out')
-    .option('--jobs <n>', 'worker threads (default: the number of cores)')
+    .option('--jobs <n>', 'worker processes (default: the number of cores)')
     .option('--force', 'redo everything, even what is up to date')
     .option('--shard <I/N>', 'render only the I-th of N disjoint parts of the range')
     .option('--merge <dirs...>', 'combine the shard manifests found in these folders into --out/manifest.json')
@@ -71,8 +71,8 @@ export function registerBatch(program: Command, context: CommandContext): void {
       const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
       const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
       checkStyleSettings(style, options.style ?? 'the default style');
-      const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker threads' });
-      if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker threads from 1 to ${MAX_JOBS}`, options.jobs);
+      const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });
+      if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker processes from 1 to ${MAX_JOBS}`, options.jobs);
       const shard = options.shard === undefined ? null : parseShard(options.shard);
       const progress = progressReporter(context);
       const controller = new AbortController();

@@ -1,10 +1,6 @@
 /** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
 import type { Command } from 'commander';
 import { civilClock } from '../../ephemeris/civilTime.ts';
-import { eclipseCaption } from '../../outputs/caption.ts';
-import { captionText } from '../../outputs/mapFile.ts';
-import { localReport } from '../../outputs/localFormats.ts';
-import { visibilityOf } from '../../visibility/visibility.ts';
 import { chooseEclipse, choosePlace, withEclipseOptions } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { WHEN_EXPECTED } from '../options.ts';
@@ -26,11 +22,17 @@ export function registerCaption(program: Command, context: CommandContext): void
     .option('--place <name>', 'add what readers in this place will see')
     .option('--at <LAT,LON>', 'add what is seen from this point');
   withEclipseOptions(command)
-    .action((whenText: string | undefined, options: CaptionOptions) => {
+    .action(async (whenText: string | undefined, options: CaptionOptions) => {
       const clock = civilClock(options.tz.trim(), '--tz');
       // The place's own summary uses the caption's zone, so that one text reads in one time.
       const chosen = choosePlace({ ...options, tz: options.tz }, false);
       const eclipse = chooseEclipse(whenText, options, context.now());
+      // The geometry (world data, the visibility model) loads when a caption is written.
+      const [{ eclipseCaption, captionText }, { visibilityOf }, { localReport }] = await Promise.all([
+        import('../../outputs/caption.ts'),
+        import('../../visibility/visibility.ts'),
+        import('../../outputs/localFormats.ts'),
+      ]);
       const extra = chosen ? localReport(eclipse, chosen).summary : undefined;
       context.stdout(captionText(eclipseCaption(eclipse, visibilityOf(eclipse), clock, extra)));
     });

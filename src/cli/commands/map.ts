@@ -3,62 +3,16 @@ import { mkdirSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
-import { civilClock } from '../../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../../map/basemap.ts';
-import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
-import { THEME_NAMES, THEMES } from '../../map/theme.ts';
+import { PROJECTION_NAMES } from '../../map/projection.ts';
+import { THEME_NAMES } from '../../map/theme.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
-import { captionText, MAP_FORMATS, renderMapFile, type MapFormat } from '../../outputs/mapFile.ts';
+import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
-import type { MapStyle } from '../../map/scene.ts';
-import type { PlaceLabel } from '../../outputs/localFormats.ts';
-import { loadStyle, type HouseStyle } from '../../batch/style.ts';
 import { toolVersion } from '../version.ts';
-import {
-  checkPixelSize,
-  parseBoundingBox,
-  parseChoice,
-  parseLatLon,
-  parseNumber,
-  parseSize,
-  WHEN_EXPECTED,
-  type PixelSize,
-} from '../options.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions } from '../choose.ts';
-
-export interface MapOptions {
-  projection: string;
-  bbox?: string;
-  centre?: string;
-  span?: string;
-  tz: string;
-  borders: string;
-  title?: string;
-  theme: string;
-  size?: string;
-  preset?: string;
-  widthMm?: string;
-  dpi?: string;
-  output?: string;
-  format?: string;
-  convention: string;
-  deltaT?: string;
-  mark: string[];
-  style?: string;
-}
-
-/** A title longer than this would not fit any page we draw. */
-export const MAX_TITLE_CHARS = 300;
-
-export type SizePreset = 'card' | 'square' | 'print';
-export const SIZE_PRESETS: readonly SizePreset[] = ['card', 'square', 'print'];
-export const DEFAULT_SIZE: PixelSize = { widthPx: 2400, heightPx: 1350 };
-const PRESET_SIZES: Record<'card' | 'square', PixelSize> = {
-  card: { widthPx: 1200, heightPx: 675 },
-  square: { widthPx: 1080, heightPx: 1080 },
-};
-/** Print pages are 0.62 as tall as wide: a world map with its title and legend. */
-const PRINT_ASPECT = 0.62;
+import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { chooseEclipse, withEclipseOptions } from '../choose.ts';
+import { DEFAULT_SIZE, mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.ts';
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
 export function withSizeOptions(command: Command, defaultSize: string): Command {
@@ -90,6 +44,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
     .action(async (whenText: string | undefined, options: MapOptions, self: Command) => {
       if (options.style !== undefined) {
+        const { loadStyle } = await import('../../batch/style.ts');
         const fromStyle = optionsFromStyle(loadStyle(options.style)) as Record<string, unknown>;
         const given = options as unknown as Record<string, unknown>;
         for (const [key, value] of Object.entries(fromStyle)) {
@@ -100,38 +55,6 @@ export function registerMap(program: Command, context: CommandContext): void {
       // The path written, on stdout, so that scripts can pick it up.
       context.stdout(`${await runMap(whenText, options, context)}\n`);
     });
-}
-
-function parseView(options: MapOptions): View {
-  const projection = parseChoice('--projection', options.projection, PROJECTION_NAMES);
-  if (options.bbox !== undefined && options.centre !== undefined) throw new InputError('--bbox', 'either --bbox or --centre, not both', options.bbox);
-  if (options.bbox !== undefined) return { projection: 'region', bbox: parseBoundingBox(options.bbox) };
-  if (options.centre !== undefined) {
-    return { projection: 'region', centre: parseLatLon('--centre', options.centre), spanDeg: parseNumber('--span', options.span ?? '60', { min: 2, max: 180, unit: 'degrees' }) };
-  }
-  if (projection === 'region') throw new InputError('--projection', 'region together with --bbox W,S,E,N or --centre LAT,LON', 'region alone');
-  return { projection };
-}
-
-export interface SizeOptions {
-  size?: string;
-  preset?: string;
-  widthMm?: string;
-  dpi?: string;
-}
-
-export function parseSizeAndDpi(options: SizeOptions, defaultSize: PixelSize = DEFAULT_SIZE): { size: PixelSize; dpi: number } {
-  const dpiOf = (fallback: number) => (options.dpi === undefined ? fallback : parseNumber('--dpi', options.dpi, { min: 36, max: 1200, unit: 'pixels per inch' }));
-  if (options.size !== undefined && options.preset !== undefined) throw new InputError('--size', 'either --size or --preset, not both', options.size);
-  if (options.size !== undefined) return { size: parseSize(options.size), dpi: dpiOf(72) };
-  if (options.preset === undefined) return { size: defaultSize, dpi: dpiOf(72) };
-  const preset = parseChoice('--preset', options.preset, SIZE_PRESETS);
-  if (preset !== 'print') return { size: PRESET_SIZES[preset], dpi: dpiOf(72) };
-  const dpi = dpiOf(300);
-  const widthMm = parseNumber('--width-mm', options.widthMm ?? '180', { min: 20, max: 2000, unit: 'millimetres' });
-  const widthPx = Math.round((widthMm / 25.4) * dpi);
-  const size = { widthPx, heightPx: Math.round(widthPx * PRINT_ASPECT) };
-  return { size: checkPixelSize('--width-mm', size, `${widthMm} mm at ${dpi} dpi = ${size.widthPx}x${size.heightPx} px`), dpi };
 }
 
 const listOr = (items: string[]) => (items.length > 1 ? `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}` : items.join(''));
@@ -168,52 +91,13 @@ export function captionPathFor(path: string): string {
   return path.slice(0, path.length - extname(path).length) + '.txt';
 }
 
-/** Everything a map needs besides the eclipse, parsed and checked (shared by map and batch). */
-export interface MapSettings {
-  readonly style: MapStyle;
-  readonly size: PixelSize;
-  readonly dpi: number;
-  readonly marks: readonly PlaceLabel[];
-}
-
-export function mapSettings(options: MapOptions): MapSettings {
-  const view = parseView(options);
-  const { size, dpi } = parseSizeAndDpi(options);
-  const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
-  const borders = parseChoice('--borders', options.borders, BORDER_STYLES);
-  const clock = civilClock(options.tz.trim(), '--tz');
-  const title = options.title;
-  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, title);
-  if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
-  const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
-  return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
-}
-
-/** A house style as map options, for whatever the command line leaves unset. */
-export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
-  return {
-    theme: style.theme,
-    projection: style.bbox || style.centre ? 'region' : style.projection,
-    ...(style.bbox ? { bbox: style.bbox.join(',') } : {}),
-    ...(style.centre ? { centre: style.centre.join(','), span: String(style.span ?? 60) } : {}),
-    ...(style.size ? { size: style.size } : {}),
-    ...(style.preset ? { preset: style.preset } : {}),
-    ...(style.widthMm !== undefined ? { widthMm: String(style.widthMm) } : {}),
-    ...(style.dpi !== undefined ? { dpi: String(style.dpi) } : {}),
-    tz: style.tz,
-    borders: style.borders,
-    ...(style.title !== undefined ? { title: style.title } : {}),
-    mark: style.marks,
-    convention: style.convention,
-    ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
-  };
-}
-
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
 export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
   const settings = mapSettings(options);
   const eclipse = chooseEclipse(whenText, options, context.now());
   const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}`, MAP_FORMATS);
+  // The drawing code (fonts, world data, sharp) loads when a map is drawn, not with the command line.
+  const [{ renderMapFile }, { captionText }] = await Promise.all([import('../../outputs/mapFile.ts'), import('../../outputs/caption.ts')]);
   const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });
   await writeFileAtomic(path, file.bytes);
   // Every picture gets its caption beside it.

@@ -4,13 +4,13 @@ import { InputError } from '../../errors.ts';
 import { foldName } from '../../places/gazetteer.ts';
 import { THEME_NAMES, THEMES } from '../../map/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
-import { renderSkyFile, SKY_FORMATS } from '../../outputs/skyFile.ts';
-import { localReport } from '../../outputs/localFormats.ts';
+import { SKY_FORMATS } from '../../outputs/formatNames.ts';
 import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
-import { MAX_TITLE_CHARS, parseOutput, parseSizeAndDpi, withSizeOptions, type SizeOptions } from './map.ts';
+import { parseOutput, withSizeOptions } from './map.ts';
+import { MAX_TITLE_CHARS, parseSizeAndDpi, type SizeOptions } from '../mapSettings.ts';
 
 interface SkyOptions extends SizeOptions {
   place?: string;
@@ -44,6 +44,8 @@ export function registerSky(program: Command, context: CommandContext): void {
       const eclipse = chooseEclipse(whenText, options, context.now());
       const slug = foldName(chosen.place.name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
       const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-sky-${slug}`, SKY_FORMATS);
+      // The drawing code loads when a figure is drawn, not with the command line.
+      const [{ renderSkyFile }, { localReport }] = await Promise.all([import('../../outputs/skyFile.ts'), import('../../outputs/localFormats.ts')]);
       const file = await renderSkyFile({
         report: localReport(eclipse, chosen),
         theme,

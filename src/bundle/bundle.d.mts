@@ -1,0 +1,6 @@
+/** Types for bundle.mjs (plain JavaScript, so that the entry script can load it before tsx). */
+export declare const LEFT_OUTSIDE: readonly string[];
+export declare function projectRoot(from?: string): string;
+export declare function bundleKey(root?: string): string;
+export declare function bundleFolder(root?: string): string;
+export declare function ensureBundle(root?: string): Promise<string>;

@@ -1,0 +1,89 @@
+/**
+ * The command line and the batch workers run our build (src/bundle/bundle.mjs):
+ * it must be named by what it is made from, and behave exactly as the sources
+ * do. Same inputs, same bytes, whichever runs (common practice: a build step
+ * must not change behaviour).
+ */
+import assert from 'node:assert/strict';
+import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { test } from 'node:test';
+import { bundleKey, ensureBundle, projectRoot } from '../../src/bundle/bundle.mjs';
+
+const bin = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
+const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
+
+function umbracast(args: string[], env: Record<string, string> = {}) {
+  const result = spawnSync(process.execPath, [bin, ...args], { encoding: 'buffer', env: { ...process.env, ...env } });
+  return { code: result.status, stdout: result.stdout, stderr: result.stderr.toString('utf8') };
+}
+
+function miniProject(): string {
+  const root = mkdtempSync(join(tmpdir(), 'umbracast-key-'));
+  writeFileSync(join(root, 'package.json'), JSON.stringify({ name: 'umbracast', version: '0.0.0' }));
+  mkdirSync(join(root, 'src', 'deep'), { recursive: true });
+  mkdirSync(join(root, 'data'));
+  mkdirSync(join(root, 'out'));
+  writeFileSync(join(root, 'src', 'deep', 'a.ts'), 'export const a = 1;\n');
+  writeFileSync(join(root, 'data', 'b.json'), '{"b": 2}\n');
+  return root;
+}
+
+test('the build is named by its inputs: same tree, same key; a changed source, data file or lock file, a new key', () => {
+  const root = miniProject();
+  const first = bundleKey(root);
+  assert.match(first, /^[0-9a-f]{16}$/);
+  assert.equal(bundleKey(root), first);
+  writeFileSync(join(root, 'out', 'map.png'), 'not an input');
+  assert.equal(bundleKey(root), first, 'files outside src/ and data/ do not count');
+  writeFileSync(join(root, 'src', 'deep', 'a.ts'), 'export const a = 2;\n');
+  const second = bundleKey(root);
+  assert.notEqual(second, first);
+  writeFileSync(join(root, 'data', 'b.json'), '{"b": 3}\n');
+  const third = bundleKey(root);
+  assert.notEqual(third, second);
+  writeFileSync(join(root, 'package-lock.json'), '{"lockfileVersion": 3}\n');
+  assert.notEqual(bundleKey(root), third);
+});
+
+test('our package folder is found from any file below it, the build folder included', async () => {
+  const root = projectRoot();
+  assert.equal(JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')).name, 'umbracast');
+  const folder = await ensureBundle();
+  assert.equal(projectRoot(join(folder, 'main.js')), root);
+  assert.equal(projectRoot(join(root, 'src', 'cli', 'bin.mjs')), root);
+});
+
+test('the command line prints the same bytes from the build and from the sources (UMBRACAST_BUILD=off)', () => {
+  const args = ['list', '--from', '2026', '--to', '2030', '--format', 'json'];
+  const built = umbracast(args);
+  const sources = umbracast(args, { UMBRACAST_BUILD: 'off' });
+  assert.equal(built.code, 0, built.stderr);
+  assert.equal(sources.code, 0, sources.stderr);
+  assert.ok(built.stdout.length > 1000);
+  assert.equal(sha256(built.stdout), sha256(sources.stdout));
+  const bad = umbracast(['list', '--from', 'soon']);
+  const badSources = umbracast(['list', '--from', 'soon'], { UMBRACAST_BUILD: 'off' });
+  assert.equal(bad.code, 2);
+  assert.equal(bad.stderr, badSources.stderr);
+});
+
+test('a map and a batch come out byte for byte the same from the build and from the sources', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-build-'));
+  const files: Record<string, string> = {};
+  for (const [name, env] of [['built', {}], ['sources', { UMBRACAST_BUILD: 'off' }]] as const) {
+    const map = umbracast(['map', '2026-03-03', '--size', '800x450', '-o', join(dir, `${name}.png`)], env);
+    assert.equal(map.code, 0, map.stderr);
+    files[`${name}.png`] = sha256(readFileSync(join(dir, `${name}.png`)));
+    const batch = umbracast(['batch', '--from', '2026', '--to', '2026', '--out', join(dir, name), '--jobs', '1'], env);
+    assert.equal(batch.code, 0, batch.stderr);
+    const manifest = JSON.parse(readFileSync(join(dir, name, 'manifest.json'), 'utf8')) as { eclipses: { files: { path: string; sha256: string }[] }[] };
+    files[`${name} batch`] = JSON.stringify(manifest.eclipses.flatMap((e) => e.files.map((f) => [f.path, f.sha256])));
+  }
+  assert.equal(files['built.png'], files['sources.png']);
+  assert.equal(files['built batch'], files['sources batch']);
+  assert.equal(JSON.parse(files['built batch']!).length, 6, 'two eclipses in 2026, each a PNG, a caption and a thumbnail');
+});

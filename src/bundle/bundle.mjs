@@ -17,9 +17,9 @@
  * Plain JavaScript, so that the entry script can use it before any loader.
  */
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
-import { dirname, join } from 'node:path';
+import { basename, dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 /** Packages the build imports at run time rather than contains: native code, files read or run beside their module, the build tools. */
@@ -68,6 +68,31 @@ export function bundleFolder(root = projectRoot()) {
   return join(root, 'node_modules', '.cache', 'umbracast', `build-${bundleKey(root)}`);
 }
 
+/** Builds older than this are removed when a new one is made (a batch still running from one has long since started its workers). */
+export const OLD_BUILD_AGE_MS = 24 * 3600 * 1000;
+
+/**
+ * Remove earlier builds from the cache folder: every `build-*` folder (and
+ * stray temporary) but `keep` last changed more than `OLD_BUILD_AGE_MS` ago.
+ * Returns the names removed.
+ */
+export function pruneOldBuilds(cacheFolder, keep, now = Date.now()) {
+  if (!existsSync(cacheFolder)) return [];
+  const removed = [];
+  for (const name of readdirSync(cacheFolder)) {
+    if (name === keep || !/^(build-|batch-worker-)/.test(name)) continue;
+    const path = join(cacheFolder, name);
+    try {
+      if (now - statSync(path).mtimeMs < OLD_BUILD_AGE_MS) continue;
+      rmSync(path, { recursive: true, force: true });
+      removed.push(name);
+    } catch {
+      // Gone already, or not ours to remove: leave it.
+    }
+  }
+  return removed.sort();
+}
+
 /**
  * The build's folder, made now if it is missing. Rejects when esbuild cannot
  * make it or the folder cannot be written; callers then run the sources.
@@ -104,6 +129,7 @@ export async function ensureBundle(root = projectRoot()) {
       // Another process finished the same build first: theirs is as good as ours.
       if (!existsSync(join(folder, 'worker.js'))) throw error;
     }
+    pruneOldBuilds(dirname(folder), basename(folder));
     return folder;
   } finally {
     rmSync(temporary, { recursive: true, force: true });

@@ -7,11 +7,11 @@
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { test } from 'node:test';
-import { bundleKey, ensureBundle, projectRoot } from '../../src/bundle/bundle.mjs';
+import { bundleKey, ensureBundle, OLD_BUILD_AGE_MS, projectRoot, pruneOldBuilds } from '../../src/bundle/bundle.mjs';
 
 const bin = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
 const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
@@ -86,4 +86,25 @@ test('a map and a batch come out byte for byte the same from the build and from 
   assert.equal(files['built.png'], files['sources.png']);
   assert.equal(files['built batch'], files['sources batch']);
   assert.equal(JSON.parse(files['built batch']!).length, 6, 'two eclipses in 2026, each a PNG, a caption and a thumbnail');
+});
+
+test('a new build removes builds a day old, and nothing else: not the current one, not a recent one, not other files', () => {
+  const cache = mkdtempSync(join(tmpdir(), 'umbracast-cache-'));
+  const now = Date.now();
+  const made = (name: string, ageMs: number) => {
+    mkdirSync(join(cache, name));
+    writeFileSync(join(cache, name, 'main.js'), '');
+    utimesSync(join(cache, name), (now - ageMs) / 1000, (now - ageMs) / 1000);
+  };
+  made('build-aaaaaaaaaaaaaaaa', 3 * OLD_BUILD_AGE_MS);
+  made('build-bbbbbbbbbbbbbbbb', OLD_BUILD_AGE_MS / 2);
+  made('build-cccccccccccccccc', 5 * OLD_BUILD_AGE_MS);
+  made('something-else', 9 * OLD_BUILD_AGE_MS);
+  writeFileSync(join(cache, 'batch-worker-0123456789abcdef.mjs'), '');
+  utimesSync(join(cache, 'batch-worker-0123456789abcdef.mjs'), (now - 2 * OLD_BUILD_AGE_MS) / 1000, (now - 2 * OLD_BUILD_AGE_MS) / 1000);
+  assert.deepEqual(pruneOldBuilds(cache, 'build-cccccccccccccccc', now), ['batch-worker-0123456789abcdef.mjs', 'build-aaaaaaaaaaaaaaaa']);
+  assert.ok(existsSync(join(cache, 'build-bbbbbbbbbbbbbbbb')), 'a recent build stays');
+  assert.ok(existsSync(join(cache, 'build-cccccccccccccccc')), 'the current build stays, however old');
+  assert.ok(existsSync(join(cache, 'something-else')));
+  assert.deepEqual(pruneOldBuilds(join(cache, 'missing'), 'x', now), []);
 });

@@ -7,10 +7,9 @@ import type { Theme } from '../map/theme.ts';
 import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
 import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../visibility/local.ts';
+import type { SkyFormat } from './formatNames.ts';
 import type { LocalReport } from './localFormats.ts';
 
-import type { SkyFormat } from './formatNames.ts';
-export { SKY_FORMATS, type SkyFormat } from './formatNames.ts';
 /** The figure shows an hour either side of the eclipse. */
 const MARGIN_DAYS = 1 / 24;
 

@@ -69,7 +69,7 @@ test('the command line prints the same bytes from the build and from the sources
   const args = ['list', '--from', '2026', '--to', '2030', '--format', 'json'];
   const built = await fromBuild(args);
   const sources = umbracast(args, { UMBRACAST_BUILD: 'off' });
-  assert.equal(sha256(umbracast(args).stdout), sha256(built.stdout), 'bin.mjs runs the build');
+  assert.equal(sha256(umbracast(args).stdout), sha256(built.stdout), 'the entry script prints the same');
   assert.equal(built.code, 0, built.stderr);
   assert.equal(sources.code, 0, sources.stderr);
   assert.ok(built.stdout.length > 1000);

@@ -55,15 +55,20 @@ export function textBox(text: string, x: number, y: number, style: TextStyle, an
   return { left, top: y - style.sizePx * 0.8, right: left + width, bottom: y + style.sizePx * 0.25 };
 }
 
-/** A map label: outlined text over a soft halo. */
+/** The plate a map label sits on: its text box and a margin (what must not overlap another label). */
+export function plateBox(text: string, x: number, y: number, style: TextStyle, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): Box {
+  const box = textBox(text, x, y, style, anchor);
+  const pad = 2.2 * unit;
+  return { left: box.left - pad, top: box.top - pad * 0.6, right: box.right + pad, bottom: box.bottom + pad * 0.6 };
+}
+
 /**
  * A map label: outlined text on a small rounded plate of the page colour.
  * (A plate reads as well as a stroked halo and costs far less to rasterise:
  * one rectangle instead of stroking every letter's outline.)
  */
 export function labelElement(text: string, x: number, y: number, style: TextStyle, theme: Theme, unit: number, anchor: 'start' | 'middle' | 'end' = 'middle'): string {
-  const box = textBox(text, x, y, style, anchor);
-  const pad = 2.2 * unit;
-  const plate = `<rect x="${n2(box.left - pad)}" y="${n2(box.top - pad * 0.6)}" width="${n2(box.right - box.left + 2 * pad)}" height="${n2(box.bottom - box.top + pad * 1.2)}" rx="${n2(pad)}" fill="${theme.halo}" fill-opacity="${theme.haloOpacity}"/>`;
-  return `${plate}<path d="${textOutline(text, x, y, style, anchor)}" fill="${theme.text}"/>`;
+  const plate = plateBox(text, x, y, style, unit, anchor);
+  const rect = `<rect x="${n2(plate.left)}" y="${n2(plate.top)}" width="${n2(plate.right - plate.left)}" height="${n2(plate.bottom - plate.top)}" rx="${n2(2.2 * unit)}" fill="${theme.halo}" fill-opacity="${theme.haloOpacity}"/>`;
+  return `${rect}<path d="${textOutline(text, x, y, style, anchor)}" fill="${theme.text}"/>`;
 }

@@ -17,7 +17,7 @@ import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type B
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
-import { labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box } from './draw.ts';
+import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box } from './draw.ts';
 
 export interface MapStyle {
   readonly theme: Theme;
@@ -59,6 +59,8 @@ export interface Scene {
   readonly project: (place: LonLat) => [number, number] | null;
   /** The world-atlas detail drawn. */
   readonly basemapDetail: BasemapDetail;
+  /** The plates of the labels on the map (page pixels): on the zone edges and field lines, and of the marked places. */
+  readonly labelPlates: { readonly zones: readonly Box[]; readonly marks: readonly Box[] };
 }
 
 
@@ -101,36 +103,53 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
 }
 
 /**
- * Places marked on the map, each a dot and a label; the label takes the
- * first spot around its dot that overlaps no label already placed.
+ * Places marked on the map, each a dot and a label. A label takes the first
+ * spot that overlaps no plate, dot or other label already placed: the eight
+ * spots around its dot first, then the same eight directions farther out,
+ * joined to the dot by a thin leader line (so that towns a few pixels apart
+ * still get a readable label each). Only when every spot clashes does it
+ * take the one with the fewest clashes.
  */
-function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[]): string[] {
-  const out: string[] = [];
+function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[]): { elements: string[]; plates: Box[] } {
+  const elements: string[] = [];
+  const plates: Box[] = [];
   const gap = 7 * unit;
   const inFrame = (b: Box) => b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height;
   const dots = marks.map((m) => projection([m.lonDeg, m.latDeg]));
-  dots.forEach((p) => {
-    if (p) taken.push({ left: p[0] - 4 * unit, top: p[1] - 4 * unit, right: p[0] + 4 * unit, bottom: p[1] + 4 * unit });
-  });
+  const dotBox = ([x, y]: [number, number]): Box => ({ left: x - 4 * unit, top: y - 4 * unit, right: x + 4 * unit, bottom: y + 4 * unit });
+  for (const p of dots) if (p) taken.push(dotBox(p));
+  // Directions as (dx, dy, anchor): right, left, above, below, then the diagonals.
+  const directions: [number, number, 'start' | 'middle' | 'end'][] = [[1, 0, 'start'], [-1, 0, 'end'], [0, -1, 'middle'], [0, 1, 'middle'], [1, -1, 'start'], [-1, -1, 'end'], [1, 1, 'start'], [-1, 1, 'end']];
+  const reaches = [1, 2.6, 4.2, 6];
   marks.forEach((mark, i) => {
     const p = dots[i];
     if (!p) return;
     const [x, y] = p;
     const lift = style.sizePx * 0.3;
-    const spots: [number, number, 'start' | 'middle' | 'end'][] = [
-      [x + gap, y + lift, 'start'], [x - gap, y + lift, 'end'], [x, y - gap, 'middle'], [x, y + gap + style.sizePx * 0.8, 'middle'],
-      [x + gap, y - gap, 'start'], [x - gap, y - gap, 'end'], [x + gap, y + gap + style.sizePx * 0.6, 'start'], [x - gap, y + gap + style.sizePx * 0.6, 'end'],
-    ];
-    const scored = spots.map(([sx, sy, anchor]) => {
-      const box = textBox(mark.label, sx, sy, style, anchor);
-      return { sx, sy, anchor, box, clashes: taken.filter((t) => overlaps(t, box)).length + (inFrame(box) ? 0 : 10) };
-    });
-    const best = scored.find((c) => c.clashes === 0) ?? scored.reduce((a, b) => (b.clashes < a.clashes ? b : a));
-    taken.push(best.box);
-    out.push(`<circle cx="${n2(x)}" cy="${n2(y)}" r="${n2(3.2 * unit)}" fill="${theme.marker}" stroke="${theme.halo}" stroke-width="${n2(1.6 * unit)}"/>`);
-    out.push(labelElement(mark.label, best.sx, best.sy, style, theme, unit, best.anchor));
+    const candidates = reaches.flatMap((reach) =>
+      directions.map(([dx, dy, anchor]) => {
+        const sx = x + dx * gap * reach;
+        // Below the dot the baseline drops by the letters' height; beside it, the text centres on the dot.
+        const sy = dy === 0 ? y + lift : dy < 0 ? y - gap * reach : y + gap * reach + style.sizePx * 0.7;
+        const plate = plateBox(mark.label, sx, sy, style, unit, anchor);
+        return { sx, sy, anchor, plate, reach, clashes: taken.filter((t) => overlaps(t, plate)).length + (inFrame(plate) ? 0 : 10) };
+      }),
+    );
+    const best = candidates.find((c) => c.clashes === 0) ?? candidates.filter((c) => c.reach === 1).reduce((a, b) => (b.clashes < a.clashes ? b : a));
+    taken.push(best.plate);
+    plates.push(best.plate);
+    if (best.reach > 1) {
+      // A leader from the dot's edge to the nearest point of the plate.
+      const tx = Math.min(Math.max(x, best.plate.left), best.plate.right);
+      const ty = Math.min(Math.max(y, best.plate.top), best.plate.bottom);
+      const length = Math.hypot(tx - x, ty - y);
+      const start = (4 * unit) / Math.max(length, 1e-9);
+      elements.push(`<line x1="${n2(x + (tx - x) * start)}" y1="${n2(y + (ty - y) * start)}" x2="${n2(tx)}" y2="${n2(ty)}" stroke="${theme.text}" stroke-width="${n2(0.9 * unit)}" stroke-opacity="0.7"/>`);
+    }
+    elements.push(`<circle cx="${n2(x)}" cy="${n2(y)}" r="${n2(3.2 * unit)}" fill="${theme.marker}" stroke="${theme.halo}" stroke-width="${n2(1.6 * unit)}"/>`);
+    elements.push(labelElement(mark.label, best.sx, best.sy, style, theme, unit, best.anchor));
   });
-  return out;
+  return { elements, plates };
 }
 
 
@@ -292,7 +311,7 @@ export function composeScene(input: SceneInput): Scene {
   const labels: string[] = [];
   const taken: Box[] = [];
   const label = (text: string, x: number, y: number, style: TextStyle) => {
-    taken.push(textBox(text, x, y, style, 'middle'));
+    taken.push(plateBox(text, x, y, style, unit));
     labels.push(labelElement(text, x, y, style, theme, unit));
   };
   if (marker) {
@@ -323,7 +342,9 @@ export function composeScene(input: SceneInput): Scene {
     }
   }
   overlay.push(...labels);
-  overlay.push(...markElements(input.marks ?? [], projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken));
+  const zoneLabelPlates = [...taken];
+  const marked = markElements(input.marks ?? [], projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken);
+  overlay.push(...marked.elements);
 
   // Header.
   overlay.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));
@@ -350,6 +371,7 @@ export function composeScene(input: SceneInput): Scene {
     smallPrint: texts.smallPrint,
     project: (place) => projection([place[0], place[1]]),
     basemapDetail: basemap.detail,
+    labelPlates: { zones: zoneLabelPlates, marks: marked.plates },
   };
 }
 

@@ -139,3 +139,30 @@ test('one drawing for several files: each raster file and the thumbnail match dr
   assert.equal(none.files.size, 0);
   assert.equal((await sharp(none.thumbnail!).metadata()).width, 240);
 });
+
+test('marked towns a few pixels apart each get their own label: no plate overlaps another, a zone label or the frame edge', async () => {
+  const { findPlace } = await import('../../src/places/gazetteer.ts');
+  const { renderMapFile } = await import('../../src/outputs/mapFile.ts');
+  const { civilClock } = await import('../../src/ephemeris/civilTime.ts');
+  // The demo style's towns (data/styles/night-notes.yaml): Denver and Boulder lie some 40 km apart, Cheyenne 150 km north.
+  const marks = ['Denver', 'Boulder', 'Cheyenne, US'].map((name) => ({ ...findPlace(name), tz: 'America/Denver' }));
+  const disjoint = (a: { left: number; right: number; top: number; bottom: number }, b: typeof a) => a.right <= b.left || b.right <= a.left || a.bottom <= b.top || b.bottom <= a.top;
+  for (const [date, widthPx, heightPx] of [['2026-08-28', 2126, 1318], ['2026-03-03', 1200, 675], ['2026-03-03', 2400, 1350]] as const) {
+    const file = await renderMapFile({
+      eclipse: eclipseOn(date),
+      style: { theme: THEMES.light, view: { projection: 'equal-earth' }, borders: 'countries', clock: civilClock('America/Denver') },
+      size: { widthPx, heightPx },
+      dpi: 72,
+      format: 'svg',
+      generator: 'umbracast test',
+      marks,
+    });
+    const { zones, marks: plates } = file.scene!.labelPlates;
+    assert.equal(plates.length, 3, `${date} at ${widthPx} px: a label per town`);
+    for (let i = 0; i < plates.length; i++) {
+      for (let j = i + 1; j < plates.length; j++) assert.ok(disjoint(plates[i]!, plates[j]!), `${date} at ${widthPx} px: labels ${i} and ${j} overlap`);
+      for (const zone of zones) assert.ok(disjoint(plates[i]!, zone), `${date} at ${widthPx} px: label ${i} covers a zone label`);
+      assert.ok(plates[i]!.left >= 0 && plates[i]!.right <= widthPx && plates[i]!.top >= 0 && plates[i]!.bottom <= heightPx);
+    }
+  }
+});

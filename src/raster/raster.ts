@@ -31,12 +31,12 @@ export function xmpPacket(title: string, description: string): string {
   ].join('');
 }
 
+const THUMBNAIL_PNG = { compressionLevel: 9 } as const;
+
 /** A small PNG of an SVG picture, drawn at reduced density (no full-size image in memory). */
 export async function thumbnail(svg: string, widthPx: number, fullWidthPx: number): Promise<Buffer> {
   return sharp(Buffer.from(svg), { density: (72 * widthPx) / fullWidthPx }).png(THUMBNAIL_PNG).toBuffer();
 }
-
-const THUMBNAIL_PNG = { compressionLevel: 9 } as const;
 
 function encode(image: Sharp, options: RasterOptions): Promise<Buffer> {
   image = image.withDensity(options.dpi);

@@ -5,7 +5,7 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
-import { foldName } from '../places/gazetteer.ts';
+import { placeSlug } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
@@ -23,10 +23,6 @@ export const THUMBNAIL_WIDTH_PX = 480;
 sharp.cache(false);
 sharp.concurrency(1);
 const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
-
-export function placeSlug(name: string): string {
-  return foldName(name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
-}
 
 export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
   const { eclipse, style, outDir, generator } = input;

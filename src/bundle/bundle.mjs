@@ -94,11 +94,15 @@ export function pruneOldBuilds(cacheFolder, keep, now = Date.now()) {
 }
 
 /**
- * The build's folder, made now if it is missing. Rejects when esbuild cannot
- * make it or the folder cannot be written; callers then run the sources.
+ * The build's folder, made now if it is missing (from code running inside a
+ * build: that build). Rejects when esbuild cannot make it or the folder
+ * cannot be written; callers then run the sources.
  */
 export async function ensureBundle(root = projectRoot()) {
   if (process.env.UMBRACAST_BUILD === 'off') throw new Error('UMBRACAST_BUILD=off: running the sources');
+  // Code running from a build serves that build (the command line's workers run what it runs), with no hashing.
+  const running = dirname(fileURLToPath(import.meta.url));
+  if (/^build-[0-9a-f]{16}$/.test(basename(running)) && existsSync(join(running, 'worker.js'))) return running;
   const folder = bundleFolder(root);
   if (existsSync(join(folder, 'main.js')) && existsSync(join(folder, 'worker.js'))) return folder;
   const { build, stop } = await import('esbuild');

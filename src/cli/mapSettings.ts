@@ -12,9 +12,9 @@ import type { MapStyle } from '../map/scene.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import type { HouseStyle } from '../batch/style.ts';
 import { checkPixelSize, parseBoundingBox, parseChoice, parseLatLon, parseNumber, parseSize, type PixelSize } from './options.ts';
-import { choosePlace } from './choose.ts';
+import { choosePlace, type EclipseChoice } from './choose.ts';
 
-export interface MapOptions {
+export interface MapOptions extends SizeOptions, EclipseChoice {
   projection: string;
   bbox?: string;
   centre?: string;
@@ -23,20 +23,20 @@ export interface MapOptions {
   borders: string;
   title?: string;
   theme: string;
-  size?: string;
-  preset?: string;
-  widthMm?: string;
-  dpi?: string;
   output?: string;
   format?: string;
-  convention: string;
-  deltaT?: string;
   mark: string[];
   style?: string;
 }
 
 /** A title longer than this would not fit any page we draw. */
 export const MAX_TITLE_CHARS = 300;
+
+/** --title, checked: some text, at most MAX_TITLE_CHARS characters. */
+export function checkTitle(title: string | undefined): string | undefined {
+  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, title);
+  return title;
+}
 
 export type SizePreset = 'card' | 'square' | 'print';
 export const SIZE_PRESETS: readonly SizePreset[] = ['card', 'square', 'print'];
@@ -94,8 +94,7 @@ export function mapSettings(options: MapOptions): MapSettings {
   const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
   const borders = parseChoice('--borders', options.borders, BORDER_STYLES);
   const clock = civilClock(options.tz.trim(), '--tz');
-  const title = options.title;
-  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, title);
+  const title = checkTitle(options.title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
   return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };

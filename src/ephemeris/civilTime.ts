@@ -21,6 +21,8 @@ export interface CivilClock {
   offset(utDays: number): string;
   /** The short name printed after a time: "CET", "UTC+09:00", or "UTC". */
   abbreviation(utDays: number): string;
+  /** The zone as the small print names it: "Europe/Berlin (CET, UTC+01:00)", or "UTC". */
+  zoneDescription(utDays: number): string;
 }
 
 /** "58 min", "3 h 27 min": durations as printed on figures and in captions. */
@@ -71,6 +73,9 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
     offset,
     abbreviation(utDays) {
       return isUtc ? 'UTC' : this.zoneLabel(utDays).split(',')[0]!;
+    },
+    zoneDescription(utDays) {
+      return isUtc ? 'UTC' : `${zone} (${this.zoneLabel(utDays)})`;
     },
   };
 }

@@ -72,3 +72,23 @@ export function labelElement(text: string, x: number, y: number, style: TextStyl
   const rect = `<rect x="${n2(plate.left)}" y="${n2(plate.top)}" width="${n2(plate.right - plate.left)}" height="${n2(plate.bottom - plate.top)}" rx="${n2(2.2 * unit)}" fill="${theme.halo}" fill-opacity="${theme.haloOpacity}"/>`;
   return `${rect}<path d="${textOutline(text, x, y, style, anchor)}" fill="${theme.text}"/>`;
 }
+
+/**
+ * Lay items out left to right from `left`, starting a new row when the next
+ * would pass `maxWidth`: the legend rows of every figure. Each item takes
+ * `widthOf(item)` and is followed by `gap`.
+ */
+export function flowRows<T>(items: readonly T[], widthOf: (item: T) => number, maxWidth: number, left: number, gap = 0): (T & { x: number })[][] {
+  const rows: (T & { x: number })[][] = [[]];
+  let cursor = 0;
+  for (const item of items) {
+    const width = widthOf(item);
+    if (cursor > 0 && cursor + width > maxWidth) {
+      rows.push([]);
+      cursor = 0;
+    }
+    rows[rows.length - 1]!.push({ ...item, x: left + cursor });
+    cursor += width + gap;
+  }
+  return rows;
+}

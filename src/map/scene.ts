@@ -17,7 +17,7 @@ import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type B
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
-import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box } from './draw.ts';
+import { flowRows, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box } from './draw.ts';
 
 export interface MapStyle {
   readonly theme: Theme;
@@ -89,7 +89,7 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
     parts.push(`in the umbra ${durationWords(eclipse.durations.partialSeconds!)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
   }
   const subtitle = parts.join(' · ');
-  const timesIn = clock.zone === 'UTC' ? 'Times in UTC' : `Times in ${clock.zone} (${clock.zoneLabel(at)})`;
+  const timesIn = `Times in ${clock.zoneDescription(at)}`;
   const convention = eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet';
   const smallPrint = [
     `${timesIn}, 24-hour clock, rounded to the minute.`,
@@ -240,17 +240,7 @@ export function composeScene(input: SceneInput): Scene {
   const swatch = 15 * unit;
   const itemGap = 16 * unit;
   const legendRowHeight = layout.legendStyle.sizePx * 1.7;
-  const legendRows: { key: string; label: string; x: number }[][] = [[]];
-  let cursor = 0;
-  for (const item of legendItems) {
-    const width = swatch + 6 * unit + measureText(item.label, layout.legendStyle);
-    if (cursor > 0 && cursor + width > contentWidth) {
-      legendRows.push([]);
-      cursor = 0;
-    }
-    legendRows[legendRows.length - 1]!.push({ ...item, x: margin + cursor });
-    cursor += width + itemGap;
-  }
+  const legendRows = flowRows(legendItems, (item) => swatch + 6 * unit + measureText(item.label, layout.legendStyle), contentWidth, margin, itemGap);
   const smallLines = wrapText(texts.smallPrint, layout.smallStyle, contentWidth);
   const smallHeight = smallLines.length * layout.smallStyle.sizePx * 1.4;
   const footerHeight = legendRows.length * legendRowHeight + 10 * unit + smallHeight;

@@ -10,7 +10,7 @@ import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../visibility/local.ts';
 import { phaseAt, skyClass } from '../visibility/local.ts';
-import { labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box, type PageSize } from './draw.ts';
+import { flowRows, labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
 
@@ -67,7 +67,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
   const headerBottom = subtitleBaseline + (summaryLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + 16 * unit;
 
-  const zoneName = clock.zone === 'UTC' ? 'UTC' : `${clock.zone} (${clock.zoneLabel(eclipse.greatest.utDays)})`;
+  const zoneName = clock.zoneDescription(eclipse.greatest.utDays);
   const smallPrint = [
     `Local time: ${zoneName}, 24-hour clock. Altitude of the Moon's centre with standard refraction, above a sea-level horizon.`,
     `Shadow: ${eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source}).`,
@@ -86,17 +86,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     ...(eclipse.kind === 'total' ? [{ fill: theme.path.total, label: 'totality', line: true }] : []),
   ];
   const legendRowHeight = layout.legendStyle.sizePx * 1.7;
-  const rows: { fill: string; label: string; line?: boolean; x: number }[][] = [[]];
-  let cursor = 0;
-  for (const item of legendItems) {
-    const width = swatch + 6 * unit + measureText(item.label, layout.legendStyle) + 14 * unit;
-    if (cursor > 0 && cursor + width > contentWidth) {
-      rows.push([]);
-      cursor = 0;
-    }
-    rows[rows.length - 1]!.push({ ...item, x: margin + cursor });
-    cursor += width;
-  }
+  const rows = flowRows(legendItems, (item) => swatch + 6 * unit + measureText(item.label, layout.legendStyle) + 14 * unit, contentWidth, margin);
   const footerHeight = rows.length * legendRowHeight + 10 * unit + smallHeight;
 
   // The plot: room on the left for altitude ticks, below for hour ticks.

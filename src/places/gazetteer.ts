@@ -37,6 +37,11 @@ export function foldName(name: string): string {
   return name.normalize('NFKD').replace(/\p{M}/gu, '').toLowerCase().replace(/[^\p{L}\p{N}]+/gu, ' ').trim();
 }
 
+/** A place name as a file-name part: "São Paulo" → "sao-paulo" (or "place" if nothing is left). */
+export function placeSlug(name: string): string {
+  return foldName(name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
+}
+
 /** The gazetteer is immutable data: load and index it once per process. */
 function placesByName(): Map<string, Place[]> {
   if (!index) {

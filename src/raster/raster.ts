@@ -4,6 +4,7 @@
  * pHYs), and a title and description travel in XMP.
  */
 import sharp, { type Sharp } from 'sharp';
+import { escapeXml } from '../map/xml.ts';
 
 export type RasterFormat = 'png' | 'webp' | 'jpg';
 export const RASTER_FORMATS: readonly RasterFormat[] = ['png', 'webp', 'jpg'];
@@ -17,10 +18,8 @@ export interface RasterOptions {
   readonly description?: string;
 }
 
-const xmlText = (text: string) => text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
-
 export function xmpPacket(title: string, description: string): string {
-  const alt = (text: string) => `<rdf:Alt><rdf:li xml:lang="x-default">${xmlText(text)}</rdf:li></rdf:Alt>`;
+  const alt = (text: string) => `<rdf:Alt><rdf:li xml:lang="x-default">${escapeXml(text)}</rdf:li></rdf:Alt>`;
   return [
     '<?xpacket begin="\uFEFF" id="W5M0MpCehiHzreSzNTczkc9d"?>',
     '<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#">',

@@ -1,16 +1,13 @@
 /** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
 import type { Command } from 'commander';
 import { civilClock } from '../../ephemeris/civilTime.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { WHEN_EXPECTED } from '../options.ts';
 
-interface CaptionOptions {
+interface CaptionOptions extends PlaceChoice, EclipseChoice {
+  /** The caption's zone (default UTC), which also serves the place's own summary. */
   tz: string;
-  place?: string;
-  at?: string;
-  convention: string;
-  deltaT?: string;
 }
 
 export function registerCaption(program: Command, context: CommandContext): void {

@@ -3,17 +3,12 @@ import type { Command } from 'commander';
 import type { LunarEclipse } from '../../eclipse/types.ts';
 import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localReport, localTable } from '../../outputs/localFormats.ts';
 import type { CommandContext } from '../context.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 
-interface LocalOptions {
-  place?: string;
-  at?: string;
-  tz?: string;
+interface LocalOptions extends PlaceChoice, EclipseChoice {
   format: string;
-  convention: string;
-  deltaT?: string;
 }
 
 export function registerLocal(program: Command, context: CommandContext): void {

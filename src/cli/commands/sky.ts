@@ -1,27 +1,21 @@
 /** `umbracast sky [WHEN] --place NAME`: the view from one place — the Moon's path through the night, the phases, the twilight. */
 import type { Command } from 'commander';
-import { InputError } from '../../errors.ts';
-import { foldName } from '../../places/gazetteer.ts';
+import { placeSlug } from '../../places/gazetteer.ts';
 import { THEME_NAMES, THEMES } from '../../map/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
 import { SKY_FORMATS } from '../../outputs/formatNames.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 import { parseOutput, withSizeOptions } from './map.ts';
-import { MAX_TITLE_CHARS, parseSizeAndDpi, type SizeOptions } from '../mapSettings.ts';
+import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../mapSettings.ts';
 
-interface SkyOptions extends SizeOptions {
-  place?: string;
-  at?: string;
-  tz?: string;
+interface SkyOptions extends SizeOptions, PlaceChoice, EclipseChoice {
   theme: string;
   title?: string;
   output?: string;
   format?: string;
-  convention: string;
-  deltaT?: string;
 }
 
 export function registerSky(program: Command, context: CommandContext): void {
@@ -39,10 +33,10 @@ export function registerSky(program: Command, context: CommandContext): void {
     .action(async (whenText: string | undefined, options: SkyOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
       const { size, dpi } = parseSizeAndDpi(options, { widthPx: 1600, heightPx: 900 });
-      if (options.title !== undefined && (options.title.trim() === '' || [...options.title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, options.title);
+      checkTitle(options.title);
       const chosen = choosePlace(options)!;
       const eclipse = chooseEclipse(whenText, options, context.now());
-      const slug = foldName(chosen.place.name).replace(/ /g, '-').replace(/[^a-z0-9-]/g, '') || 'place';
+      const slug = placeSlug(chosen.place.name);
       const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-sky-${slug}`, SKY_FORMATS);
       // The drawing code loads when a figure is drawn, not with the command line.
       const [{ renderSkyFile }, { localReport }] = await Promise.all([import('../../outputs/skyFile.ts'), import('../../outputs/localFormats.ts')]);

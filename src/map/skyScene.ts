@@ -10,7 +10,7 @@ import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../visibility/local.ts';
 import { phaseAt, skyClass } from '../visibility/local.ts';
-import { flowRows, labelElement, layoutFor, n2, overlaps, textBox, textElement, type Box, type PageSize } from './draw.ts';
+import { flowRows, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
 
@@ -178,7 +178,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   out.push('</g>');
 
   // Contacts, greatest, moonrise and moonset on the path.
-  // Each label takes the first spot, above or below its point, that no earlier label holds.
+  // Each label takes the first spot, above or below its point, where its plate covers no earlier one.
   const labelStyle = { sizePx: layout.labelStyle.sizePx, weight: 'semibold' as const };
   const taken: Box[] = [];
   for (const event of events) {
@@ -191,8 +191,8 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     const step = labelStyle.sizePx * 1.3;
     const spots = [-12 * unit, 12 * unit + labelStyle.sizePx * 0.8, -12 * unit - step, 12 * unit + labelStyle.sizePx * 0.8 + step, -12 * unit - 2 * step]
       .map((dy) => Math.max(plot.top + labelStyle.sizePx, Math.min(plot.bottom - 4 * unit, py + dy)));
-    const ly = spots.find((sy) => !taken.some((b) => overlaps(b, textBox(text, px, sy, labelStyle, 'middle')))) ?? spots[0]!;
-    taken.push(textBox(text, px, ly, labelStyle, 'middle'));
+    const ly = spots.find((sy) => !taken.some((b) => overlaps(b, plateBox(text, px, sy, labelStyle, unit)))) ?? spots[0]!;
+    taken.push(plateBox(text, px, ly, labelStyle, unit));
     out.push(labelElement(text, px, ly, labelStyle, theme, unit));
   }
 

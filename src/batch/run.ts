@@ -164,7 +164,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     const manifestPath = join(outDir, manifestNameFor(options.shard ? `${options.shard.index}/${options.shard.count}` : null));
     const { manifest: previous, problem } = readManifest(manifestPath);
     if (problem) options.onProgress?.({ type: 'notice', message: `${problem}; rebuilding it from this run` });
-    const manifest: Manifest = { ...emptyManifest(options, hash), eclipses: [] };
+    const manifest = emptyManifest(options, hash);
     const known = new Map((previous?.eclipses ?? []).map((e) => [e.id, e]));
 
     const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);

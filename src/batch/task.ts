@@ -1,9 +1,8 @@
 /**
- * One eclipse of a batch, in a worker thread: every file the house style asks
- * for, each written atomically; returns what it wrote, with sizes and hashes.
+ * One eclipse of a batch, in a worker process: every file the house style
+ * asks for, each written atomically (into folders runBatch has made); returns
+ * what it wrote, with sizes and hashes.
  */
-import { mkdirSync } from 'node:fs';
-import { join } from 'node:path';
 import sharp from 'sharp';
 import { placeSlug } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
@@ -38,7 +37,6 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
   const { files, caption, thumbnail } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats, THUMBNAIL_WIDTH_PX);
   for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
   await write(`${stem}.txt`, 'caption', captionText(caption));
-  mkdirSync(join(outDir, 'thumbs'), { recursive: true });
   await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail!);
 
   for (const name of style.places) {

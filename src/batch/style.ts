@@ -43,7 +43,7 @@ const styleObject = z
     preset: z.enum(['card', 'square', 'print']).optional(),
     widthMm: z.number().min(20).max(2000).optional(),
     dpi: z.number().min(36).max(1200).optional(),
-    tz: z.string().refine(isKnownTimeZone, 'an IANA time zone such as Europe/Lisbon, or UTC').default('UTC'),
+    tz: z.string().refine(isKnownTimeZone, 'an IANA time zone such as Australia/Adelaide, or UTC').default('UTC'),
     borders: enumOf(BORDER_STYLES).default('countries'),
     title: z.string().min(1).max(300).optional(),
     marks: z.array(z.string().min(1).max(200)).max(20).default([]),

@@ -24,7 +24,7 @@ export function withEclipseOptions(command: Command): Command {
 /** --place, --at and --tz, as the one-place commands declare them. */
 export function withPlaceOptions(command: Command): Command {
   return command
-    .option('--place <name>', 'a place from the GeoNames gazetteer: "Lisbon", "Springfield, US-IL"')
+    .option('--place <name>', 'a place from the GeoNames gazetteer: "Adelaide", "Springfield, US-IL"')
     .option('--at <LAT,LON>', 'any point, degrees (east positive)')
     .option('--tz <zone>', 'IANA time zone (default: the zone at the place)');
 }

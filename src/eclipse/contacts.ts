@@ -1,5 +1,6 @@
 /**
- * Greatest eclipse and the contacts, solved on a shadow track (TRADE.md §2).
+ * Greatest eclipse and the contacts, solved on a shadow track (Explanatory Supplement to the
+ * Astronomical Almanac, 3rd ed., ch. 11).
  * Each contact is its own root: nothing assumes symmetry about greatest.
  */
 import type { ShadowConvention } from './conventions.ts';

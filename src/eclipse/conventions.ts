@@ -1,5 +1,6 @@
 /**
- * How big the Earth's shadow is at the Moon's distance (TRADE.md §2).
+ * How big the Earth's shadow is at the Moon's distance (Danjon 1951; Chauvenet, Manual of Spherical and Practical
+ * Astronomy, 1891; Explanatory Supplement to the Astronomical Almanac, 3rd ed., ch. 11).
  * The atmosphere makes the shadow larger than pure geometry; two published
  * conventions say by how much.
  */

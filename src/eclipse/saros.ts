@@ -1,5 +1,5 @@
 /**
- * Saros numbers from lunation counts (TRADE.md §5). One saros is 223
+ * Saros numbers from lunation counts (saros and inex: van den Bergh 1955, from memory). One saros is 223
  * lunations (same number), one inex 358 (number + 1). Since
  * 38 × 358 ≡ 1 (mod 223), an eclipse L lunations after the anchor is
  * 38·L (mod 223) inexes away; of that residue class we take the inex count

@@ -45,7 +45,7 @@ export function isKnownTimeZone(zone: string): boolean {
 }
 
 export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
-  if (!isKnownTimeZone(zone)) throw new InputError(option, 'an IANA time zone such as Europe/Lisbon or America/Chicago, or UTC', zone);
+  if (!isKnownTimeZone(zone)) throw new InputError(option, 'an IANA time zone such as Australia/Adelaide or America/Chicago, or UTC', zone);
   const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
   const dateFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, day: 'numeric', month: 'long', year: 'numeric' });
   const isoFormat = new Intl.DateTimeFormat('en-CA', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' });

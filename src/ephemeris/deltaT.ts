@@ -1,7 +1,8 @@
 /**
  * ΔT = TT − UT, in seconds.
  *
- * The standard model joins four pieces (TRADE.md §1):
+ * The standard model joins four pieces (IERS Bulletin A; Espenak & Meeus,
+ * Five Millennium Canon of Solar Eclipses, NASA TP-2006-214141):
  * - observed yearly values (data/delta-t-observed.json) where they exist;
  * - before them, the Espenak–Meeus (2006) polynomials, themselves fits to
  *   historical eclipse and occultation records ("historical");

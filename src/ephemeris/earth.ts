@@ -35,7 +35,7 @@ export function greenwichApparentSiderealDeg(moment: Moment): number {
 /**
  * The point where a body stands at the zenith, seen from the Earth's centre:
  * latitude = its geocentric declination of date, longitude = RA − GAST
- * (TRADE.md §3). `positionEQJ` is geocentric, any length unit, EQJ.
+ * (Meeus, Astronomical Algorithms, ch. 12–13). `positionEQJ` is geocentric, any length unit, EQJ.
  */
 export function subBodyPoint(positionEQJ: Vec3, moment: Moment): LonLat {
   const time = astroTimeOf(moment);

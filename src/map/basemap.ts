@@ -1,7 +1,7 @@
 /**
  * The world from world-atlas (Natural Earth, public domain), at a detail
  * chosen from the output's scale: finer data only where a pixel can show it
- * (TRADE.md §8: cost grows steeply with detail).
+ * (measured here: drawing cost grows steeply with detail).
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';

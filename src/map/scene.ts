@@ -28,7 +28,7 @@ export interface MapStyle {
   readonly title?: string;
 }
 
-/** A place marked on the map with a short label ("Lisbon · sets 06:54 WET"). */
+/** A place marked on the map with a short label ("Dakar · sets 07:23 GMT"). */
 export interface MapMark {
   readonly lonDeg: number;
   readonly latDeg: number;

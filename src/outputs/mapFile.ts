@@ -34,7 +34,7 @@ export interface MapFile {
   readonly caption?: Caption;
 }
 
-/** "Lisbon · greatest 06:59 WET", "Sydney · rises 19:14 AEDT", "Cairo · not seen". */
+/** "Adelaide · greatest 17:29 ACDT", "Sydney · rises 19:14 AEDT", "Cairo · not seen". */
 export function markLabel(eclipse: LunarEclipse, place: PlaceLabel): string {
   const clock = civilClock(place.tz);
   const local = localCircumstances(eclipse, place);

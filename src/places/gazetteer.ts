@@ -73,7 +73,7 @@ export function describePlace(p: Place): string {
   return `${p.name}, ${p.country}${admin} (pop. ${p.population.toLocaleString('en-US')})`;
 }
 
-/** A query: "Lisbon", "Springfield, US" or "Springfield, US-IL". */
+/** A query: "Adelaide", "Springfield, US" or "Springfield, US-IL". */
 function parseQuery(text: string): { name: string; country?: string; admin?: string } {
   const parts = text.split(',').map((p) => p.trim()).filter(Boolean);
   if (parts.length >= 2) {
@@ -87,7 +87,7 @@ function parseQuery(text: string): { name: string; country?: string; admin?: str
 
 /** A leading place wins when it has at least this many times the people of the next. */
 const CLEAR_LEAD = 3;
-const EXPECTED = 'a place name from the GeoNames gazetteer, e.g. "Lisbon" or "Springfield, US-IL", or use --at LAT,LON';
+const EXPECTED = 'a place name from the GeoNames gazetteer, e.g. "Adelaide" or "Springfield, US-IL", or use --at LAT,LON';
 
 function editDistance(a: string, b: string, limit: number): number {
   if (Math.abs(a.length - b.length) > limit) return limit + 1;

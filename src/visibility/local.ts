@@ -1,5 +1,5 @@
 /**
- * Local circumstances (TRADE.md §4): for one place, each stage's instant,
+ * Local circumstances (twilight classes: common practice): for one place, each stage's instant,
  * the Moon's altitude and azimuth, whether it is up (by the same convention as
  * the map's zones), the Sun's altitude and the sky it makes; moonrise and
  * moonset inside the eclipse; and a plain-words summary.

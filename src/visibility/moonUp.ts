@@ -1,5 +1,5 @@
 /**
- * Where the Moon is up (TRADE.md §3): the almanac convention of Meeus,
+ * Where the Moon is up (Meeus, Astronomical Algorithms, ch. 15): the almanac convention of Meeus,
  * Astronomical Algorithms ch. 15 — the upper limb on the sea-level apparent
  * horizon, i.e. a geocentric altitude h0 = 0.7275 π_M − 34′.
  *

@@ -1,7 +1,7 @@
 /**
  * From one eclipse to its visibility: a Moon-up cap for greatest and each
  * contact, the zones readers care about, and a continuous field — minutes of
- * the counted phase with the Moon up — at any place (TRADE.md §3).
+ * the counted phase with the Moon up — at any place (Meeus, Astronomical Algorithms, ch. 15).
  */
 import type { ContactName } from '../eclipse/contacts.ts';
 import { CONTACT_ORDER } from '../eclipse/contacts.ts';

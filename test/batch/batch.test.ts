@@ -27,7 +27,7 @@ function styleFile(dir: string, text: string, name = 'style.yaml'): string {
   return path;
 }
 
-const SMALL_STYLE = 'preset: card\nformats: [png, svg]\nplaces: [Lisbon]\nlocalFormats: [ics]\nnaming: "{id}-{kind}"\n';
+const SMALL_STYLE = 'preset: card\nformats: [png, svg]\nplaces: [Dakar]\nlocalFormats: [ics]\nnaming: "{id}-{kind}"\n';
 
 async function decodes(path: string): Promise<void> {
   const bytes = readFileSync(path);
@@ -59,7 +59,7 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
   const listed = new Set<string>(['manifest.json', 'catalogue.csv', 'index.html']);
   for (const entry of manifest.eclipses) {
     const stem = `${entry.id}-${entry.kind}`;
-    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-lisbon-sky.png`, `${stem}-lisbon.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
+    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-dakar-sky.png`, `${stem}-dakar.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
     for (const f of entry.files) {
       const bytes = readFileSync(join(out, f.path));
       assert.equal(bytes.length, f.bytes, f.path);

@@ -26,7 +26,7 @@ const badInputs: [string, string[], RegExp][] = [
   ['a print too large', ['--preset', 'print', '--width-mm', '1500', '--dpi', '600'], /^umbracast: --width-mm: expected WxH .* received "1500 mm at 600 dpi = 35433x21968 px"$/],
   ['a malformed bounding box', ['--bbox', '10,60,30'], /^umbracast: --bbox: expected W,S,E,N in degrees.*received "10,60,30"$/],
   ['a box with south above north', ['--bbox', '-10,60,30,35'], /^umbracast: --bbox: expected W,S,E,N .*received "-10,60,30,35"$/],
-  ['an unknown time zone', ['--tz', 'Europe/Atlantis'], /^umbracast: --tz: expected an IANA time zone such as Europe\/Lisbon or America\/Chicago, or UTC, received "Europe\/Atlantis"$/],
+  ['an unknown time zone', ['--tz', 'Europe/Atlantis'], /^umbracast: --tz: expected an IANA time zone such as Australia\/Adelaide or America\/Chicago, or UTC, received "Europe\/Atlantis"$/],
   ['an unknown border style', ['--borders', 'rivers'], /^umbracast: --borders: expected one of countries, land, received "rivers"$/],
   ['an output folder that does not exist', ['-o', join(dir, 'missing', 'map.png')], /^umbracast: --output: expected a file path in an existing folder, received ".*missing\/map\.png"$/],
   ['an output extension we do not write', ['-o', join(dir, 'map.gif')], /^umbracast: --output: expected a file name ending in \.png, \.svg, \.webp, \.jpg or \.geojson, received/],

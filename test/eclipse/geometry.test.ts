@@ -29,7 +29,7 @@ test('nine-node track reproduces the direct ephemeris to 0.001″ over its ten h
   }
 });
 
-test('each contact is a root of its own limit in the direct ephemeris, and the contacts are solved, not mirrored (TRADE.md §2)', () => {
+test('each contact is a root of its own limit in the direct ephemeris, and the contacts are solved, not mirrored (contact definitions: Explanatory Supplement to the Astronomical Almanac, 3rd ed., ch. 11)', () => {
   let asymmetric = 0;
   for (const e of eclipses) {
     for (const name of CONTACT_ORDER) {
@@ -46,7 +46,7 @@ test('each contact is a root of its own limit in the direct ephemeris, and the c
   assert.ok(asymmetric > 0, 'real eclipses are not exactly symmetric about greatest');
 });
 
-test('every contact that exists is reported, in order, and only those (TRADE.md §2 kinds)', () => {
+test('every contact that exists is reported, in order, and only those (kinds by umbral magnitude: Explanatory Supplement, 3rd ed., ch. 11)', () => {
   for (const e of eclipses) {
     const names = CONTACT_ORDER.filter((n) => e.contacts[n]);
     const expected = e.kind === 'total' ? CONTACT_ORDER : e.kind === 'partial' ? ['P1', 'U1', 'U4', 'P4'] : ['P1', 'P4'];

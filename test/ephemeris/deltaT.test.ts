@@ -4,7 +4,7 @@ import { fixedDeltaTModel, FORECAST_JOIN_YEAR, standardDeltaTModel } from '../..
 
 const model = standardDeltaTModel();
 
-test('2025 uses the observed value, about 69.1 s (TRADE.md §1, from memory)', () => {
+test('2025 uses the observed value, about 69.1 s (IERS Bulletin A: 32.184 s + 37 s − (UT1−UTC), from memory)', () => {
   const dt = model.at(2025.2);
   assert.equal(dt.source, 'observed');
   assert.ok(Math.abs(dt.seconds - 69.1) < 0.15, `got ${dt.seconds}`);

@@ -44,7 +44,7 @@ function nearestZone(rgb: [number, number, number]): ZoneName {
   return best!.zone;
 }
 
-test('the pixel at the sub-lunar point at greatest shows the whole-eclipse zone; at its antipode, the nothing-seen zone (2026-03-03; TRADE.md §3)', async () => {
+test('the pixel at the sub-lunar point at greatest shows the whole-eclipse zone; at its antipode, the nothing-seen zone (2026-03-03; sub-lunar point: Meeus, Astronomical Algorithms, ch. 13)', async () => {
   const eclipse = eclipseOn('2026-03-03');
   const point = stage(visibilityOf(eclipse), 'greatest').cap.centre;
   const world = await render({ borders: 'land' });

@@ -1,5 +1,5 @@
 /**
- * Zones must differ in lightness, not only in hue (TRADE.md §6), for every
+ * Zones must differ in lightness, not only in hue (common practice for colour-blind readers and greyscale print), for every
  * theme, as seen by readers with protanopia, deuteranopia or tritanopia and
  * in greyscale print. Simulation: Machado, Oliveira & Fernandes (2009),
  * severity 1.0 matrices on linear sRGB (coefficients from memory);

@@ -1,2 +1,2 @@
-/** What a bundled batch worker exports: the one task. */
+/** What a batch worker process (tinypool, child_process runtime) exports: the one task. */
 export { renderEclipse as default } from './task.ts';

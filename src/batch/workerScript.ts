@@ -1,20 +1,17 @@
 /**
- * The script batch workers run: the worker entry of our build (see
- * src/bundle/bundle.mjs), which loads in a fraction of the time and memory of
- * the TypeScript sources; or, if no build can be made, the sources through
- * the tsx loader (worker.mjs).
+ * The script batch workers run: the worker entry of the compiled package
+ * (dist/batch/workerEntry.js), plain JavaScript that loads in a fraction of
+ * the time and memory of the TypeScript sources. Code running from dist/
+ * finds it beside itself; the sources (run through a TypeScript loader, as
+ * the tests do) use the build of the same tree, which `npm run build` makes.
  */
-import { join } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { ensureBundle, projectRoot } from '../bundle/bundle.mjs';
-
-let cached: Promise<string> | undefined;
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 
 /** A file URL for the worker script. */
-export function workerScript(): Promise<string> {
-  cached ??= ensureBundle().then(
-    (folder) => pathToFileURL(join(folder, 'worker.js')).href,
-    () => pathToFileURL(join(projectRoot(), 'src', 'batch', 'worker.mjs')).href,
-  );
-  return cached;
+export function workerScript(): string {
+  const compiled = import.meta.url.endsWith('.js');
+  const url = new URL(compiled ? './workerEntry.js' : '../../dist/batch/workerEntry.js', import.meta.url);
+  if (!existsSync(fileURLToPath(url))) throw new Error(`umbracast: the compiled batch worker ${fileURLToPath(url)} is missing: run npm run build`);
+  return url.href;
 }

@@ -1,17 +1,12 @@
 #!/usr/bin/env node
-// Entry point for `npx umbracast`: run our build (plain JavaScript, made on
-// first use and whenever the sources change; see src/bundle/bundle.mjs), or
-// the TypeScript sources through tsx if no build can be made.
-import { join } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { ensureBundle } from '../bundle/bundle.mjs';
+// Entry point for `npx umbracast`: the compiled command line in dist/, which
+// `npm install` makes (the package's prepare script runs `npm run build`).
+import { existsSync } from 'node:fs';
 
-let main;
-try {
-  ({ main } = await import(pathToFileURL(join(await ensureBundle(), 'main.js')).href));
-} catch {
-  const { register } = await import('tsx/esm/api');
-  register();
-  ({ main } = await import('./main.ts'));
+const compiled = new URL('../../dist/cli/main.js', import.meta.url);
+if (!existsSync(compiled)) {
+  process.stderr.write('umbracast: the compiled program (dist/) is missing: run npm install, or npm run build\n');
+  process.exit(1);
 }
+const { main } = await import(compiled.href);
 process.exitCode = await main(process.argv.slice(2));

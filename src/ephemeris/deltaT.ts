@@ -12,7 +12,10 @@
  * - beyond 2150, and before 1600, the long-term fits ("long-term").
  * A user may replace all of it with a fixed value ("user").
  */
-import observed from '../../data/delta-t-observed.json' with { type: 'json' };
+import { readFileSync } from 'node:fs';
+
+// Read beside the sources and the build alike: src/ and dist/ sit at the same depth under the package.
+const observed = JSON.parse(readFileSync(new URL('../../data/delta-t-observed.json', import.meta.url), 'utf8')) as { values: unknown };
 
 export type DeltaTSource = 'observed' | 'historical' | 'forecast' | 'long-term' | 'user';
 

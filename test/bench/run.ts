@@ -111,12 +111,10 @@ line('social card 1200×675 PNG', `${maps.card!.toFixed(0)} ms`);
 // summed RSS (which counts the node binary and shared libraries again in every process).
 const { spawn } = await import('node:child_process');
 const { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } = await import('node:fs');
-const { ensureBundle } = await import('../../src/bundle/bundle.mjs');
 const { tmpdir } = await import('node:os');
 const { join } = await import('node:path');
 const cli = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
-// The build is made once per source tree (on first use): make it now, so that no timed run pays for it.
-await ensureBundle();
+// The command runs the compiled package in dist/ (`npm run bench` builds it first).
 const benchStyle = join(mkdtempSync(join(tmpdir(), 'umbracast-bench-style-')), 'bench.json');
 writeFileSync(benchStyle, JSON.stringify({ size: '2400x1350', formats: ['png', 'svg'] }));
 

@@ -1,90 +1,106 @@
 /**
- * The command line and the batch workers run our build (src/bundle/bundle.mjs):
- * it must be named by what it is made from, and behave exactly as the sources
- * do. Same inputs, same bytes, whichever runs (common practice: a build step
- * must not change behaviour).
+ * umbracast as a user gets it: the compiled package in dist/ (made by the
+ * standard npm lifecycle, `prepare` → `npm run build`), imported by name from
+ * plain Node and type-checked from TypeScript, and the command line run from
+ * it. The build must not change behaviour: the compiled command line prints
+ * and writes the same bytes as the sources (common practice: a build step
+ * must not change behaviour). Independent check of the library's answer:
+ * astronomy-engine's own lunar-eclipse search.
  */
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, utimesSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { test } from 'node:test';
-import { bundleKey, ensureBundle, OLD_BUILD_AGE_MS, projectRoot, pruneOldBuilds } from '../../src/bundle/bundle.mjs';
+import { MakeTime, NextLunarEclipse, SearchLunarEclipse } from 'astronomy-engine';
+import { main } from '../../src/cli/main.ts';
 
-const bin = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
-const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const bin = join(root, 'src', 'cli', 'bin.mjs');
+const sha256 = (bytes: Uint8Array | string) => createHash('sha256').update(bytes).digest('hex');
+/** The environment of a plain `node` process: no loader inherited from the test runner. */
+const plainEnv = () => Object.fromEntries(Object.entries(process.env).filter(([key]) => key !== 'NODE_OPTIONS'));
 
-function umbracast(args: string[], env: Record<string, string> = {}) {
-  const result = spawnSync(process.execPath, [bin, ...args], { encoding: 'buffer', env: { ...process.env, ...env } });
+/** A folder outside the project with umbracast installed in its node_modules, as a user's project has it. */
+function userProject(): string {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-user-'));
+  mkdirSync(join(dir, 'node_modules'));
+  symlinkSync(root, join(dir, 'node_modules', 'umbracast'), 'dir');
+  writeFileSync(join(dir, 'package.json'), JSON.stringify({ name: 'kestrel-ridge-newsletter', private: true, type: 'module' }));
+  return dir;
+}
+
+function umbracast(args: string[]) {
+  const result = spawnSync(process.execPath, [bin, ...args], { encoding: 'buffer', env: plainEnv() });
   return { code: result.status, stdout: result.stdout, stderr: result.stderr.toString('utf8') };
 }
 
-/** The build's own entry, imported directly: no fallback can stand in for it. */
-async function fromBuild(args: string[]) {
-  const main = join(await ensureBundle(), 'main.js');
-  const script = `const { main } = await import(${JSON.stringify(main)}); process.exitCode = await main(process.argv.slice(1));`;
-  const result = spawnSync(process.execPath, ['--input-type=module', '-e', script, ...args], { encoding: 'buffer' });
-  return { code: result.status, stdout: result.stdout, stderr: result.stderr.toString('utf8') };
+async function fromSources(args: string[]) {
+  let stdout = '';
+  let stderr = '';
+  const code = await main(args, { stdout: (t) => (stdout += t), stderr: (t) => (stderr += t), now: () => new Date() });
+  return { code, stdout: Buffer.from(stdout), stderr };
 }
 
-function miniProject(): string {
-  const root = mkdtempSync(join(tmpdir(), 'umbracast-key-'));
-  writeFileSync(join(root, 'package.json'), JSON.stringify({ name: 'umbracast', version: '0.0.0' }));
-  mkdirSync(join(root, 'src', 'deep'), { recursive: true });
-  mkdirSync(join(root, 'data'));
-  mkdirSync(join(root, 'out'));
-  writeFileSync(join(root, 'src', 'deep', 'a.ts'), 'export const a = 1;\n');
-  writeFileSync(join(root, 'data', 'b.json'), '{"b": 2}\n');
-  return root;
-}
-
-test('the build is named by its inputs: same tree, same key; a changed source, data file or lock file, a new key', () => {
-  const root = miniProject();
-  const first = bundleKey(root);
-  assert.match(first, /^[0-9a-f]{16}$/);
-  assert.equal(bundleKey(root), first);
-  writeFileSync(join(root, 'out', 'map.png'), 'not an input');
-  assert.equal(bundleKey(root), first, 'files outside src/ and data/ do not count');
-  writeFileSync(join(root, 'src', 'deep', 'a.ts'), 'export const a = 2;\n');
-  const second = bundleKey(root);
-  assert.notEqual(second, first);
-  writeFileSync(join(root, 'data', 'b.json'), '{"b": 3}\n');
-  const third = bundleKey(root);
-  assert.notEqual(third, second);
-  writeFileSync(join(root, 'package-lock.json'), '{"lockfileVersion": 3}\n');
-  assert.notEqual(bundleKey(root), third);
+test('plain Node imports the package by name (no TypeScript loader) and lists the eclipses of a year, as astronomy-engine finds them', () => {
+  const dir = userProject();
+  writeFileSync(join(dir, 'year.mjs'), [
+    "import { findLunarEclipses } from 'umbracast';",
+    "const eclipses = findLunarEclipses({ from: new Date('2029-01-01T00:00:00Z'), to: new Date('2030-01-01T00:00:00Z') });",
+    "console.log(JSON.stringify({ resolved: import.meta.resolve('umbracast'), eclipses: eclipses.map((e) => [e.id, e.kind]) }));",
+  ].join('\n'));
+  const result = spawnSync(process.execPath, [join(dir, 'year.mjs')], { cwd: dir, encoding: 'utf8', env: plainEnv() });
+  assert.equal(result.status, 0, result.stderr);
+  const { resolved, eclipses } = JSON.parse(result.stdout) as { resolved: string; eclipses: [string, string][] };
+  assert.match(resolved, /\/dist\/index\.js$/, 'the package entry is the compiled JavaScript');
+  // astronomy-engine's own search (its shadow sizes differ slightly from Danjon's, not its dates or kinds here).
+  const expected: [string, string][] = [];
+  for (let e = SearchLunarEclipse(MakeTime(new Date('2029-01-01T00:00:00Z'))); e.peak.date < new Date('2030-01-01T00:00:00Z'); e = NextLunarEclipse(e.peak)) {
+    expected.push([e.peak.date.toISOString().slice(0, 10), e.kind]);
+  }
+  assert.ok(expected.length >= 2);
+  assert.deepEqual(eclipses, expected);
 });
 
-test('our package folder is found from any file below it, the build folder included', async () => {
-  const root = projectRoot();
-  assert.equal(JSON.parse(readFileSync(join(root, 'package.json'), 'utf8')).name, 'umbracast');
-  const folder = await ensureBundle();
-  assert.equal(projectRoot(join(folder, 'main.js')), root);
-  assert.equal(projectRoot(join(root, 'src', 'cli', 'bin.mjs')), root);
+test('TypeScript type-checks a user\'s file against the package\'s declarations, and rejects a wrong use', () => {
+  const dir = userProject();
+  writeFileSync(join(dir, 'tsconfig.json'), JSON.stringify({ compilerOptions: { module: 'NodeNext', moduleResolution: 'NodeNext', target: 'ES2022', strict: true, noEmit: true, types: [] }, include: ['*.ts'] }));
+  writeFileSync(join(dir, 'good.ts'), [
+    "import { findLunarEclipses, fixedDeltaTModel, type LunarEclipse } from 'umbracast';",
+    "const eclipses: LunarEclipse[] = findLunarEclipses({ from: new Date('2026-01-01T00:00:00Z'), to: new Date('2027-01-01T00:00:00Z'), deltaT: fixedDeltaTModel(69) });",
+    'const magnitude: number = eclipses[0]!.umbralMagnitude;',
+    'export { magnitude };',
+  ].join('\n'));
+  const tsc = createRequire(import.meta.url).resolve('typescript/bin/tsc');
+  const good = spawnSync(process.execPath, [tsc, '-p', dir], { encoding: 'utf8', env: plainEnv() });
+  assert.equal(good.status, 0, good.stdout + good.stderr);
+  writeFileSync(join(dir, 'bad.ts'), "import { findLunarEclipses } from 'umbracast';\nexport const id: number = findLunarEclipses({ from: new Date(), to: new Date() })[0]!.id;\n");
+  const bad = spawnSync(process.execPath, [tsc, '-p', dir], { encoding: 'utf8', env: plainEnv() });
+  assert.notEqual(bad.status, 0);
+  assert.match(bad.stdout, /bad\.ts\(2,14\): error TS2322: Type 'string' is not assignable to type 'number'/);
 });
 
-test('the command line prints the same bytes from the build and from the sources (UMBRACAST_BUILD=off)', async () => {
+test('the compiled command line prints the same bytes as the sources, bad input included', async () => {
   const args = ['list', '--from', '2026', '--to', '2030', '--format', 'json'];
-  const built = await fromBuild(args);
-  const sources = umbracast(args, { UMBRACAST_BUILD: 'off' });
-  assert.equal(sha256(umbracast(args).stdout), sha256(built.stdout), 'the entry script prints the same');
+  const built = umbracast(args);
+  const sources = await fromSources(args);
   assert.equal(built.code, 0, built.stderr);
   assert.equal(sources.code, 0, sources.stderr);
   assert.ok(built.stdout.length > 1000);
   assert.equal(sha256(built.stdout), sha256(sources.stdout));
-  const bad = await fromBuild(['list', '--from', 'soon']);
-  const badSources = umbracast(['list', '--from', 'soon'], { UMBRACAST_BUILD: 'off' });
+  const bad = umbracast(['list', '--from', 'soon']);
   assert.equal(bad.code, 2);
-  assert.equal(bad.stderr, badSources.stderr);
+  assert.equal(bad.stderr, (await fromSources(['list', '--from', 'soon'])).stderr);
 });
 
-test('a map and a batch come out byte for byte the same from the build and from the sources', async () => {
+test('a map and a batch come out byte for byte the same from the compiled command line and from the sources', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-build-'));
   const files: Record<string, string> = {};
-  const sources = (args: string[]) => umbracast(args, { UMBRACAST_BUILD: 'off' });
-  for (const [name, run] of [['built', fromBuild], ['sources', sources]] as const) {
+  for (const [name, run] of [['built', umbracast], ['sources', fromSources]] as const) {
     const map = await run(['map', '2026-03-03', '--size', '800x450', '-o', join(dir, `${name}.png`)]);
     assert.equal(map.code, 0, map.stderr);
     files[`${name}.png`] = sha256(readFileSync(join(dir, `${name}.png`)));
@@ -96,25 +112,4 @@ test('a map and a batch come out byte for byte the same from the build and from 
   assert.equal(files['built.png'], files['sources.png']);
   assert.equal(files['built batch'], files['sources batch']);
   assert.equal(JSON.parse(files['built batch']!).length, 6, 'two eclipses in 2026, each a PNG, a caption and a thumbnail');
-});
-
-test('a new build removes builds a day old, and nothing else: not the current one, not a recent one, not other files', () => {
-  const cache = mkdtempSync(join(tmpdir(), 'umbracast-cache-'));
-  const now = Date.now();
-  const made = (name: string, ageMs: number) => {
-    mkdirSync(join(cache, name));
-    writeFileSync(join(cache, name, 'main.js'), '');
-    utimesSync(join(cache, name), (now - ageMs) / 1000, (now - ageMs) / 1000);
-  };
-  made('build-aaaaaaaaaaaaaaaa', 3 * OLD_BUILD_AGE_MS);
-  made('build-bbbbbbbbbbbbbbbb', OLD_BUILD_AGE_MS / 2);
-  made('build-cccccccccccccccc', 5 * OLD_BUILD_AGE_MS);
-  made('something-else', 9 * OLD_BUILD_AGE_MS);
-  writeFileSync(join(cache, 'batch-worker-0123456789abcdef.mjs'), '');
-  utimesSync(join(cache, 'batch-worker-0123456789abcdef.mjs'), (now - 2 * OLD_BUILD_AGE_MS) / 1000, (now - 2 * OLD_BUILD_AGE_MS) / 1000);
-  assert.deepEqual(pruneOldBuilds(cache, 'build-cccccccccccccccc', now), ['batch-worker-0123456789abcdef.mjs', 'build-aaaaaaaaaaaaaaaa']);
-  assert.ok(existsSync(join(cache, 'build-bbbbbbbbbbbbbbbb')), 'a recent build stays');
-  assert.ok(existsSync(join(cache, 'build-cccccccccccccccc')), 'the current build stays, however old');
-  assert.ok(existsSync(join(cache, 'something-else')));
-  assert.deepEqual(pruneOldBuilds(join(cache, 'missing'), 'x', now), []);
 });

@@ -1,5 +1,4 @@
 /** What several commands choose the same way: the eclipse (WHEN, convention, ΔT) and the place (--place, --at, --tz). */
-import type { Command } from 'commander';
 import { InputError } from '../errors.ts';
 import { eclipseNear, nextEclipse } from '../eclipse/catalogue.ts';
 import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
@@ -9,25 +8,10 @@ import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { findPlace } from '../places/gazetteer.ts';
 import { timeZoneAt } from '../places/timeZone.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
+import { DELTA_T_LIMITS } from './declare.ts';
 import { parseChoice, parseLatLon, parseNumber, parseWhen, WHEN_EXPECTED } from './options.ts';
 
-/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
-export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
-
-/** --convention and --delta-t, as every command that computes eclipses declares them. */
-export function withEclipseOptions(command: Command): Command {
-  return command
-    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
-    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model');
-}
-
-/** --place, --at and --tz, as the one-place commands declare them. */
-export function withPlaceOptions(command: Command): Command {
-  return command
-    .option('--place <name>', 'a place from the GeoNames gazetteer: "Adelaide", "Springfield, US-IL"')
-    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
-    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)');
-}
+export { DELTA_T_LIMITS, withEclipseOptions, withPlaceOptions } from './declare.ts';
 
 export interface EclipseChoice {
   convention: string;

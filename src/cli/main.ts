@@ -6,12 +6,6 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.ts';
 import type { CommandContext } from './context.ts';
-import { registerList } from './commands/list.ts';
-import { registerMap } from './commands/map.ts';
-import { registerLocal } from './commands/local.ts';
-import { registerSky } from './commands/sky.ts';
-import { registerCaption } from './commands/caption.ts';
-import { BatchInterrupted, registerBatch } from './commands/batch.ts';
 import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
@@ -22,7 +16,29 @@ export const EXIT_INTERRUPTED = 130;
 
 export { toolVersion };
 
-function buildProgram(context: CommandContext): Command {
+type Register = (program: Command, context: CommandContext) => void;
+
+/**
+ * Each command's module, loaded only when that command runs: `list` need not
+ * load the batch's schema library, nor `local` the drawing code. Help and
+ * unknown commands load them all (to list them, or to suggest one).
+ */
+const COMMANDS: Record<string, () => Promise<Register>> = {
+  list: async () => (await import('./commands/list.ts')).registerList,
+  map: async () => (await import('./commands/map.ts')).registerMap,
+  local: async () => (await import('./commands/local.ts')).registerLocal,
+  sky: async () => (await import('./commands/sky.ts')).registerSky,
+  caption: async () => (await import('./commands/caption.ts')).registerCaption,
+  batch: async () => (await import('./commands/batch.ts')).registerBatch,
+};
+
+/** The command the arguments name, if it is one of ours: the first argument that is not an option. */
+function commandAsked(args: readonly string[]): string | undefined {
+  const first = args.find((arg) => !arg.startsWith('-'));
+  return first !== undefined && Object.hasOwn(COMMANDS, first) ? first : undefined;
+}
+
+async function buildProgram(context: CommandContext, args: readonly string[]): Promise<Command> {
   const program = new Command('umbracast')
     .description('Lunar eclipses: when, where the Moon is up, and how it looks from your town.')
     .version(toolVersion(), '-V, --version', 'print the version')
@@ -35,12 +51,8 @@ function buildProgram(context: CommandContext): Command {
       writeErr: () => undefined,
       outputError: () => undefined,
     });
-  registerList(program, context);
-  registerMap(program, context);
-  registerLocal(program, context);
-  registerSky(program, context);
-  registerCaption(program, context);
-  registerBatch(program, context);
+  const asked = commandAsked(args);
+  for (const name of asked !== undefined ? [asked] : Object.keys(COMMANDS)) (await COMMANDS[name]!())(program, context);
   for (const command of program.commands) {
     command.exitOverride().configureOutput({ writeOut: (t) => context.stdout(t), writeErr: () => undefined, outputError: () => undefined });
   }
@@ -56,7 +68,7 @@ const defaultContext: CommandContext = {
 
 /** Run the CLI with arguments (without node and script); resolves to the exit code. */
 export async function main(args: readonly string[], context: CommandContext = defaultContext): Promise<number> {
-  const program = buildProgram(context);
+  const program = await buildProgram(context, args);
   if (args.length === 0) {
     context.stdout(program.helpInformation());
     return EXIT_OK;
@@ -74,7 +86,7 @@ export async function main(args: readonly string[], context: CommandContext = de
       context.stderr(`umbracast: ${error.message}\n`);
       return EXIT_USAGE;
     }
-    if (error instanceof BatchInterrupted) {
+    if (error instanceof Error && error.name === 'BatchInterrupted') {
       context.stderr(`umbracast: ${error.message}\n`);
       return EXIT_INTERRUPTED;
     }

@@ -125,6 +125,7 @@ export function checkStyleSettings(style: HouseStyle, file: string): void {
 
 /** Interrupted by Ctrl-C or SIGTERM: what finished is on disk and in the manifest. */
 export class BatchInterrupted extends Error {
+  override readonly name = 'BatchInterrupted';
   constructor() {
     super('interrupted: finished eclipses are kept and listed in the manifest; rerun to finish the rest');
   }

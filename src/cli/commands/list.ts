@@ -8,7 +8,7 @@ import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
 import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
-import { DELTA_T_LIMITS, withEclipseOptions } from '../choose.ts';
+import { DELTA_T_LIMITS, withEclipseOptions } from '../declare.ts';
 
 interface ListOptions {
   from?: string;

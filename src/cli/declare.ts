@@ -1,0 +1,24 @@
+/**
+ * Options several commands declare alike. Declaring them loads nothing but
+ * the lists of names, so that a command's module stays light until it runs.
+ */
+import type { Command } from 'commander';
+import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
+
+/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
+export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
+
+/** --convention and --delta-t, as every command that computes eclipses declares them. */
+export function withEclipseOptions(command: Command): Command {
+  return command
+    .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
+    .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model');
+}
+
+/** --place, --at and --tz, as the one-place commands declare them. */
+export function withPlaceOptions(command: Command): Command {
+  return command
+    .option('--place <name>', 'a place from the GeoNames gazetteer: "Adelaide", "Springfield, US-IL"')
+    .option('--at <LAT,LON>', 'any point, degrees (east positive)')
+    .option('--tz <zone>', 'IANA time zone (default: the zone at the place)');
+}

@@ -107,7 +107,7 @@ line('social card 1200×675 PNG', `${maps.card!.toFixed(0)} ms`);
 // --jobs 1 and --jobs 2 in turn, nothing else running: reading a process's memory from /proc walks its
 // page tables, which on two cores would steal time from the timed workers. Memory comes from one more
 // --jobs 2 run, sampled every 25 ms: the peak, over its process tree (CLI, workers, helpers), of the
-// summed PSS (each shared page counted once, split among its sharers) and, for comparison, of the
+// summed PSS (each shared page counted once, split among its sharers) and, to set beside it, of the
 // summed RSS (which counts the node binary and shared libraries again in every process).
 const { spawn } = await import('node:child_process');
 const { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } = await import('node:fs');

@@ -65,7 +65,7 @@ function topocentricMoonAltitude(point: LonLat, moment: Moment): number {
 }
 
 test('the Moon stands above 89° at the sub-lunar point and below −89° at its antipode (astronomy-engine topocentric Horizon, refraction on)', () => {
-  // astronomy-engine's internal time steps must share our ΔT for this comparison.
+  // astronomy-engine's internal time steps must share our ΔT for this check.
   const model = standardDeltaTModel();
   SetDeltaTFunction((ut: number) => model.at(decimalYearFromDays(ut)).seconds);
   for (const e of eclipses) {

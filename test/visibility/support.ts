@@ -6,7 +6,7 @@ import { astroTimeOf, decimalYearFromDays, type Moment } from '../../src/ephemer
 import type { MoonUpCap } from '../../src/visibility/moonUp.ts';
 import { MOON_EARTH_RADIUS_RATIO } from '../../src/eclipse/track.ts';
 
-/** astronomy-engine's internal time steps must share our ΔT for these comparisons. */
+/** astronomy-engine's internal time steps must share our ΔT for these checks. */
 export function useOurDeltaTInAstronomyEngine(): void {
   const model = standardDeltaTModel();
   SetDeltaTFunction((ut: number) => model.at(decimalYearFromDays(ut)).seconds);

@@ -13,7 +13,7 @@ export { catalogueCsv, catalogueJson, catalogueTable, CATALOGUE_FORMATS, type Ca
 export { civilClock, type CivilClock } from './ephemeris/civilTime.ts';
 export { horizontal, type Observer, type Horizontal } from './ephemeris/topocentric.ts';
 export { findPlace, type Place } from './places/gazetteer.ts';
-export { timeZoneAt } from './places/timeZone.ts';
+export { timeZoneAt, timeZoneOfPlace } from './places/timeZone.ts';
 export { visibilityOf, visibilityEvaluator, type Visibility, type VisibilityEvaluator, type ZoneName, type StageName } from './visibility/visibility.ts';
 export { moonUpCap, type MoonUpCap } from './visibility/moonUp.ts';
 export { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type SkyClass } from './visibility/local.ts';

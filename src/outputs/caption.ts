@@ -51,10 +51,10 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const countries = countryShares(visibility, loadBasemap('110m').countries().features);
   const continents = continentShares(countries);
   const at = eclipse.greatest.utDays;
-  const zone = clock.abbreviation(at);
   const c = eclipse.contacts;
-  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)} ${zone}`;
-  const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.time(at)} ${zone}`];
+  // Each time in the zone in force at its own instant (a clock change inside the eclipse reads true).
+  const range = (a: number, b: number) => clock.range(a, b);
+  const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.stamp(at)}`];
   if (eclipse.kind === 'penumbral') {
     facts[1] += `, penumbral magnitude ${eclipse.penumbralMagnitude.toFixed(3)}; the Moon is in the penumbra for ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)}), a subtle dimming.`;
   } else {

@@ -7,6 +7,7 @@
  */
 import { geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
 import type { LineString, MultiLineString, Position } from 'geojson';
+import { printedFigures } from '../eclipse/figures.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
@@ -70,7 +71,6 @@ const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
   penumbral: 'Penumbral lunar eclipse',
 };
 
-const fmt = (value: number, digits: number) => value.toFixed(digits).replace('-', '−');
 
 
 export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
@@ -82,13 +82,16 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
   const clocksChange = clock.offsetChanges(c.P1!.utDays, c.P4!.utDays).length > 0;
   const range = (a: number, b: number) => (clocksChange ? clock.range(a, b) : `${clock.time(a)}–${clock.time(b)}`);
   const parts = [`Greatest ${clock.stamp(at)}`];
+  // Figures rounded once, from the full value, as in the list and the caption.
+  const figures = printedFigures(eclipse);
+  const minus = (text: string) => text.replace('-', '−');
   if (eclipse.kind === 'penumbral') {
-    parts.push(`penumbral magnitude ${fmt(eclipse.penumbralMagnitude, 3)}`);
-    parts.push(`penumbral phase ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
+    parts.push(`penumbral magnitude ${minus(figures.penumbralMagnitude)}`);
+    parts.push(`penumbral phase ${durationWords(figures.minutes.penumbral * 60)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
   } else {
-    parts.push(`umbral magnitude ${fmt(eclipse.umbralMagnitude, 3)}`);
-    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(eclipse.durations.totalSeconds!)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
-    parts.push(`in the umbra ${durationWords(eclipse.durations.partialSeconds!)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
+    parts.push(`umbral magnitude ${minus(figures.umbralMagnitude)}`);
+    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(figures.minutes.total! * 60)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
+    parts.push(`in the umbra ${durationWords(figures.minutes.partial! * 60)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
   }
   const subtitle = parts.join(' · ');
   const timesIn = `Times in ${clock.zoneDescriptionBetween(c.P1!.utDays, c.P4!.utDays)}`;

@@ -57,14 +57,14 @@ export function calendarFromJulianDay(jd: number, calendar: CalendarName): Calen
 
 const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
 
-/** "24 February 1100". */
+/** "23 February 1100". */
 export function dateWords(date: CalendarDate): string {
   return `${Math.floor(date.day)} ${MONTHS[date.month - 1]} ${date.year}`;
 }
 
 /**
  * The Julian-calendar date of a (proleptic Gregorian) calendar day, when that
- * day falls before the reform: "24 February 1100"; undefined from 1582
+ * day falls before the reform: "23 February 1100"; undefined from 1582
  * October 15 on.
  */
 export function julianDateBeforeReform(gregorian: { year: number; month: number; day: number }): string | undefined {

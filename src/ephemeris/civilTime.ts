@@ -15,7 +15,7 @@ export interface CivilClock {
   readonly zone: string;
   /** 24-hour clock time in the offset in force at that instant, rounded to the minute: "09:50". */
   time(utDays: number): string;
-  /** Calendar date in the zone: "3 March 2026"; before 1582 October 15 with the Julian date: "1 March 1100 (Julian: 24 February 1100)". */
+  /** Calendar date in the zone: "3 March 2026"; before 1582 October 15 with the Julian date: "1 March 1100 (Julian: 23 February 1100)". */
   date(utDays: number): string;
   /** ISO 8601 (proleptic Gregorian) date in the zone: "2026-03-03". */
   isoDate(utDays: number): string;

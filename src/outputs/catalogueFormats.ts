@@ -15,7 +15,7 @@ const CSV_COLUMNS = [
   'id', 'kind', 'greatest', 'greatestTT', 'deltaT', 'deltaTSource', 'gamma', 'umbralMagnitude', 'penumbralMagnitude', 'saros',
   ...CONTACT_ORDER,
   'penumbralSeconds', 'partialSeconds', 'totalSeconds',
-  'subLunarLon', 'subLunarLat',
+  'subLunarLon', 'subLunarLat', 'calendar',
 ] as const;
 
 export function catalogueCsv(doc: CatalogueDocument): string {
@@ -23,7 +23,7 @@ export function catalogueCsv(doc: CatalogueDocument): string {
     e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, e.umbralMagnitude, e.penumbralMagnitude, e.saros,
     ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
     e.durations.penumbral, e.durations.partial ?? '', e.durations.total ?? '',
-    e.subLunar.greatest[0], e.subLunar.greatest[1],
+    e.subLunar.greatest[0], e.subLunar.greatest[1], doc.calendar,
   ]);
   return stringify(rows, { header: true, columns: [...CSV_COLUMNS] });
 }

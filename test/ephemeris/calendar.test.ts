@@ -77,7 +77,7 @@ test('every day from year 1000 to 3000, both ways and in both calendars, agrees 
 const [old] = findLunarEclipses({ from: new Date('1100-01-01T00:00:00Z'), to: new Date('1101-01-01T00:00:00Z') }) as [LunarEclipse];
 const [modern] = findLunarEclipses({ from: new Date('2025-03-01T00:00:00Z'), to: new Date('2025-04-01T00:00:00Z') }) as [LunarEclipse];
 
-/** The Julian date of a proleptic Gregorian day, by astronomia: "24 February 1100". */
+/** The Julian date of a proleptic Gregorian day, by astronomia: "23 February 1100". */
 function astronomiaJulian(iso: string): string {
   const [y, m, d] = iso.split('-').map(Number) as [number, number, number];
   const c = julian.JDToCalendarJulian(julian.CalendarGregorianToJD(y, m, d + 0.5));

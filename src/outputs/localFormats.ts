@@ -3,6 +3,7 @@
  * and the `umbracast.local/1` JSON contract.
  */
 import { stringify } from 'csv-stringify/sync';
+import { fixed } from '../eclipse/figures.ts';
 import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
@@ -86,10 +87,11 @@ function rows(report: LocalReport): string[][] {
     EVENT_WORDS[e.event],
     `${clock.isoDate(e.moment.utDays)} ${clock.stamp(e.moment.utDays)}`,
     isoMinutes(e.moment.utDays).slice(11, 16),
-    `${round1(e.moonAltitudeDeg).toFixed(1)}°`,
-    `${round1(e.moonAzimuthDeg).toFixed(0)}°`,
+    // Rounded once, from the full value (an azimuth of 67.46° is 67°, not 67.5° and then 68°).
+    `${fixed(e.moonAltitudeDeg, 1)}°`,
+    `${Math.round(e.moonAzimuthDeg) % 360}°`,
     e.moonUp ? 'yes' : 'no',
-    `${round1(e.sunAltitudeDeg).toFixed(1)}°`,
+    `${fixed(e.sunAltitudeDeg, 1)}°`,
     e.sky,
   ]);
 }

@@ -16,6 +16,7 @@ import { sceneTexts } from '../../src/map/scene.ts';
 import { eclipseCaption } from '../../src/outputs/caption.ts';
 import { catalogueTable } from '../../src/outputs/catalogueFormats.ts';
 import { catalogueDocument, eclipseRecord } from '../../src/outputs/catalogueRecord.ts';
+import { localReport, localTable } from '../../src/outputs/localFormats.ts';
 import { visibilityOf } from '../../src/visibility/visibility.ts';
 
 /** Round half away from zero at `places` decimals, on the exact decimal expansion of the double (BigInt arithmetic). */
@@ -26,7 +27,7 @@ function roundOnce(value: number, places: number): string {
   const rest = fraction.slice(places);
   const up = rest[0]! >= '5';
   const digits = (scaled + (up ? 1n : 0n)).toString().padStart(places + 1, '0');
-  const text = `${digits.slice(0, -places)}.${digits.slice(-places)}`;
+  const text = places === 0 ? digits : `${digits.slice(0, -places)}.${digits.slice(-places)}`;
   return value < 0 && /[1-9]/.test(text) ? `-${text}` : text;
 }
 
@@ -89,4 +90,22 @@ test('list, map title/subtitle, caption and contact sheet print the same magnitu
       assert.ok(card.includes(`in the umbra ${words}`), `${e.id} sheet in umbra`);
     }
   }
+});
+
+test('the local table prints altitudes and azimuths rounded once from the full value (no 67.46° → 67.5° → 68°)', () => {
+  let checked = 0;
+  for (const e of ties.slice(0, 12)) {
+    for (const [name, latDeg, lonDeg] of [['Kestrel Ridge', 47.3, -120.5], ['Southern Post', -33.9, 18.4], ['Northern Post', 64.1, 21.9]] as const) {
+      const report = localReport(e, { place: { name, latDeg, lonDeg, tz: 'UTC' }, clock: civilClock('UTC') });
+      const lines = localTable(report).split('\n');
+      for (const event of report.local.events) {
+        const label = event.event === 'greatest' ? 'Greatest' : event.event === 'moonrise' ? 'Moonrise' : event.event === 'moonset' ? 'Moonset' : event.event;
+        const cells = lines.find((l) => l.startsWith(`${label} `))!.split(/\s{2,}/);
+        assert.equal(cells[4], `${roundOnce(event.moonAltitudeDeg, 1).replace(/^-(0\.0)$/, '$1')}°`, `${e.id} ${name} ${label} altitude`);
+        assert.equal(cells[5], `${Number(roundOnce(event.moonAzimuthDeg, 0)) % 360}°`, `${e.id} ${name} ${label} azimuth`);
+        checked++;
+      }
+    }
+  }
+  assert.ok(checked > 100);
 });

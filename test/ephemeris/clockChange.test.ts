@@ -205,3 +205,19 @@ test('the New Zealand eclipse of 2015-04-04: clocks go back at 03:00 NZDT (14:00
   assert.equal(clock.range(eclipse.contacts.U1!.utDays, eclipse.contacts.P4!.utDays), `${clock.time(eclipse.contacts.U1!.utDays)} NZDT–${clock.time(eclipse.contacts.P4!.utDays)} NZST`);
   assert.match(clock.range(eclipse.contacts.U2!.utDays, eclipse.contacts.U3!.utDays), /^\d\d:\d\d–\d\d:\d\d NZDT$/);
 });
+
+test('clocks going forward: the skipped hour has no tick, a range across it names both zones (EU Directive 2000/84/EC: 01:00 UTC, last Sunday of March)', () => {
+  const berlin = RULES.find((r) => r.zone === 'Europe/Berlin')!;
+  const clock = civilClock('Europe/Berlin');
+  const changeMs = Date.UTC(2026, 2, lastSunday(2026, 2), 1);
+  const from = utDaysFromDate(new Date(changeMs - 2.5 * HOUR_MS));
+  const to = utDaysFromDate(new Date(changeMs + 3.5 * HOUR_MS));
+  const [change] = clock.offsetChanges(from, to);
+  assert.equal(dateFromDays(change!.utDays).getTime(), changeMs);
+  assert.equal(clock.range(from, to), `${lawStamp(berlin, from)}–${lawStamp(berlin, to)}`);
+  assert.equal(clock.range(from, to), '23:30 CET–06:30 CEST');
+  assert.equal(clock.zoneDescriptionBetween(from, to), 'Europe/Berlin (CET, UTC+01:00 until 02:00 CET, then CEST, UTC+02:00)');
+  const ticks = localHourTicks(clock, from, to).map((u) => clock.stamp(u));
+  assert.deepEqual(ticks, ['00:00 CET', '01:00 CET', '03:00 CEST', '04:00 CEST', '05:00 CEST', '06:00 CEST']);
+  for (const u of localHourTicks(clock, from, to)) assert.equal(clock.stamp(u), lawStamp(berlin, u));
+});

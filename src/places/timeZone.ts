@@ -6,6 +6,13 @@
  * Africa/Accra). At sea the polygons give the nautical zones, Etc/GMT±N,
  * 15° wide and centred on multiples of 15° (common practice at sea).
  *
+ * Why the full set: our eclipses run from 1000 to 3000, and a reader expects
+ * their own country's zone by name; the set that merges zones agreeing since
+ * 1970 names a Norwegian town's zone after Berlin, and the one that merges
+ * zones agreeing today loses history too. The full set costs 30 MB on disk
+ * (the package ships all three), about 0.1 s to read its index on first use,
+ * and some 40 µs a lookup on a cold tile, 3 µs on a warm one.
+ *
  * A named place is also checked against its country: if the point falls in
  * a zone its country does not use (a border town whose gazetteer point lies
  * across the line), the nearest zone of its own country is taken. Which

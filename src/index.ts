@@ -8,12 +8,14 @@ export { danjon, chauvenet, shadowConvention, SHADOW_CONVENTIONS, type ShadowCon
 export { CONTACT_ORDER, type ContactName } from './eclipse/contacts.ts';
 export { sarosAt } from './eclipse/saros.ts';
 export { ECLIPSE_KINDS, type EclipseKind, type LunarEclipse, type PhaseDurations } from './eclipse/types.ts';
+export { printedFigures, type PrintedFigures } from './eclipse/figures.ts';
+export { calendarFromJulianDay, julianDayFromCalendar, julianDateBeforeReform, DATA_CALENDAR, GREGORIAN_REFORM_JD, type CalendarDate, type CalendarName } from './ephemeris/calendar.ts';
 export { catalogueDocument, eclipseRecord, CATALOGUE_SCHEMA, type CatalogueDocument, type EclipseRecord } from './outputs/catalogueRecord.ts';
 export { catalogueCsv, catalogueJson, catalogueTable, CATALOGUE_FORMATS, type CatalogueFormat } from './outputs/catalogueFormats.ts';
-export { civilClock, type CivilClock } from './ephemeris/civilTime.ts';
+export { civilClock, type CivilClock, type OffsetChange } from './ephemeris/civilTime.ts';
 export { horizontal, type Observer, type Horizontal } from './ephemeris/topocentric.ts';
 export { findPlace, type Place } from './places/gazetteer.ts';
-export { timeZoneAt } from './places/timeZone.ts';
+export { timeZoneAt, timeZoneOfPlace, zonesOfCountry } from './places/timeZone.ts';
 export { visibilityOf, visibilityEvaluator, type Visibility, type VisibilityEvaluator, type ZoneName, type StageName } from './visibility/visibility.ts';
 export { moonUpCap, type MoonUpCap } from './visibility/moonUp.ts';
 export { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type SkyClass } from './visibility/local.ts';

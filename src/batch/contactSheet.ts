@@ -3,8 +3,10 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only.
  */
+import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import { durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
+import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import type { Manifest } from './manifest.ts';
 
 const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
@@ -12,16 +14,30 @@ const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thu
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
 
+/** Manifests written before records carried `printed`: the figures from the record's own (already rounded) values. */
+function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
+  const minutes = (seconds: number | undefined) => (seconds === undefined ? undefined : Math.round(seconds / 60));
+  return {
+    greatestUtc: new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' '),
+    umbralMagnitude: r.umbralMagnitude.toFixed(3),
+    penumbralMagnitude: r.penumbralMagnitude.toFixed(3),
+    gamma: r.gamma.toFixed(4),
+    minutes: { penumbral: minutes(r.durations.penumbral)!, ...(r.durations.partial !== undefined ? { partial: minutes(r.durations.partial)! } : {}), ...(r.durations.total !== undefined ? { total: minutes(r.durations.total)! } : {}) },
+  };
+}
+
 export function contactSheet(manifest: Manifest, title: string): string {
   const cards = manifest.eclipses.map((entry) => {
     const r = entry.record;
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
-    const greatestMinute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' ');
+    // The figures as the maps print them: rounded once, from the full value (record.printed).
+    const p = r.printed ?? figuresFromRecord(r);
+    const julian = julianDateOfIsoDate(r.id);
     const facts = [
-      `Greatest ${greatestMinute} UTC`,
-      r.kind === 'penumbral' ? `penumbral magnitude ${r.penumbralMagnitude.toFixed(3)}` : `umbral magnitude ${r.umbralMagnitude.toFixed(3)}`,
-      ...(r.durations.total !== undefined ? [`totality ${durationWords(r.durations.total)}`] : []),
-      ...(r.durations.partial !== undefined ? [`in the umbra ${durationWords(r.durations.partial)}`] : [`penumbral phase ${durationWords(r.durations.penumbral)}`]),
+      `Greatest ${p.greatestUtc} UTC`,
+      r.kind === 'penumbral' ? `penumbral magnitude ${p.penumbralMagnitude}` : `umbral magnitude ${p.umbralMagnitude}`,
+      ...(p.minutes.total !== undefined ? [`totality ${durationWords(p.minutes.total * 60)}`] : []),
+      ...(p.minutes.partial !== undefined ? [`in the umbra ${durationWords(p.minutes.partial * 60)}`] : [`penumbral phase ${durationWords(p.minutes.penumbral * 60)}`]),
       `saros ${r.saros}`,
     ];
     const links = entry.files
@@ -33,7 +49,7 @@ export function contactSheet(manifest: Manifest, title: string): string {
       : '';
     return `    <article class="${escapeXml(r.kind)}">
       ${image}
-      <h2>${escapeXml(r.id)} <small>${escapeXml(r.kind)}</small></h2>
+      <h2>${escapeXml(r.id)}${julian ? ` <small>(Julian: ${escapeXml(julian)})</small>` : ''} <small>${escapeXml(r.kind)}</small></h2>
       <p>${facts.map(escapeXml).join(' · ')}</p>
       <ul>
         ${links}

@@ -6,7 +6,7 @@ import type { LunarEclipse } from '../eclipse/types.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { findPlace } from '../places/gazetteer.ts';
-import { timeZoneAt } from '../places/timeZone.ts';
+import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import { DELTA_T_LIMITS } from './declare.ts';
 import { parseChoice, parseLatLon, parseNumber, parseWhen, WHEN_EXPECTED } from './options.ts';
@@ -37,9 +37,11 @@ export interface PlaceChoice {
 export function choosePlace(options: PlaceChoice, required = true): { place: PlaceLabel; clock: CivilClock } | undefined {
   if (options.place !== undefined && options.at !== undefined) throw new InputError('--at', 'either --place or --at, not both', options.at);
   let place: Omit<PlaceLabel, 'tz'>;
+  let country: string | undefined;
   if (options.place !== undefined) {
     const found = findPlace(options.place, '--place');
     place = { name: found.name, latDeg: found.latDeg, lonDeg: found.lonDeg };
+    country = found.country;
   } else if (options.at !== undefined) {
     const [lonDeg, latDeg] = parseLatLon('--at', options.at);
     place = { name: `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? 'N' : 'S'} ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? 'E' : 'W'}`, latDeg, lonDeg };
@@ -47,7 +49,8 @@ export function choosePlace(options: PlaceChoice, required = true): { place: Pla
     if (required) throw new InputError('--place', 'a place: --place NAME or --at LAT,LON', undefined);
     return undefined;
   }
-  const tz = options.tz !== undefined ? options.tz.trim() : timeZoneAt(place.latDeg, place.lonDeg);
+  const tz = options.tz !== undefined ? options.tz.trim()
+    : country !== undefined ? timeZoneOfPlace({ ...place, country }) : timeZoneAt(place.latDeg, place.lonDeg);
   const clock = civilClock(tz, '--tz');
   return { place: { ...place, tz: clock.zone }, clock };
 }

@@ -1,28 +1,58 @@
 /**
  * Civil time in a named zone, through Intl (the IANA database): daylight
- * time applied, never a hand-written offset. Printed times round to the
- * minute (common practice); data outputs keep seconds elsewhere.
+ * time applied, never a hand-written offset. Every time is read in the offset
+ * in force at its own instant, and printed beside that offset's name when it
+ * matters (`stamp`, `range`): a clock change inside an eclipse shows as
+ * "02:15 NZDT–02:43 NZST". Printed times round to the minute (common
+ * practice); data outputs keep seconds (`rfc3339`).
  */
 import { InputError } from '../errors.ts';
+import { julianDateOfUtcDay } from './calendar.ts';
 import { dateFromDays } from './time.ts';
 
 export interface CivilClock {
   /** IANA zone name, or "UTC". */
   readonly zone: string;
-  /** 24-hour clock time, rounded to the minute: "09:50". */
+  /** 24-hour clock time in the offset in force at that instant, rounded to the minute: "09:50". */
   time(utDays: number): string;
-  /** Calendar date in the zone: "3 March 2026". */
+  /** Calendar date in the zone: "3 March 2026"; before 1582 October 15 with the Julian date: "1 March 1100 (Julian: 23 February 1100)". */
   date(utDays: number): string;
-  /** ISO 8601 date in the zone: "2026-03-03". */
+  /** ISO 8601 (proleptic Gregorian) date in the zone: "2026-03-03". */
   isoDate(utDays: number): string;
-  /** Abbreviation and offset at that instant: "CET, UTC+01:00" (or "UTC"). */
+  /** Abbreviation and offset at that instant: "CET, UTC+01:00" (or "UTC"; before standard time "UTC+00:53:28"). */
   zoneLabel(utDays: number): string;
-  /** Offset from UTC at that instant: "+01:00". */
+  /** Offset from UTC at that instant, as Intl gives it: "+01:00", or "+00:53:28" for local mean time. */
   offset(utDays: number): string;
+  /** The same in seconds, east positive. */
+  offsetSeconds(utDays: number): number;
   /** The short name printed after a time: "CET", "UTC+09:00", or "UTC". */
   abbreviation(utDays: number): string;
   /** The zone as the small print names it: "Europe/Berlin (CET, UTC+01:00)", or "UTC". */
   zoneDescription(utDays: number): string;
+  /** A time with its own zone: "23:15 NZDT". */
+  stamp(utDays: number): string;
+  /** From one time to another, one zone named if both share it: "23:15–01:43 NZDT", else each its own: "02:15 NZDT–02:43 NZST". */
+  range(fromUtDays: number, toUtDays: number): string;
+  /** The instants, between two others, where the offset changes (daylight time starting or ending). */
+  offsetChanges(fromUtDays: number, toUtDays: number): OffsetChange[];
+  /**
+   * The zone over a span: as zoneDescription when one offset holds throughout, else each
+   * offset and when it ends: "Pacific/Auckland (NZDT, UTC+13:00 until 03:00 NZDT, then NZST, UTC+12:00)".
+   */
+  zoneDescriptionBetween(fromUtDays: number, toUtDays: number): string;
+  /**
+   * RFC 3339 (§5.6) local date-time of an instant rounded to the second. RFC 3339 offsets are whole
+   * minutes: a local-mean-time offset (+00:53:28) is rounded to the minute (+00:53) and the clock
+   * time written in that offset, so the string denotes exactly the instant, as `isoSeconds` does.
+   */
+  rfc3339(utDays: number): string;
+}
+
+export interface OffsetChange {
+  /** The first instant of the new offset (to the second). */
+  readonly utDays: number;
+  readonly before: string;
+  readonly after: string;
 }
 
 /** "58 min", "3 h 27 min": durations as printed on figures and in captions. */
@@ -32,8 +62,9 @@ export function durationWords(seconds: number): string {
   return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
 }
 
-const MINUTE_DAYS = 1 / 1440;
-const roundToMinute = (utDays: number) => Math.round(utDays / MINUTE_DAYS) * MINUTE_DAYS;
+const SECOND_DAYS = 1 / 86_400;
+/** Offsets change at most a few times a year: a scan every half hour finds each, bisection pins it to the second. */
+const CHANGE_SCAN_DAYS = 1 / 48;
 
 export function isKnownTimeZone(zone: string): boolean {
   try {
@@ -46,9 +77,10 @@ export function isKnownTimeZone(zone: string): boolean {
 
 export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
   if (!isKnownTimeZone(zone)) throw new InputError(option, 'an IANA time zone such as Australia/Adelaide or America/Chicago, or UTC', zone);
-  const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
-  const dateFormat = new Intl.DateTimeFormat('en-GB', { timeZone: zone, day: 'numeric', month: 'long', year: 'numeric' });
-  const isoFormat = new Intl.DateTimeFormat('en-CA', { timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit' });
+  // The wall clock is computed here (instant + its own offset, then rounded to the minute) and formatted in UTC,
+  // so that a time and the zone printed beside it always come from the same offset, seconds included.
+  const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+  const dateFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', day: 'numeric', month: 'long', year: 'numeric' });
   // Each English names its own zones: British (CET, BST), American (CST), Australian (AEDT), Indian (IST), New Zealand (NZDT).
   const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
@@ -59,23 +91,90 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
     const text = part(offsetName, utDays).replace('GMT', '');
     return text === '' ? '+00:00' : text;
   };
+  const offsetSeconds = (utDays: number) => {
+    const [, sign, h, m, sec] = /^([+-])(\d\d):(\d\d)(?::(\d\d))?$/.exec(offset(utDays)) ?? [];
+    if (!sign) throw new Error(`unreadable offset ${offset(utDays)} in ${zone}`);
+    return (sign === '-' ? -1 : 1) * (Number(h) * 3600 + Number(m) * 60 + Number(sec ?? 0));
+  };
+  /** The wall clock at an instant, in a given offset, rounded to the minute: a Date whose UTC fields are the local ones. */
+  const wallMinute = (utDays: number, seconds = offsetSeconds(utDays)) =>
+    new Date(Math.round((dateFromDays(utDays).getTime() + seconds * 1000) / 60_000) * 60_000);
+  const zoneLabel = (utDays: number) => {
+    if (isUtc) return 'UTC';
+    const utcOffset = `UTC${offset(utDays).replace('-', '\u2212')}`;
+    const name = shortNames.map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
+    return name ? `${name}, ${utcOffset}` : utcOffset;
+  };
+  const abbreviation = (utDays: number) => (isUtc ? 'UTC' : zoneLabel(utDays).split(',')[0]!);
+  const time = (utDays: number) => timeFormat.format(wallMinute(utDays));
+  const stamp = (utDays: number) => `${time(utDays)} ${abbreviation(utDays)}`;
+  const zoneDescription = (utDays: number) => (isUtc ? 'UTC' : `${zone} (${zoneLabel(utDays)})`);
+  const offsetChanges = (fromUtDays: number, toUtDays: number): OffsetChange[] => {
+    if (isUtc || !(toUtDays > fromUtDays)) return [];
+    const changes: OffsetChange[] = [];
+    const steps = Math.ceil((toUtDays - fromUtDays) / CHANGE_SCAN_DAYS);
+    let a = fromUtDays;
+    let offsetA = offsetSeconds(a);
+    for (let k = 1; k <= steps; k++) {
+      const b = fromUtDays + ((toUtDays - fromUtDays) * k) / steps;
+      const offsetB = offsetSeconds(b);
+      if (offsetB !== offsetA) {
+        let lo = a;
+        let hi = b;
+        while (hi - lo > SECOND_DAYS / 2) {
+          const mid = (lo + hi) / 2;
+          if (offsetSeconds(mid) === offsetA) lo = mid;
+          else hi = mid;
+        }
+        const at = Math.round(hi / SECOND_DAYS) * SECOND_DAYS;
+        changes.push({ utDays: at, before: zoneLabel(lo), after: zoneLabel(at) });
+      }
+      a = b;
+      offsetA = offsetB;
+    }
+    return changes;
+  };
   return {
     zone: isUtc ? 'UTC' : zone,
-    time: (utDays) => timeFormat.format(dateFromDays(roundToMinute(utDays))),
-    date: (utDays) => dateFormat.format(dateFromDays(roundToMinute(utDays))),
-    isoDate: (utDays) => isoFormat.format(dateFromDays(roundToMinute(utDays))),
-    zoneLabel: (utDays) => {
-      if (isUtc) return 'UTC';
-      const utcOffset = `UTC${offset(utDays).replace("-", "\u2212")}`;
-      const name = shortNames.map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
-      return name ? `${name}, ${utcOffset}` : utcOffset;
+    time,
+    date(utDays) {
+      const wall = wallMinute(utDays);
+      const julian = julianDateOfUtcDay(wall);
+      return julian ? `${dateFormat.format(wall)} (Julian: ${julian})` : dateFormat.format(wall);
     },
+    isoDate: (utDays) => wallMinute(utDays).toISOString().slice(0, 10),
+    zoneLabel,
     offset,
-    abbreviation(utDays) {
-      return isUtc ? 'UTC' : this.zoneLabel(utDays).split(',')[0]!;
+    offsetSeconds,
+    abbreviation,
+    zoneDescription,
+    stamp,
+    range(fromUtDays, toUtDays) {
+      return zoneLabel(fromUtDays) === zoneLabel(toUtDays)
+        ? `${time(fromUtDays)}–${time(toUtDays)} ${abbreviation(toUtDays)}`
+        : `${stamp(fromUtDays)}–${stamp(toUtDays)}`;
     },
-    zoneDescription(utDays) {
-      return isUtc ? 'UTC' : `${zone} (${this.zoneLabel(utDays)})`;
+    offsetChanges,
+    zoneDescriptionBetween(fromUtDays, toUtDays) {
+      const changes = offsetChanges(fromUtDays, toUtDays);
+      if (changes.length === 0) return zoneDescription(fromUtDays);
+      const parts = changes.map((c) => {
+        // The last minute of the old offset, on the old clock: "until 03:00 NZDT".
+        const before = c.utDays - SECOND_DAYS;
+        const oldClock = timeFormat.format(wallMinute(c.utDays, offsetSeconds(before)));
+        return `${c.before} until ${oldClock} ${abbreviation(before)}`;
+      });
+      return `${zone} (${parts.join(', then ')}, then ${changes[changes.length - 1]!.after})`;
+    },
+    rfc3339(utDays) {
+      const instantMs = Math.round(dateFromDays(utDays).getTime() / 1000) * 1000;
+      const seconds = offsetSeconds(utDays);
+      const minutes = Math.sign(seconds) * Math.round(Math.abs(seconds) / 60);
+      const local = new Date(instantMs + minutes * 60_000).toISOString().slice(0, 19);
+      const sign = minutes < 0 ? '-' : '+';
+      const hh = String(Math.floor(Math.abs(minutes) / 60)).padStart(2, '0');
+      const mm = String(Math.abs(minutes) % 60).padStart(2, '0');
+      return `${local}${sign}${hh}:${mm}`;
     },
   };
 }

@@ -7,6 +7,7 @@
  */
 import { geoGraticule, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
 import type { LineString, MultiLineString, Position } from 'geojson';
+import { printedFigures } from '../eclipse/figures.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
@@ -70,26 +71,30 @@ const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
   penumbral: 'Penumbral lunar eclipse',
 };
 
-const fmt = (value: number, digits: number) => value.toFixed(digits).replace('-', '−');
 
 
 export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
   const at = eclipse.greatest.utDays;
   const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} · ${clock.date(at)}`;
-  const zone = clock.abbreviation(at);
-  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)}`;
   const c = eclipse.contacts;
-  const parts = [`Greatest ${clock.time(at)} ${zone}`];
+  // Greatest names the zone; ranges repeat it only when the clocks change during the eclipse, and then
+  // each time carries the zone in force at its own instant.
+  const clocksChange = clock.offsetChanges(c.P1!.utDays, c.P4!.utDays).length > 0;
+  const range = (a: number, b: number) => (clocksChange ? clock.range(a, b) : `${clock.time(a)}–${clock.time(b)}`);
+  const parts = [`Greatest ${clock.stamp(at)}`];
+  // Figures rounded once, from the full value, as in the list and the caption.
+  const figures = printedFigures(eclipse);
+  const minus = (text: string) => text.replace('-', '−');
   if (eclipse.kind === 'penumbral') {
-    parts.push(`penumbral magnitude ${fmt(eclipse.penumbralMagnitude, 3)}`);
-    parts.push(`penumbral phase ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
+    parts.push(`penumbral magnitude ${minus(figures.penumbralMagnitude)}`);
+    parts.push(`penumbral phase ${durationWords(figures.minutes.penumbral * 60)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
   } else {
-    parts.push(`umbral magnitude ${fmt(eclipse.umbralMagnitude, 3)}`);
-    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(eclipse.durations.totalSeconds!)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
-    parts.push(`in the umbra ${durationWords(eclipse.durations.partialSeconds!)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
+    parts.push(`umbral magnitude ${minus(figures.umbralMagnitude)}`);
+    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(figures.minutes.total! * 60)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
+    parts.push(`in the umbra ${durationWords(figures.minutes.partial! * 60)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
   }
   const subtitle = parts.join(' · ');
-  const timesIn = `Times in ${clock.zoneDescription(at)}`;
+  const timesIn = `Times in ${clock.zoneDescriptionBetween(c.P1!.utDays, c.P4!.utDays)}`;
   const convention = eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet';
   const smallPrint = [
     `${timesIn}, 24-hour clock, rounded to the minute.`,
@@ -310,14 +315,17 @@ export function composeScene(input: SceneInput): Scene {
     overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
   }
 
-  // Labels on the Moon-up edges, each stage at its own height so that none collide.
+  // Labels on the Moon-up edges, each stage at its own height so that none collide. Their times carry
+  // the zone's name only when the clocks change during the eclipse; else the small print names it once.
   const stages = visibility.stages;
+  const clocksChange = clock.offsetChanges(eclipse.contacts.P1!.utDays, eclipse.contacts.P4!.utDays).length > 0;
+  const stageTime = (utDays: number) => (clocksChange ? clock.stamp(utDays) : clock.time(utDays));
   stages.forEach((s, index) => {
     const targetY = frame.y + frame.height * (0.16 + (0.5 * index) / Math.max(1, stages.length - 1));
     const points = edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]));
     const name = s.name === 'greatest' ? 'Greatest' : s.name;
     for (const [x, y] of crossingsAtY(points, targetY, frame)) {
-      label(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle);
+      label(`${name} ${stageTime(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle);
     }
   });
   const fieldLabelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'regular' };

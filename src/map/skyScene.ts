@@ -52,6 +52,26 @@ function pathPhase(eclipse: LunarEclipse, utDays: number): Phase {
   return phase === 'before' || phase === 'after' ? 'outside' : phase;
 }
 
+/**
+ * The instants (UT days) between two others at which the local clock shows a whole hour, each read in
+ * the offset in force at that instant: offsets of any size (+05:45, local mean time's seconds) and
+ * clock changes inside the span are handled alike.
+ */
+export function localHourTicks(clock: CivilClock, fromUtDays: number, toUtDays: number): number[] {
+  const offsets = new Set<number>([clock.offsetSeconds(fromUtDays), ...clock.offsetChanges(fromUtDays, toUtDays).map((c) => clock.offsetSeconds(c.utDays))]);
+  const ticks = new Set<number>();
+  for (const offsetSeconds of offsets) {
+    const localFrom = fromUtDays * 86_400 + offsetSeconds;
+    const localTo = toUtDays * 86_400 + offsetSeconds;
+    for (let hour = Math.ceil(localFrom / 3600); hour * 3600 <= localTo; hour++) {
+      const utDays = (hour * 3600 - offsetSeconds) / 86_400;
+      // Keep the hour only where this offset is the one in force.
+      if (clock.offsetSeconds(utDays) === offsetSeconds) ticks.add(utDays);
+    }
+  }
+  return [...ticks].sort((a, b) => a - b);
+}
+
 export function composeSkyScene(input: SkySceneInput): SkyScene {
   const { eclipse, clock, theme, size, track, events } = input;
   const layout = layoutFor(size);
@@ -67,7 +87,12 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
   const headerBottom = subtitleBaseline + (summaryLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + 16 * unit;
 
-  const zoneName = clock.zoneDescription(eclipse.greatest.utDays);
+  const first = track[0]!.moment.utDays;
+  const last = track[track.length - 1]!.moment.utDays;
+  const zoneName = clock.zoneDescriptionBetween(first, last);
+  // When the clocks change inside the figure, every time on it carries its own zone's name.
+  const clocksChange = clock.offsetChanges(first, last).length > 0;
+  const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays) : clock.time(utDays));
   const smallPrint = [
     `Local time: ${zoneName}, 24-hour clock. Altitude of the Moon's centre with standard refraction, above a sea-level horizon.`,
     `Shadow: ${eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source}).`,
@@ -95,7 +120,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     left: margin + measureText('−15°', axisStyle) + 8 * unit,
     right: W - margin,
     top: headerBottom,
-    bottom: H - margin - footerHeight - axisStyle.sizePx * 2.2,
+    bottom: H - margin - footerHeight - axisStyle.sizePx * (clocksChange ? 3.2 : 2.2),
   };
   const from = track[0]!.moment.utDays;
   const to = track[track.length - 1]!.moment.utDays;
@@ -133,18 +158,13 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   }
   out.push(labelElement('horizon', plot.left + 34 * unit, y(0) - 5 * unit, { sizePx: axisStyle.sizePx, weight: 'regular' }, theme, unit));
 
-  // Hour ticks in local time.
-  const offsetMinutes = (utDays: number) => {
-    const [h, m] = clock.offset(utDays).slice(1).split(':').map(Number) as [number, number];
-    return (clock.offset(utDays).startsWith('-') ? -1 : 1) * (h * 60 + m);
-  };
-  const firstHour = Math.ceil((from * 1440 + offsetMinutes(from)) / 60);
-  const lastHour = Math.floor((to * 1440 + offsetMinutes(to)) / 60);
-  for (let hour = firstHour; hour <= lastHour; hour++) {
-    const ut = (hour * 60 - offsetMinutes(from)) / 1440;
+  // Hour ticks in local time: each whole hour of the clock in force at that instant, so that a
+  // clock change inside the figure shows as a repeated or skipped hour, each labelled with its zone.
+  for (const ut of localHourTicks(clock, from, to)) {
     const gx = x(ut);
     out.push(`<path d="M${n2(gx)},${n2(plot.top)}V${n2(plot.bottom)}" stroke="${theme.graticule}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.35"/>`);
     out.push(textElement(clock.time(ut), gx, plot.bottom + axisStyle.sizePx * 1.4, axisStyle, theme.textMuted, 'middle'));
+    if (clocksChange) out.push(textElement(clock.abbreviation(ut), gx, plot.bottom + axisStyle.sizePx * 2.5, { ...axisStyle, sizePx: axisStyle.sizePx * 0.8 }, theme.textMuted, 'middle'));
   }
   out.push(`<rect x="${n2(plot.left)}" y="${n2(plot.top)}" width="${n2(plot.right - plot.left)}" height="${n2(plot.bottom - plot.top)}" fill="none" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
 
@@ -186,7 +206,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     const px = x(event.moment.utDays);
     const py = y(event.moonAltitudeDeg);
     const name = event.event === 'greatest' ? 'Greatest' : event.event === 'moonrise' ? 'Moonrise' : event.event === 'moonset' ? 'Moonset' : (event.event as ContactName);
-    const text = `${name} ${clock.time(event.moment.utDays)}`;
+    const text = `${name} ${timeText(event.moment.utDays)}`;
     out.push(`<circle cx="${n2(px)}" cy="${n2(py)}" r="${n2(4 * unit)}" fill="${theme.paper}" stroke="${theme.text}" stroke-width="${n2(1.4 * unit)}"/>`);
     const step = labelStyle.sizePx * 1.3;
     const spots = [-12 * unit, 12 * unit + labelStyle.sizePx * 0.8, -12 * unit - step, 12 * unit + labelStyle.sizePx * 0.8 + step, -12 * unit - 2 * step]

@@ -4,6 +4,7 @@
  * while it is on), only its end (the Moon rises while it is on).
  */
 import isoCountries from 'i18n-iso-countries';
+import { printedFigures } from '../eclipse/figures.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import { loadBasemap } from '../map/basemap.ts';
@@ -51,16 +52,18 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const countries = countryShares(visibility, loadBasemap('110m').countries().features);
   const continents = continentShares(countries);
   const at = eclipse.greatest.utDays;
-  const zone = clock.abbreviation(at);
   const c = eclipse.contacts;
-  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)} ${zone}`;
-  const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.time(at)} ${zone}`];
+  // Each time in the zone in force at its own instant (a clock change inside the eclipse reads true).
+  const range = (a: number, b: number) => clock.range(a, b);
+  const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.stamp(at)}`];
+  // Figures rounded once, from the full value, as on the map and in the list.
+  const figures = printedFigures(eclipse);
   if (eclipse.kind === 'penumbral') {
-    facts[1] += `, penumbral magnitude ${eclipse.penumbralMagnitude.toFixed(3)}; the Moon is in the penumbra for ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)}), a subtle dimming.`;
+    facts[1] += `, penumbral magnitude ${figures.penumbralMagnitude}; the Moon is in the penumbra for ${durationWords(figures.minutes.penumbral * 60)} (${range(c.P1!.utDays, c.P4!.utDays)}), a subtle dimming.`;
   } else {
-    facts[1] += `, umbral magnitude ${eclipse.umbralMagnitude.toFixed(3)}`;
-    if (eclipse.kind === 'total') facts[1] += `; totality lasts ${durationWords(eclipse.durations.totalSeconds!)} (${range(c.U2!.utDays, c.U3!.utDays)})`;
-    facts[1] += `; the Moon is in the umbra for ${durationWords(eclipse.durations.partialSeconds!)} (${range(c.U1!.utDays, c.U4!.utDays)}).`;
+    facts[1] += `, umbral magnitude ${figures.umbralMagnitude}`;
+    if (eclipse.kind === 'total') facts[1] += `; totality lasts ${durationWords(figures.minutes.total! * 60)} (${range(c.U2!.utDays, c.U3!.utDays)})`;
+    facts[1] += `; the Moon is in the umbra for ${durationWords(figures.minutes.partial! * 60)} (${range(c.U1!.utDays, c.U4!.utDays)}).`;
   }
   const phrase: Record<Exclude<ZoneName, 'sees-none'>, string> = {
     'sees-all': 'All of it can be seen from',

@@ -1,6 +1,7 @@
 /** The catalogue as json, csv (both keep seconds) and a table for people (minutes, UTC labelled). */
 import { stringify } from 'csv-stringify/sync';
 import { CONTACT_ORDER } from '../eclipse/contacts.ts';
+import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
@@ -14,7 +15,7 @@ const CSV_COLUMNS = [
   'id', 'kind', 'greatest', 'greatestTT', 'deltaT', 'deltaTSource', 'gamma', 'umbralMagnitude', 'penumbralMagnitude', 'saros',
   ...CONTACT_ORDER,
   'penumbralSeconds', 'partialSeconds', 'totalSeconds',
-  'subLunarLon', 'subLunarLat',
+  'subLunarLon', 'subLunarLat', 'calendar',
 ] as const;
 
 export function catalogueCsv(doc: CatalogueDocument): string {
@@ -22,7 +23,7 @@ export function catalogueCsv(doc: CatalogueDocument): string {
     e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, e.umbralMagnitude, e.penumbralMagnitude, e.saros,
     ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
     e.durations.penumbral, e.durations.partial ?? '', e.durations.total ?? '',
-    e.subLunar.greatest[0], e.subLunar.greatest[1],
+    e.subLunar.greatest[0], e.subLunar.greatest[1], doc.calendar,
   ]);
   return stringify(rows, { header: true, columns: [...CSV_COLUMNS] });
 }
@@ -35,23 +36,18 @@ export function hoursMinutes(seconds: number): string {
   return h > 0 ? `${h}h ${String(m).padStart(2, '0')}m` : `${m}m`;
 }
 
-/** Minute of an ISO time: 2025-03-14T06:58:43Z → 06:59 (rounded, not truncated). */
-function minuteOf(iso: string): string {
-  const ms = Math.round(Date.parse(iso) / 60_000) * 60_000;
-  return new Date(ms).toISOString().slice(0, 16).replace('T', ' ');
-}
-
 export function catalogueTable(doc: CatalogueDocument): string {
   const header = ['Date', 'Kind', 'Greatest (UTC)', 'Umbral mag.', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Saros'];
+  // Every figure as printed elsewhere: rounded once, from the full value (record.printed).
   const rows = doc.eclipses.map((e: EclipseRecord) => [
-    e.id,
+    julianDateOfIsoDate(e.id) ? `${e.id} (Julian: ${julianDateOfIsoDate(e.id)})` : e.id,
     e.kind,
-    minuteOf(e.greatest),
-    e.umbralMagnitude.toFixed(3),
-    e.penumbralMagnitude.toFixed(3),
-    e.gamma.toFixed(4),
-    e.durations.partial !== undefined ? hoursMinutes(e.durations.partial) : '–',
-    e.durations.total !== undefined ? hoursMinutes(e.durations.total) : '–',
+    e.printed.greatestUtc,
+    e.printed.umbralMagnitude,
+    e.printed.penumbralMagnitude,
+    e.printed.gamma,
+    e.printed.minutes.partial !== undefined ? hoursMinutes(e.printed.minutes.partial * 60) : '–',
+    e.printed.minutes.total !== undefined ? hoursMinutes(e.printed.minutes.total * 60) : '–',
     String(e.saros),
   ]);
   const numeric = [false, false, false, true, true, true, true, true, true];
@@ -64,8 +60,9 @@ export function catalogueTable(doc: CatalogueDocument): string {
     ? `${deltaTs[0]!.toFixed(1)} s`
     : `${Math.min(...deltaTs).toFixed(1)}–${Math.max(...deltaTs).toFixed(1)} s`;
   const title = `${doc.eclipses.length} lunar eclipses from ${doc.range.from.slice(0, 10)} up to (not including) ${doc.range.to.slice(0, 10)}`;
+  const julian = doc.eclipses.some((e) => julianDateOfIsoDate(e.id)) ? ' Dates: proleptic Gregorian calendar; before 1582 October 15 the Julian date follows.' : '';
   const notes = [
-    `Times UTC, rounded to the minute. Shadow: ${doc.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention.`,
+    `Times UTC, rounded to the minute. Shadow: ${doc.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention.${julian}`,
     doc.eclipses.length > 0 ? `ΔT ${deltaTSpan} (${sources}; model: ${doc.deltaTModel}).` : `ΔT model: ${doc.deltaTModel}.`,
   ];
   if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;

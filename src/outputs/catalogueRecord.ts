@@ -1,14 +1,18 @@
 /**
  * The catalogue contract, `umbracast.catalogue/1`: what `list --format json`
  * prints and what later commands and users' scripts read. Times are ISO 8601
- * UTC with seconds, durations whole seconds, angles degrees; contacts and
- * durations that do not occur are left out.
+ * UTC with seconds (proleptic Gregorian calendar, stated in `calendar`),
+ * durations whole seconds, angles degrees; contacts and durations that do not
+ * occur are left out. `printed` gives each figure as people read it, rounded
+ * once from the full value, so that scripts typeset what the maps show.
  */
 import type { ContactName } from '../eclipse/contacts.ts';
 import { CONTACT_ORDER } from '../eclipse/contacts.ts';
 import type { ShadowConventionName } from '../eclipse/conventions.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
 import type { DeltaTSource } from '../ephemeris/deltaT.ts';
+import { printedFigures, type PrintedFigures } from '../eclipse/figures.ts';
+import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import { isoSeconds } from '../ephemeris/time.ts';
 
 export const CATALOGUE_SCHEMA = 'umbracast.catalogue/1';
@@ -27,11 +31,15 @@ export interface EclipseRecord {
   contacts: Partial<Record<ContactName, string>>;
   durations: { penumbral: number; partial?: number; total?: number };
   subLunar: { greatest: [number, number] } & Partial<Record<ContactName, [number, number]>>;
+  /** The figures as umbracast prints them (tables, maps, captions), each rounded once from the full value. */
+  printed: PrintedFigures;
 }
 
 export interface CatalogueDocument {
   schema: typeof CATALOGUE_SCHEMA;
   convention: ShadowConventionName;
+  /** The calendar of every date in the document. */
+  calendar: typeof DATA_CALENDAR;
   deltaTModel: string;
   range: { from: string; to: string };
   eclipses: EclipseRecord[];
@@ -73,6 +81,7 @@ export function eclipseRecord(eclipse: LunarEclipse): EclipseRecord {
       ...(totalSeconds !== undefined ? { total: totalSeconds } : {}),
     },
     subLunar,
+    printed: printedFigures(eclipse),
   };
 }
 
@@ -83,6 +92,7 @@ export function catalogueDocument(
   return {
     schema: CATALOGUE_SCHEMA,
     convention: context.convention,
+    calendar: DATA_CALENDAR,
     deltaTModel: context.deltaTModel,
     range: { from: context.from.toISOString().replace('.000Z', 'Z'), to: context.to.toISOString().replace('.000Z', 'Z') },
     eclipses: eclipses.map(eclipseRecord),

@@ -4,6 +4,7 @@
  * counter-clockwise, so that any GIS gets the right regions.
  */
 import type { Feature, FeatureCollection, MultiPolygon } from 'geojson';
+import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import { isoSeconds } from '../ephemeris/time.ts';
 import { capTest, moonUpMargin, type Normal } from '../visibility/moonUp.ts';
 import { placeGrid, sampleGrid, traceRegion, type PlanarMultiPolygon } from '../visibility/regions.ts';
@@ -68,6 +69,7 @@ export function visibilityGeoJson(visibility: Visibility): FeatureCollection<Mul
       eclipse: eclipse.id,
       kind: eclipse.kind,
       convention: eclipse.convention,
+      calendar: DATA_CALENDAR,
       deltaT: Math.round(eclipse.deltaT.seconds * 10) / 10,
       moonUp: 'upper limb on the sea-level apparent horizon (Meeus ch. 15), geodetic coordinates',
     },

@@ -3,6 +3,8 @@
  * and the `umbracast.local/1` JSON contract.
  */
 import { stringify } from 'csv-stringify/sync';
+import { fixed } from '../eclipse/figures.ts';
+import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
@@ -46,13 +48,12 @@ export const EVENT_WORDS: Record<LocalEventName, string> = {
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
 
-/** ISO 8601 local time with offset, to the second: 2025-03-14T02:09:40-03:00. */
+/**
+ * RFC 3339 local time to the second, denoting the same instant as `utc`: 2025-03-14T02:09:40-03:00.
+ * Before standard time the local-mean-time offset is rounded to the minute (see `CivilClock.rfc3339`).
+ */
 export function localIso(clock: CivilClock, moment: Moment): string {
-  const offset = clock.offset(moment.utDays);
-  const sign = offset.startsWith('-') ? -1 : 1;
-  const [h, m] = offset.slice(1).split(':').map(Number) as [number, number];
-  const shifted = Math.round((moment.utDays * 86_400 + sign * (h * 3600 + m * 60)));
-  return `${isoSeconds(shifted / 86_400).slice(0, 19)}${offset}`;
+  return clock.rfc3339(moment.utDays);
 }
 
 export function localJson(report: LocalReport): string {
@@ -62,6 +63,7 @@ export function localJson(report: LocalReport): string {
     eclipse: local.eclipse.id,
     kind: local.eclipse.kind,
     convention: local.eclipse.convention,
+    calendar: DATA_CALENDAR,
     deltaT: round1(local.eclipse.deltaT.seconds),
     place: { name: place.name, lat: place.latDeg, lon: place.lonDeg, tz: place.tz },
     events: local.events.map((e) => ({
@@ -83,18 +85,23 @@ function rows(report: LocalReport): string[][] {
   return report.local.events.map((e: LocalEvent) => [
     e.event === 'greatest' ? 'Greatest' : e.event === 'moonrise' ? 'Moonrise' : e.event === 'moonset' ? 'Moonset' : e.event,
     EVENT_WORDS[e.event],
-    `${clock.isoDate(e.moment.utDays)} ${clock.time(e.moment.utDays)}`,
+    `${clock.isoDate(e.moment.utDays)} ${clock.stamp(e.moment.utDays)}`,
     isoMinutes(e.moment.utDays).slice(11, 16),
-    `${round1(e.moonAltitudeDeg).toFixed(1)}°`,
-    `${round1(e.moonAzimuthDeg).toFixed(0)}°`,
+    // Rounded once, from the full value (an azimuth of 67.46° is 67°, not 67.5° and then 68°).
+    `${fixed(e.moonAltitudeDeg, 1)}°`,
+    `${Math.round(e.moonAzimuthDeg) % 360}°`,
     e.moonUp ? 'yes' : 'no',
-    `${round1(e.sunAltitudeDeg).toFixed(1)}°`,
+    `${fixed(e.sunAltitudeDeg, 1)}°`,
     e.sky,
   ]);
 }
 
+/** The local column's zone: one label, or each label in turn when the clocks change during the eclipse. */
 function headerFor(report: LocalReport): string[] {
-  const zone = report.clock.zoneLabel(report.local.eclipse.greatest.utDays);
+  const { clock, local } = report;
+  const first = local.events[0]!.moment.utDays;
+  const changes = clock.offsetChanges(first, local.events[local.events.length - 1]!.moment.utDays);
+  const zone = changes.length === 0 ? clock.zoneLabel(local.eclipse.greatest.utDays) : [clock.zoneLabel(first), ...changes.map((c) => c.after)].join(' → ');
   return ['Event', 'What happens', `Local (${zone})`, 'UTC', 'Moon alt.', 'Moon az.', 'Moon up', 'Sun alt.', 'Sky'];
 }
 
@@ -102,13 +109,18 @@ function titleOf(report: LocalReport): string {
   const { local, place } = report;
   const lat = `${Math.abs(place.latDeg).toFixed(2)}°${place.latDeg >= 0 ? 'N' : 'S'}`;
   const lon = `${Math.abs(place.lonDeg).toFixed(2)}°${place.lonDeg >= 0 ? 'E' : 'W'}`;
-  return `${local.eclipse.kind[0]!.toUpperCase()}${local.eclipse.kind.slice(1)} lunar eclipse ${local.eclipse.id} from ${place.name} (${lat}, ${lon}; ${place.tz})`;
+  const julian = julianDateOfIsoDate(local.eclipse.id);
+  const calendar = julian ? ` (Julian: ${julian})` : '';
+  return `${local.eclipse.kind[0]!.toUpperCase()}${local.eclipse.kind.slice(1)} lunar eclipse ${local.eclipse.id}${calendar} from ${place.name} (${lat}, ${lon}; ${place.tz})`;
 }
 
 function notes(report: LocalReport): string[] {
   const e = report.local.eclipse;
+  const events = report.local.events;
+  const zone = report.clock.zoneDescriptionBetween(events[0]!.moment.utDays, events[events.length - 1]!.moment.utDays);
+  const julian = julianDateOfIsoDate(e.id) ? ' Dates: proleptic Gregorian calendar (the Julian date is given beside the eclipse\'s date).' : '';
   return [
-    `Times rounded to the minute. Moon altitude: its centre, with refraction; "up": upper limb above a sea-level horizon.`,
+    `Local time: ${zone}. Times rounded to the minute. Moon altitude: its centre, with refraction; "up": upper limb above a sea-level horizon.${julian}`,
     `Shadow: ${e.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${e.deltaT.seconds.toFixed(1)} s (${e.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
   ];
 }
@@ -143,9 +155,9 @@ export function localCsv(report: LocalReport): string {
   const { clock } = report;
   return stringify(
     report.local.events.map((e) => [
-      e.event, isoSeconds(e.moment.utDays), localIso(clock, e.moment), round1(e.moonAltitudeDeg), round1(e.moonAzimuthDeg), e.moonUp, round1(e.sunAltitudeDeg), e.sky,
+      e.event, isoSeconds(e.moment.utDays), localIso(clock, e.moment), round1(e.moonAltitudeDeg), round1(e.moonAzimuthDeg), e.moonUp, round1(e.sunAltitudeDeg), e.sky, DATA_CALENDAR,
     ]),
-    { header: true, columns: ['event', 'utc', 'local', 'moonAltitude', 'moonAzimuth', 'moonUp', 'sunAltitude', 'sky'] },
+    { header: true, columns: ['event', 'utc', 'local', 'moonAltitude', 'moonAzimuth', 'moonUp', 'sunAltitude', 'sky', 'calendar'] },
   );
 }
 

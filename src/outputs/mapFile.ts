@@ -38,7 +38,7 @@ export interface MapFile {
 export function markLabel(eclipse: LunarEclipse, place: PlaceLabel): string {
   const clock = civilClock(place.tz);
   const local = localCircumstances(eclipse, place);
-  const when = (utDays: number) => `${clock.time(utDays)} ${clock.abbreviation(utDays)}`;
+  const when = (utDays: number) => clock.stamp(utDays);
   const greatest = local.events.find((e) => e.event === 'greatest')!;
   const rise = local.events.find((e) => e.event === 'moonrise');
   const set = local.events.find((e) => e.event === 'moonset');

@@ -165,8 +165,9 @@ const PHASE_STATE: Record<ReturnType<typeof phaseAt>, string> = {
 export function localSummary(local: LocalCircumstances, clock: CivilClock, placeName: string): string {
   const { eclipse, events } = local;
   const c = eclipse.contacts;
-  const t = (m: Moment) => clock.time(m.utDays);
-  const zone = clock.abbreviation(eclipse.greatest.utDays);
+  // Every time carries the zone in force at its own instant, so a clock change inside the eclipse reads true.
+  const t = (m: Moment) => clock.stamp(m.utDays);
+  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays);
   const byName = (name: LocalEventName) => events.find((e) => e.event === name);
   const up = (name: StageName) => byName(name)?.moonUp ?? false;
   const where = (e: LocalEvent) => `${heightWord(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg)}`;
@@ -184,22 +185,22 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
 
   if (start.moonUp && end.moonUp) {
     const what = penumbral ? 'the whole penumbral eclipse is in view' : 'the whole eclipse is in view';
-    const totality = eclipse.kind === 'total' ? `, totality ${t(c.U2!)}–${t(c.U3!)}` : '';
+    const totality = eclipse.kind === 'total' ? `, totality ${range(c.U2!, c.U3!)}` : '';
     const extra = [rise, set].filter((e): e is LocalEvent => Boolean(e))
       .map((e) => `; the Moon ${e.event === 'moonrise' ? 'rises' : 'sets'} at ${t(e.moment)}, ${PHASE_STATE[phaseAt(eclipse, e.moment.utDays)]}`).join('');
-    return `${from} ${what}: ${penumbral ? 'penumbral phase' : 'partial phases'} ${t(start.moment)}–${t(end.moment)} ${zone}${totality}, the Moon ${where(greatest)} at greatest${extra}.${daylight}`;
+    return `${from} ${what}: ${penumbral ? 'penumbral phase' : 'partial phases'} ${range(start.moment, end.moment)}${totality}, the Moon ${where(greatest)} at greatest${extra}.${daylight}`;
   }
   if (start.moonUp && set) {
     const totality = eclipse.kind === 'total' && up('U2') ? ` and totality at ${t(c.U2!)}` : '';
     const lastUp = [...events].reverse().find((e) => e.moonUp && e.event !== 'moonset') ?? start;
-    return `${from} the eclipse begins at ${t(start.moment)} ${zone}${totality}, but the Moon sets at ${t(set.moment)}, ${PHASE_STATE[phaseAt(eclipse, set.moment.utDays)]}, ${where(lastUp)}.${daylight}`;
+    return `${from} the eclipse begins at ${t(start.moment)}${totality}, but the Moon sets at ${t(set.moment)}, ${PHASE_STATE[phaseAt(eclipse, set.moment.utDays)]}, ${where(lastUp)}.${daylight}`;
   }
   if (end.moonUp && rise) {
     const totality = eclipse.kind === 'total' && up('U3') ? `; totality ends at ${t(c.U3!)}` : '';
-    return `${from} the Moon rises at ${t(rise.moment)} ${zone}, ${PHASE_STATE[phaseAt(eclipse, rise.moment.utDays)]}${totality}; the eclipse ends at ${t(end.moment)}, the Moon ${where(end)}.${daylight}`;
+    return `${from} the Moon rises at ${t(rise.moment)}, ${PHASE_STATE[phaseAt(eclipse, rise.moment.utDays)]}${totality}; the eclipse ends at ${t(end.moment)}, the Moon ${where(end)}.${daylight}`;
   }
   if (rise || set || events.some((e) => e.moonUp)) {
-    const moves = [rise, set].filter((e): e is LocalEvent => Boolean(e)).map((e) => `the Moon ${e.event === 'moonrise' ? 'rises' : 'sets'} at ${t(e.moment)} ${zone}`).join(' and ');
+    const moves = [rise, set].filter((e): e is LocalEvent => Boolean(e)).map((e) => `the Moon ${e.event === 'moonrise' ? 'rises' : 'sets'} at ${t(e.moment)}`).join(' and ');
     return `${from} only the faint penumbral phase is seen${moves ? `: ${moves}` : ''}.${daylight}`;
   }
   return `${from} the eclipse cannot be seen: the Moon is below the horizon from start to finish.`;

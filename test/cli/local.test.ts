@@ -69,7 +69,8 @@ test('local table and markdown name the zone and the summary; csv has one row pe
   assert.match(markdown, /^### Total lunar eclipse 2025-03-14 from Las Palmas de Gran Canaria/);
   assert.match(markdown, /\| Event \| What happens \|/);
   const csv = (await run(['local', '2025-03-14', '--place', 'Las Palmas de Gran Canaria', '--format', 'csv'])).stdout.trimEnd().split('\n');
-  assert.equal(csv[0], 'event,utc,local,moonAltitude,moonAzimuth,moonUp,sunAltitude,sky');
+  assert.equal(csv[0], 'event,utc,local,moonAltitude,moonAzimuth,moonUp,sunAltitude,sky,calendar');
+  assert.match(csv[1]!, /,proleptic Gregorian$/);
   assert.equal(csv.length, 1 + 8);
 });
 

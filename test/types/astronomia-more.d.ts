@@ -29,3 +29,13 @@ declare module 'astronomia/refraction' {
   const refraction: { saemundsson(trueAltitudeRad: number): number };
   export default refraction;
 }
+declare module 'astronomia/julian' {
+  interface CalendarDay { year: number; month: number; day: number }
+  const julian: {
+    JDToCalendarJulian(jd: number): CalendarDay;
+    JDToCalendarGregorian(jd: number): CalendarDay;
+    CalendarJulianToJD(year: number, month: number, day: number): number;
+    CalendarGregorianToJD(year: number, month: number, day: number): number;
+  };
+  export default julian;
+}

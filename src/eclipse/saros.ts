@@ -16,17 +16,23 @@ export const INEX_LUNATIONS = 358;
 /** The inverse of 358 modulo 223. */
 const INEX_INVERSE = 38;
 
-export function lunationsFromAnchor(ttDays: number): number {
-  return Math.round((ttDays - SAROS_ANCHOR.ttDays) / SYNODIC_MONTH_DAYS);
+/** An eclipse of known saros: the numbering of every other eclipse of its body follows from it. */
+export interface SarosAnchor {
+  readonly ttDays: number;
+  readonly saros: number;
 }
 
-export function sarosOfLunation(lunations: number): number {
+export function lunationsFromAnchor(ttDays: number, anchor: SarosAnchor = SAROS_ANCHOR): number {
+  return Math.round((ttDays - anchor.ttDays) / SYNODIC_MONTH_DAYS);
+}
+
+export function sarosOfLunation(lunations: number, anchor: SarosAnchor = SAROS_ANCHOR): number {
   const residue = (((INEX_INVERSE * lunations) % SAROS_LUNATIONS) + SAROS_LUNATIONS) % SAROS_LUNATIONS;
   const expectedInex = lunations / INEX_LUNATIONS;
   const inex = residue + SAROS_LUNATIONS * Math.round((expectedInex - residue) / SAROS_LUNATIONS);
-  return SAROS_ANCHOR.saros + inex;
+  return anchor.saros + inex;
 }
 
-export function sarosAt(ttDays: number): number {
-  return sarosOfLunation(lunationsFromAnchor(ttDays));
+export function sarosAt(ttDays: number, anchor: SarosAnchor = SAROS_ANCHOR): number {
+  return sarosOfLunation(lunationsFromAnchor(ttDays, anchor), anchor);
 }

@@ -4,9 +4,11 @@
  * speed cancels out. Targets are printed beside the figures; this script
  * reports, it does not fail.
  */
-import { NextLunarEclipse, SearchLunarEclipse } from 'astronomy-engine';
+import { NextGlobalSolarEclipse, NextLunarEclipse, SearchGlobalSolarEclipse, SearchLunarEclipse } from 'astronomy-engine';
 import { geoEqualEarth, geoPath } from 'd3-geo';
 import { findLunarEclipses, SUPPORTED_RANGE } from '../../src/eclipse/catalogue.ts';
+import { findSolarEclipses } from '../../src/eclipse/solar/catalogue.ts';
+import { solarEclipseRecord } from '../../src/eclipse/solar/record.ts';
 import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { loadBasemap, type BasemapDetail } from '../../src/map/basemap.ts';
@@ -70,6 +72,26 @@ line('ratio catalogue / bare search (target ≤ 1.5)', (catalogue.ours! / catalo
 const wholeStart = performance.now();
 const wholeCount = findLunarEclipses({ from: SUPPORTED_RANGE.from, to: SUPPORTED_RANGE.to }).length;
 line(`whole supported range, ${SUPPORTED_RANGE.description} (eclipses)`, `${(performance.now() - wholeStart).toFixed(0)} ms (${wholeCount})`);
+
+// Solar catalogue against astronomy-engine's own global solar-eclipse search over the same years.
+let bareSolarCount = 0;
+let ourSolarCount = 0;
+const solarCatalogue = await alternate({
+  bare: () => {
+    bareSolarCount = 0;
+    let found = SearchGlobalSolarEclipse(from);
+    while (found.peak.date < to) {
+      bareSolarCount++;
+      found = NextGlobalSolarEclipse(found.peak);
+    }
+  },
+  ours: () => {
+    ourSolarCount = findSolarEclipses({ from, to }).map(solarEclipseRecord).length;
+  },
+});
+line('solar catalogue 1900–2100, all fields (eclipses)', `${solarCatalogue.ours!.toFixed(0)} ms (${ourSolarCount})`);
+line('bare astronomy-engine global solar-eclipse search 1900–2100', `${solarCatalogue.bare!.toFixed(0)} ms (${bareSolarCount})`);
+line('ratio solar catalogue / bare search (target ≤ 1.0)', (solarCatalogue.ours! / solarCatalogue.bare!).toFixed(2));
 
 // A world map against rasterising the bare basemap: same projection, world data and size.
 const [eclipse] = findLunarEclipses({ from: new Date('2026-03-03T00:00:00Z'), to: new Date('2026-03-04T00:00:00Z') });

@@ -45,6 +45,8 @@ export const EVENT_WORDS: Record<LocalEventName, string> = {
 };
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
+/** Altitudes in data outputs: to 0.01°. */
+export const altitude2 = (v: number) => Math.round(v * 100) / 100;
 
 /** ISO 8601 local time with offset, to the second: 2025-03-14T02:09:40-03:00. */
 export function localIso(clock: CivilClock, moment: Moment): string {
@@ -68,10 +70,10 @@ export function localJson(report: LocalReport): string {
       event: e.event,
       utc: isoSeconds(e.moment.utDays),
       local: localIso(clock, e.moment),
-      moonAltitude: round1(e.moonAltitudeDeg),
+      moonAltitude: altitude2(e.moonAltitudeDeg),
       moonAzimuth: round1(e.moonAzimuthDeg),
       moonUp: e.moonUp,
-      sunAltitude: round1(e.sunAltitudeDeg),
+      sunAltitude: altitude2(e.sunAltitudeDeg),
       sky: e.sky,
     })),
     summary,
@@ -108,7 +110,7 @@ function titleOf(report: LocalReport): string {
 function notes(report: LocalReport): string[] {
   const e = report.local.eclipse;
   return [
-    `Times rounded to the minute. Moon altitude: its centre, with refraction; "up": upper limb above a sea-level horizon.`,
+    `Times rounded to the minute. Moon altitude: its centre, with refraction from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.`,
     `Shadow: ${e.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${e.deltaT.seconds.toFixed(1)} s (${e.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
   ];
 }

@@ -19,7 +19,7 @@ export type LocalEventName = StageName | 'moonrise' | 'moonset';
 export interface LocalEvent {
   readonly event: LocalEventName;
   readonly moment: Moment;
-  /** Apparent altitude of the Moon's centre, with refraction, degrees. */
+  /** Altitude of the Moon's centre, degrees: with refraction from a true −1° up, geometric below (topocentric.ts). */
   readonly moonAltitudeDeg: number;
   readonly moonAzimuthDeg: number;
   /** Upper limb above the sea-level horizon (Meeus ch. 15), as on the map; true at moonrise, false at moonset. */

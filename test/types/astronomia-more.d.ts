@@ -26,6 +26,6 @@ declare module 'astronomia/parallax' {
   export default parallax;
 }
 declare module 'astronomia/refraction' {
-  const refraction: { saemundsson(trueAltitudeRad: number): number };
+  const refraction: { saemundsson(trueAltitudeRad: number): number; bennett(apparentAltitudeRad: number): number };
   export default refraction;
 }

@@ -4,9 +4,9 @@
  */
 import { stringify } from 'csv-stringify/sync';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
-import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
+import { isoMinutes, isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
-import { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
+import { localCircumstances, localSummary, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
@@ -189,43 +189,41 @@ const PHASES: readonly Phase[] = [
   { key: 'total', title: 'Totality', start: 'U2', end: 'U3' },
 ];
 
-/** One event per phase that can be seen from the place, cut to the time the Moon is up. */
+/** One event per phase and stretch of it that can be seen from the place, cut to the time the Moon is up. */
 export function localIcs(report: LocalReport, generator: string): string {
   const { local, place } = report;
   const events = local.events;
   const find = (name: LocalEventName) => events.find((e) => e.event === name);
-  const rise = find('moonrise');
-  const set = find('moonset');
+  const intervals = upIntervals(local);
   const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
   for (const phase of PHASES) {
     const start = find(phase.start);
     const end = find(phase.end);
     if (!start || !end) continue;
-    // The part of the phase with the Moon up: from the later of its start and moonrise, to the earlier of its end and moonset.
-    let from = start.moonUp ? start.moment : rise && rise.moment.utDays > start.moment.utDays && rise.moment.utDays < end.moment.utDays ? rise.moment : undefined;
-    let to = end.moonUp ? end.moment : set && set.moment.utDays > start.moment.utDays && set.moment.utDays < end.moment.utDays ? set.moment : undefined;
-    if (!from || !to) {
-      const inside = events.some((e) => e.moonUp && e.moment.utDays > start.moment.utDays && e.moment.utDays < end.moment.utDays);
-      if (!inside) continue;
-      from ??= start.moment;
-      to ??= end.moment;
-    }
-    const uid = `${local.eclipse.id}-${phase.key}-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`;
-    const cut = from !== start.moment || to !== end.moment ? ' (the part with the Moon above the horizon)' : '';
-    lines.push(
-      'BEGIN:VEVENT',
-      `UID:${uid}`,
-      // A stable stamp keeps the file identical from run to run: the instant of greatest eclipse.
-      `DTSTAMP:${icsTime(local.eclipse.greatest)}`,
-      `DTSTART:${icsTime(from)}`,
-      `DTEND:${icsTime(to)}`,
-      `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
-      `LOCATION:${icsText(place.name)}`,
-      `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-      `DESCRIPTION:${icsText(`${phase.title} of ${local.eclipse.id}${cut}. ${report.summary} Safe to watch with the naked eye; predictions, weather permitting.`)}`,
-      'TRANSP:TRANSPARENT',
-      'END:VEVENT',
-    );
+    // Each stretch of the phase with the Moon up (it may set and rise again inside a phase at high latitudes).
+    const stretches = intervals
+      .map((i) => [Math.max(i.fromUtDays, start.moment.utDays), Math.min(i.toUtDays, end.moment.utDays)] as const)
+      .filter(([a, b]) => b > a);
+    stretches.forEach(([a, b], k) => {
+      const from = a === start.moment.utDays ? start.moment : momentFromUT(a, start.moment.deltaTSeconds);
+      const to = b === end.moment.utDays ? end.moment : momentFromUT(b, end.moment.deltaTSeconds);
+      const uid = `${local.eclipse.id}-${phase.key}${k > 0 ? `-${k + 1}` : ''}-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`;
+      const cut = from !== start.moment || to !== end.moment ? ' (the part with the Moon above the horizon)' : '';
+      lines.push(
+        'BEGIN:VEVENT',
+        `UID:${uid}`,
+        // A stable stamp keeps the file identical from run to run: the instant of greatest eclipse.
+        `DTSTAMP:${icsTime(local.eclipse.greatest)}`,
+        `DTSTART:${icsTime(from)}`,
+        `DTEND:${icsTime(to)}`,
+        `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
+        `LOCATION:${icsText(place.name)}`,
+        `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
+        `DESCRIPTION:${icsText(`${phase.title} of ${local.eclipse.id}${cut}. ${report.summary} Safe to watch with the naked eye; predictions, weather permitting.`)}`,
+        'TRANSP:TRANSPARENT',
+        'END:VEVENT',
+      );
+    });
   }
   lines.push('END:VCALENDAR');
   return `${lines.map(fold).join('\r\n')}\r\n`;

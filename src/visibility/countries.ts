@@ -1,8 +1,12 @@
 /**
- * Which countries and continents see what: each country's outline and
- * centroid tested against the zones. A zone edge is a circle of about 90°,
- * so it cannot pass through a country without crossing its outline: a
- * country whose outline points all lie in one zone lies wholly in it.
+ * Which countries and continents see what, by area. Each country is sampled
+ * once on an equal-area lattice (columns even in longitude, rows even in sine
+ * of latitude, so every cell covers the same area of the sphere — Lambert's
+ * cylindrical equal-area projection), fine enough for at least
+ * MIN_SAMPLES_PER_COUNTRY points inside it; a sample's share of the country is
+ * its share of the area. The zones are then read at those points for each
+ * eclipse. Continents sum their countries' areas; Russia is split at the
+ * Urals (60° E), so that Siberia does not count as Europe.
  */
 import { geoArea, geoCentroid } from 'd3-geo';
 import type { Feature, Geometry, Position } from 'geojson';
@@ -12,88 +16,197 @@ import { normalAt, type Normal } from './moonUp.ts';
 import type { Visibility, VisibilityEvaluator, ZoneName } from './visibility.ts';
 import { visibilityEvaluator, ZONE_ORDER } from './visibility.ts';
 
+export type ZoneShares = Readonly<Record<ZoneName, number>>;
+
+/** The part of a country on one continent. */
+export interface CountryPart {
+  readonly continent: string;
+  /** Area, steradians. */
+  readonly area: number;
+  readonly shares: ZoneShares;
+}
+
 export interface CountryShare {
   readonly name: string;
   /** ISO 3166-1 alpha-2, where known. */
   readonly code?: string;
+  /** The continent holding most of the country. */
   readonly continent?: string;
-  /** Area, steradians. */
+  /** Area, steradians (d3-geo geoArea). */
   readonly area: number;
-  /** Share of the outline's sample points in each zone. */
-  readonly shares: Readonly<Record<ZoneName, number>>;
-  /** The zone holding every sample point, if one does. */
+  /** Share of the country's area in each zone. */
+  readonly shares: ZoneShares;
+  /** The zone holding all of the country, if one does (every sample in it). */
   readonly wholly?: ZoneName;
-  /** The zone holding most sample points. */
+  /** The zone holding the largest share. */
   readonly mostly: ZoneName;
+  /** Per continent (one part, or two for Russia). */
+  readonly parts: readonly CountryPart[];
 }
 
 export interface ContinentShare {
   readonly name: string;
-  /** Area-weighted share of the continent's countries in each zone. */
-  readonly shares: Readonly<Record<ZoneName, number>>;
+  /** Share of the continent's area in each zone. */
+  readonly shares: ZoneShares;
 }
 
-function samplePoints(geometry: Geometry): Position[] {
-  const points: Position[] = [];
-  const addRing = (ring: Position[]) => {
-    const step = Math.max(1, Math.floor(ring.length / 80));
-    for (let i = 0; i < ring.length; i += step) points.push(ring[i]!);
-  };
-  if (geometry.type === 'Polygon') geometry.coordinates.forEach(addRing);
-  else if (geometry.type === 'MultiPolygon') geometry.coordinates.forEach((p) => p.forEach(addRing));
-  return points;
+/** At least this many equal-area samples fall inside every country. */
+export const MIN_SAMPLES_PER_COUNTRY = 400;
+const DEG = Math.PI / 180;
+/** Lattice steps, degrees of longitude (and the same in radians of sine latitude), coarse to fine. */
+const LATTICE_STEPS_DEG = [1, 0.5, 0.25, 0.125, 0.0625, 0.03125, 0.015625];
+
+/** Continents from countries-list, with two corrections: Timor-Leste is in Asia (UN M49), Russia is split at the Urals. */
+const CONTINENT_OVERRIDES: Readonly<Record<string, string>> = { TL: 'AS' };
+/** Countries not in ISO 3166 that the basemap draws: their continent only (they are not named in captions). */
+const UNCODED_CONTINENTS: Readonly<Record<string, string>> = { Kosovo: 'EU', 'N. Cyprus': 'AS', Somaliland: 'AF' };
+const URALS_LON_DEG = 60;
+
+function continentName(code: string): string {
+  return (continentNames as Record<string, string>)[code]!;
+}
+
+function continentOf(code: string | undefined, name: string): string | undefined {
+  const continentCode = code ? CONTINENT_OVERRIDES[code] ?? (countryTable as Record<string, { continent: string }>)[code]?.continent : UNCODED_CONTINENTS[name];
+  return continentCode ? continentName(continentCode) : undefined;
+}
+
+/** A sample's continent: the country's, except Russia west of the Urals. */
+function sampleContinent(code: string | undefined, continent: string | undefined, [lon]: Position): string | undefined {
+  if (code === 'RU') return lon! < URALS_LON_DEG && lon! > 0 ? continentName('EU') : continentName('AS');
+  return continent;
+}
+
+/** Planar point-in-polygon, even–odd over every ring (world-atlas rings are cut at ±180°). */
+function containsPlanar(polygons: readonly Position[][][], x: number, y: number): boolean {
+  let inside = false;
+  for (const polygon of polygons) {
+    for (const ring of polygon) {
+      for (let k = 0, n = ring.length, l = n - 1; k < n; l = k++) {
+        const xk = ring[k]![0]!;
+        const yk = ring[k]![1]!;
+        const xl = ring[l]![0]!;
+        const yl = ring[l]![1]!;
+        if (yk > y !== yl > y && x < ((xl - xk) * (y - yk)) / (yl - yk) + xk) inside = !inside;
+      }
+    }
+  }
+  return inside;
+}
+
+function polygonsOf(geometry: Geometry): Position[][][] {
+  if (geometry.type === 'Polygon') return [geometry.coordinates];
+  if (geometry.type === 'MultiPolygon') return geometry.coordinates;
+  return [];
+}
+
+/** Equal-area samples inside a country (cell centres of the finest lattice needed), or its centroid if none. */
+function equalAreaSamples(feature: Feature<Geometry>, area: number): Position[] {
+  const polygons = polygonsOf(feature.geometry);
+  let [minLon, minLat, maxLon, maxLat] = [180, 90, -180, -90];
+  for (const polygon of polygons) {
+    for (const [lon, lat] of polygon[0] ?? []) {
+      minLon = Math.min(minLon, lon!);
+      maxLon = Math.max(maxLon, lon!);
+      minLat = Math.min(minLat, lat!);
+      maxLat = Math.max(maxLat, lat!);
+    }
+  }
+  let found: Position[] = [];
+  for (const stepDeg of LATTICE_STEPS_DEG) {
+    const cellArea = (stepDeg * DEG) ** 2;
+    if (area / cellArea < MIN_SAMPLES_PER_COUNTRY && stepDeg !== LATTICE_STEPS_DEG[LATTICE_STEPS_DEG.length - 1]) continue;
+    const sineStep = stepDeg * DEG;
+    found = [];
+    const firstColumn = Math.floor((minLon + 180) / stepDeg);
+    const lastColumn = Math.ceil((maxLon + 180) / stepDeg);
+    const firstRow = Math.floor((Math.sin(minLat * DEG) + 1) / sineStep);
+    const lastRow = Math.ceil((Math.sin(maxLat * DEG) + 1) / sineStep);
+    for (let j = firstRow; j <= lastRow; j++) {
+      const sine = -1 + (j + 0.5) * sineStep;
+      if (sine >= 1) break;
+      const lat = Math.asin(sine) / DEG;
+      for (let i = firstColumn; i <= lastColumn; i++) {
+        const lon = -180 + (i + 0.5) * stepDeg;
+        if (lon < 180 && containsPlanar(polygons, lon, lat)) found.push([lon, lat]);
+      }
+    }
+    if (found.length >= MIN_SAMPLES_PER_COUNTRY) break;
+  }
+  return found.length > 0 ? found : [geoCentroid(feature)];
 }
 
 /** What each country's outline gives, computed once per feature: world data is immutable. */
 interface CountryGeometry {
-  readonly normals: readonly Normal[];
   readonly area: number;
+  readonly code?: string;
+  readonly continent?: string;
+  /** Samples, each with its normal and continent. */
+  readonly samples: readonly { normal: Normal; continent?: string }[];
 }
 const geometryCache = new WeakMap<Feature, CountryGeometry>();
 
-function countryGeometry(feature: Feature<Geometry>): CountryGeometry {
+function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryGeometry {
   let cached = geometryCache.get(feature);
   if (!cached) {
-    const points = [...samplePoints(feature.geometry), geoCentroid(feature)];
-    cached = { normals: points.map((p) => normalAt([p[0]!, p[1]!])), area: geoArea(feature) };
+    const area = geoArea(feature);
+    const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
+    const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
+    const continent = continentOf(code, feature.properties.name);
+    const samples = equalAreaSamples(feature, area).map((p) => ({ normal: normalAt([p[0]!, p[1]!]), continent: sampleContinent(code, continent, p) }));
+    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), samples };
     geometryCache.set(feature, cached);
   }
   return cached;
 }
 
+const zeroShares = (): Record<ZoneName, number> => Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;
+const largest = (shares: ZoneShares): ZoneName => ZONE_ORDER.reduce((best, z) => (shares[z] > shares[best] ? z : best), ZONE_ORDER[0]!);
+
 export function countryShares(visibility: Visibility, countries: readonly Feature<Geometry, { name: string }>[], evaluator: VisibilityEvaluator = visibilityEvaluator(visibility)): CountryShare[] {
   return countries.map((feature) => {
-    const { normals, area } = countryGeometry(feature);
-    const counts = Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;
-    for (const n of normals) counts[evaluator.zoneAtNormal(n)]++;
-    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, counts[z] / normals.length])) as Record<ZoneName, number>;
-    const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
-    const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
-    const continentCode = code ? (countryTable as Record<string, { continent: string }>)[code]?.continent : undefined;
-    const continent = continentCode ? (continentNames as Record<string, string>)[continentCode] : undefined;
-    const mostly = ZONE_ORDER.reduce((best, z) => (shares[z] > shares[best] ? z : best), ZONE_ORDER[0]!);
+    const { area, code, continent, samples } = countryGeometry(feature);
+    const counts = zeroShares();
+    const byContinent = new Map<string, Record<ZoneName, number>>();
+    for (const sample of samples) {
+      const zone = evaluator.zoneAtNormal(sample.normal);
+      counts[zone]++;
+      if (sample.continent) {
+        const part = byContinent.get(sample.continent) ?? zeroShares();
+        part[zone]++;
+        byContinent.set(sample.continent, part);
+      }
+    }
+    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, counts[z] / samples.length])) as Record<ZoneName, number>;
+    const parts = [...byContinent].sort(([a], [b]) => a.localeCompare(b)).map(([name, partCounts]) => {
+      const total = ZONE_ORDER.reduce((sum, z) => sum + partCounts[z], 0);
+      return {
+        continent: name,
+        area: (area * total) / samples.length,
+        shares: Object.fromEntries(ZONE_ORDER.map((z) => [z, partCounts[z] / total])) as Record<ZoneName, number>,
+      };
+    });
+    const main = parts.reduce<CountryPart | undefined>((best, p) => (!best || p.area > best.area ? p : best), undefined);
     const wholly = ZONE_ORDER.find((z) => shares[z] === 1);
     return {
       name: feature.properties.name,
       ...(code ? { code } : {}),
-      ...(continent ? { continent } : {}),
+      ...(main ? { continent: main.continent } : continent ? { continent } : {}),
       area,
       shares,
       ...(wholly ? { wholly } : {}),
-      mostly,
+      mostly: largest(shares),
+      parts,
     };
   });
 }
 
 export function continentShares(countries: readonly CountryShare[]): ContinentShare[] {
-  const byContinent = new Map<string, CountryShare[]>();
-  for (const c of countries) {
-    if (!c.continent) continue;
-    byContinent.set(c.continent, [...(byContinent.get(c.continent) ?? []), c]);
-  }
-  return [...byContinent].sort(([a], [b]) => a.localeCompare(b)).map(([name, members]) => {
-    const total = members.reduce((sum, c) => sum + c.area, 0);
-    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, members.reduce((sum, c) => sum + c.area * c.shares[z], 0) / total])) as Record<ZoneName, number>;
+  const byContinent = new Map<string, CountryPart[]>();
+  for (const c of countries) for (const part of c.parts) byContinent.set(part.continent, [...(byContinent.get(part.continent) ?? []), part]);
+  return [...byContinent].sort(([a], [b]) => a.localeCompare(b)).map(([name, parts]) => {
+    const total = parts.reduce((sum, p) => sum + p.area, 0);
+    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, parts.reduce((sum, p) => sum + p.area * p.shares[z], 0) / total])) as Record<ZoneName, number>;
     return { name, shares };
   });
 }

@@ -103,32 +103,36 @@ function polygonsOf(geometry: Geometry): Position[][][] {
 /** Equal-area samples inside a country (cell centres of the finest lattice needed), or its centroid if none. */
 function equalAreaSamples(feature: Feature<Geometry>, area: number): Position[] {
   const polygons = polygonsOf(feature.geometry);
-  let [minLon, minLat, maxLon, maxLat] = [180, 90, -180, -90];
-  for (const polygon of polygons) {
+  // Each polygon is sampled within its own bounds (a country's parts do not overlap, so no point is counted twice).
+  const bounds = polygons.map((polygon) => {
+    let [minLon, minLat, maxLon, maxLat] = [180, 90, -180, -90];
     for (const [lon, lat] of polygon[0] ?? []) {
       minLon = Math.min(minLon, lon!);
       maxLon = Math.max(maxLon, lon!);
       minLat = Math.min(minLat, lat!);
       maxLat = Math.max(maxLat, lat!);
     }
-  }
+    return { polygon, minLon, minLat, maxLon, maxLat };
+  });
   let found: Position[] = [];
   for (const stepDeg of LATTICE_STEPS_DEG) {
     const cellArea = (stepDeg * DEG) ** 2;
     if (area / cellArea < MIN_SAMPLES_PER_COUNTRY && stepDeg !== LATTICE_STEPS_DEG[LATTICE_STEPS_DEG.length - 1]) continue;
     const sineStep = stepDeg * DEG;
     found = [];
-    const firstColumn = Math.floor((minLon + 180) / stepDeg);
-    const lastColumn = Math.ceil((maxLon + 180) / stepDeg);
-    const firstRow = Math.floor((Math.sin(minLat * DEG) + 1) / sineStep);
-    const lastRow = Math.ceil((Math.sin(maxLat * DEG) + 1) / sineStep);
-    for (let j = firstRow; j <= lastRow; j++) {
-      const sine = -1 + (j + 0.5) * sineStep;
-      if (sine >= 1) break;
-      const lat = Math.asin(sine) / DEG;
-      for (let i = firstColumn; i <= lastColumn; i++) {
-        const lon = -180 + (i + 0.5) * stepDeg;
-        if (lon < 180 && containsPlanar(polygons, lon, lat)) found.push([lon, lat]);
+    for (const { polygon, minLon, minLat, maxLon, maxLat } of bounds) {
+      const firstColumn = Math.floor((minLon + 180) / stepDeg);
+      const lastColumn = Math.ceil((maxLon + 180) / stepDeg);
+      const firstRow = Math.floor((Math.sin(minLat * DEG) + 1) / sineStep);
+      const lastRow = Math.ceil((Math.sin(maxLat * DEG) + 1) / sineStep);
+      for (let j = firstRow; j <= lastRow; j++) {
+        const sine = -1 + (j + 0.5) * sineStep;
+        if (sine >= 1) break;
+        const lat = Math.asin(sine) / DEG;
+        for (let i = firstColumn; i <= lastColumn; i++) {
+          const lon = -180 + (i + 0.5) * stepDeg;
+          if (lon < 180 && containsPlanar([polygon], lon, lat)) found.push([lon, lat]);
+        }
       }
     }
     if (found.length >= MIN_SAMPLES_PER_COUNTRY) break;
@@ -141,8 +145,10 @@ interface CountryGeometry {
   readonly area: number;
   readonly code?: string;
   readonly continent?: string;
-  /** Samples, each with its normal and continent. */
-  readonly samples: readonly { normal: Normal; continent?: string }[];
+  /** Samples: their normals, and for each the index of its continent in `continents` (−1: none). */
+  readonly normals: readonly Normal[];
+  readonly continentIndex: Int8Array;
+  readonly continents: readonly string[];
 }
 const geometryCache = new WeakMap<Feature, CountryGeometry>();
 
@@ -153,8 +159,15 @@ function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryG
     const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
     const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
     const continent = continentOf(code, feature.properties.name);
-    const samples = equalAreaSamples(feature, area).map((p) => ({ normal: normalAt([p[0]!, p[1]!]), continent: sampleContinent(code, continent, p) }));
-    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), samples };
+    const points = equalAreaSamples(feature, area);
+    const continents: string[] = [];
+    const continentIndex = Int8Array.from(points, (p) => {
+      const name = sampleContinent(code, continent, p);
+      if (!name) return -1;
+      if (!continents.includes(name)) continents.push(name);
+      return continents.indexOf(name);
+    });
+    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), normals: points.map((p) => normalAt([p[0]!, p[1]!])), continentIndex, continents };
     geometryCache.set(feature, cached);
   }
   return cached;
@@ -165,27 +178,23 @@ const largest = (shares: ZoneShares): ZoneName => ZONE_ORDER.reduce((best, z) =>
 
 export function countryShares(visibility: Visibility, countries: readonly Feature<Geometry, { name: string }>[], evaluator: VisibilityEvaluator = visibilityEvaluator(visibility)): CountryShare[] {
   return countries.map((feature) => {
-    const { area, code, continent, samples } = countryGeometry(feature);
-    const counts = zeroShares();
-    const byContinent = new Map<string, Record<ZoneName, number>>();
-    for (const sample of samples) {
-      const zone = evaluator.zoneAtNormal(sample.normal);
-      counts[zone]++;
-      if (sample.continent) {
-        const part = byContinent.get(sample.continent) ?? zeroShares();
-        part[zone]++;
-        byContinent.set(sample.continent, part);
-      }
+    const { area, code, continent, normals, continentIndex, continents } = countryGeometry(feature);
+    // counts[c * zones + z]: samples of continent c (the last row: all) in zone z.
+    const zones = ZONE_ORDER.length;
+    const counts = new Float64Array((continents.length + 1) * zones);
+    const all = continents.length * zones;
+    for (let k = 0; k < normals.length; k++) {
+      const z = ZONE_ORDER.indexOf(evaluator.zoneAtNormal(normals[k]!));
+      counts[all + z]!++;
+      if (continentIndex[k]! >= 0) counts[continentIndex[k]! * zones + z]!++;
     }
-    const shares = Object.fromEntries(ZONE_ORDER.map((z) => [z, counts[z] / samples.length])) as Record<ZoneName, number>;
-    const parts = [...byContinent].sort(([a], [b]) => a.localeCompare(b)).map(([name, partCounts]) => {
-      const total = ZONE_ORDER.reduce((sum, z) => sum + partCounts[z], 0);
-      return {
-        continent: name,
-        area: (area * total) / samples.length,
-        shares: Object.fromEntries(ZONE_ORDER.map((z) => [z, partCounts[z] / total])) as Record<ZoneName, number>,
-      };
-    });
+    const sharesOf = (row: number, total: number) => Object.fromEntries(ZONE_ORDER.map((z, i) => [z, counts[row * zones + i]! / total])) as Record<ZoneName, number>;
+    const shares = sharesOf(continents.length, normals.length);
+    const parts = continents.map((name, c) => {
+      let total = 0;
+      for (let i = 0; i < zones; i++) total += counts[c * zones + i]!;
+      return { continent: name, area: (area * total) / normals.length, shares: sharesOf(c, total) };
+    }).sort((a, b) => a.continent.localeCompare(b.continent));
     const main = parts.reduce<CountryPart | undefined>((best, p) => (!best || p.area > best.area ? p : best), undefined);
     const wholly = ZONE_ORDER.find((z) => shares[z] === 1);
     return {

@@ -11,10 +11,12 @@
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import fc from 'fast-check';
+import ICAL from 'ical.js';
 import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
 import type { LunarEclipse } from '../../src/eclipse/types.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { momentFromUT } from '../../src/ephemeris/time.ts';
+import { localIcs, type LocalReport } from '../../src/outputs/localFormats.ts';
 import { localCircumstances, localSummary, localView, type Coverage, type LocalCircumstances } from '../../src/visibility/local.ts';
 import { moonUpTopocentric, useOurDeltaTInAstronomyEngine } from './support.ts';
 
@@ -139,4 +141,21 @@ test('property: at 60–80° N or S, for any eclipse of 2020–2040, the summary
     { seed: 20260303, numRuns: 120 },
   );
   assert.ok(grazing > 20, `${grazing} runs with a rise or set`);
+});
+
+test('the calendar gives one event per stretch of a phase with the Moon up: a set and a re-rise inside the penumbral phase make two (ical.js, RFC 5545)', () => {
+  const eclipse = byId('2020-11-30');
+  const place = { name: 'Kestrel Ridge north station', latDeg: 68, lonDeg: 30, tz: 'UTC' };
+  const local = localCircumstances(eclipse, place);
+  const view = localView(local);
+  assert.equal(view.intervals.length, 2, 'up, down, up again');
+  const report: LocalReport = { local, place, clock, summary: localSummary(local, clock, place.name) };
+  const calendar = new ICAL.Component(ICAL.parse(localIcs(report, 'test')));
+  const events = calendar.getAllSubcomponents('vevent').map((v) => new ICAL.Event(v));
+  const seconds = (utDays: number) => Math.round(utDays * 86400 + Date.UTC(2000, 0, 1, 12) / 1000);
+  assert.deepEqual(events.map((e) => e.uid.split('-68.0000')[0]), ['2020-11-30-penumbral', '2020-11-30-penumbral-2']);
+  events.forEach((e, k) => {
+    assert.equal(Math.round(e.startDate.toJSDate().getTime() / 1000), seconds(view.intervals[k]!.fromUtDays));
+    assert.equal(Math.round(e.endDate.toJSDate().getTime() / 1000), seconds(view.intervals[k]!.toUtDays));
+  });
 });

@@ -77,7 +77,44 @@ function sampleContinent(code: string | undefined, continent: string | undefined
   return continent;
 }
 
-/** Planar point-in-polygon, even–odd over every ring (world-atlas rings are cut at ±180°). */
+/**
+ * A ring with its longitudes made continuous (no step over 180°): some
+ * world-atlas rings cross the antimeridian uncut. A ring that goes once
+ * round a pole (Antarctica) is closed along that pole.
+ */
+function unwrapRing(ring: readonly Position[], nearLon?: number): Position[] {
+  const out: Position[] = [];
+  let shift = 0;
+  for (let k = 0; k < ring.length; k++) {
+    const [lon, lat] = [ring[k]![0]!, ring[k]![1]!];
+    if (k > 0) {
+      const step = lon + shift - out[k - 1]![0]!;
+      if (step > 180) shift -= 360;
+      else if (step < -180) shift += 360;
+    }
+    out.push([lon + shift, lat]);
+  }
+  const turn = out[out.length - 1]![0]! - out[0]![0]!;
+  if (Math.abs(turn) > 180) {
+    const pole = out.reduce((sum, p) => sum + p[1]!, 0) > 0 ? 90 : -90;
+    out.push([out[out.length - 1]![0]!, pole], [out[0]![0]!, pole], out[0]!);
+  }
+  // Holes go beside their outer ring.
+  if (nearLon !== undefined) {
+    const mean = out.reduce((sum, p) => sum + p[0]!, 0) / out.length;
+    const offset = Math.round((nearLon - mean) / 360) * 360;
+    if (offset !== 0) return out.map(([lon, lat]) => [lon! + offset, lat!]);
+  }
+  return out;
+}
+
+function unwrapPolygon(polygon: readonly Position[][]): Position[][] {
+  const outer = unwrapRing(polygon[0] ?? []);
+  const mean = outer.reduce((sum, p) => sum + p[0]!, 0) / Math.max(1, outer.length);
+  return [outer, ...polygon.slice(1).map((hole) => unwrapRing(hole, mean))];
+}
+
+/** Planar point-in-polygon, even–odd over every ring. */
 function containsPlanar(polygons: readonly Position[][][], x: number, y: number): boolean {
   let inside = false;
   for (const polygon of polygons) {
@@ -100,9 +137,9 @@ function polygonsOf(geometry: Geometry): Position[][][] {
   return [];
 }
 
-/** Equal-area samples inside a country (cell centres of the finest lattice needed), or its centroid if none. */
-function equalAreaSamples(feature: Feature<Geometry>, area: number): Position[] {
-  const polygons = polygonsOf(feature.geometry);
+/** Equal-area samples inside a country (cell centres of the finest lattice needed) and each one's area, or its centroid if none. */
+function equalAreaSamples(feature: Feature<Geometry>, area: number): { points: Position[]; cellArea: number } {
+  const polygons = polygonsOf(feature.geometry).map(unwrapPolygon);
   // Each polygon is sampled within its own bounds (a country's parts do not overlap, so no point is counted twice).
   const bounds = polygons.map((polygon) => {
     let [minLon, minLat, maxLon, maxLat] = [180, 90, -180, -90];
@@ -115,8 +152,9 @@ function equalAreaSamples(feature: Feature<Geometry>, area: number): Position[] 
     return { polygon, minLon, minLat, maxLon, maxLat };
   });
   let found: Position[] = [];
+  let cellArea = 0;
   for (const stepDeg of LATTICE_STEPS_DEG) {
-    const cellArea = (stepDeg * DEG) ** 2;
+    cellArea = (stepDeg * DEG) ** 2;
     if (area / cellArea < MIN_SAMPLES_PER_COUNTRY && stepDeg !== LATTICE_STEPS_DEG[LATTICE_STEPS_DEG.length - 1]) continue;
     const sineStep = stepDeg * DEG;
     found = [];
@@ -130,14 +168,15 @@ function equalAreaSamples(feature: Feature<Geometry>, area: number): Position[] 
         if (sine >= 1) break;
         const lat = Math.asin(sine) / DEG;
         for (let i = firstColumn; i <= lastColumn; i++) {
+          // The lattice repeats every 360° (360 / step is whole), so an unwrapped polygon meets the same points.
           const lon = -180 + (i + 0.5) * stepDeg;
-          if (lon < 180 && containsPlanar([polygon], lon, lat)) found.push([lon, lat]);
+          if (containsPlanar([polygon], lon, lat)) found.push([((lon + 540) % 360) - 180, lat]);
         }
       }
     }
     if (found.length >= MIN_SAMPLES_PER_COUNTRY) break;
   }
-  return found.length > 0 ? found : [geoCentroid(feature)];
+  return found.length > 0 ? { points: found, cellArea } : { points: [geoCentroid(feature)], cellArea: area };
 }
 
 /** What each country's outline gives, computed once per feature: world data is immutable. */
@@ -149,6 +188,8 @@ interface CountryGeometry {
   readonly normals: readonly Normal[];
   readonly continentIndex: Int8Array;
   readonly continents: readonly string[];
+  /** Samples × the area of a lattice cell, steradians: close to `area` when the sampling is right. */
+  readonly sampledArea: number;
 }
 const geometryCache = new WeakMap<Feature, CountryGeometry>();
 
@@ -159,7 +200,7 @@ function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryG
     const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
     const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
     const continent = continentOf(code, feature.properties.name);
-    const points = equalAreaSamples(feature, area);
+    const { points, cellArea } = equalAreaSamples(feature, area);
     const continents: string[] = [];
     const continentIndex = Int8Array.from(points, (p) => {
       const name = sampleContinent(code, continent, p);
@@ -167,10 +208,16 @@ function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryG
       if (!continents.includes(name)) continents.push(name);
       return continents.indexOf(name);
     });
-    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), normals: points.map((p) => normalAt([p[0]!, p[1]!])), continentIndex, continents };
+    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), normals: points.map((p) => normalAt([p[0]!, p[1]!])), continentIndex, continents, sampledArea: points.length * cellArea };
     geometryCache.set(feature, cached);
   }
   return cached;
+}
+
+/** How a country is sampled: the number of samples, their total area and the country's own (steradians). */
+export function countrySampling(feature: Feature<Geometry, { name: string }>): { samples: number; sampledArea: number; area: number } {
+  const { normals, sampledArea, area } = countryGeometry(feature);
+  return { samples: normals.length, sampledArea, area };
 }
 
 const zeroShares = (): Record<ZoneName, number> => Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;

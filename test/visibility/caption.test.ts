@@ -7,14 +7,14 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { geoBounds, geoContains } from 'd3-geo';
+import { geoArea, geoBounds, geoContains } from 'd3-geo';
 import type { Feature, Geometry } from 'geojson';
 import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
 import type { LonLat } from '../../src/ephemeris/earth.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { loadBasemap } from '../../src/map/basemap.ts';
 import { countryName, eclipseCaption } from '../../src/outputs/caption.ts';
-import { countryShares, type CountryShare } from '../../src/visibility/countries.ts';
+import { countrySampling, countryShares, MIN_SAMPLES_PER_COUNTRY, type CountryShare } from '../../src/visibility/countries.ts';
 import { visibilityEvaluator, visibilityOf, type ZoneName } from '../../src/visibility/visibility.ts';
 import { seededRandom } from './support.ts';
 
@@ -164,4 +164,15 @@ test('2026-03-03: continents by share — Africa and Europe see nothing, Oceania
   const { caption } = eclipseCaption(eclipse, visibilityOf(eclipse), civilClock('UTC'));
   assert.match(caption, /It cannot be seen from Africa and Europe\./);
   assert.match(caption, /All of it can be seen from [^.]*Oceania/);
+});
+
+test('the equal-area samples measure each country\'s area: d3-geo geoArea within 7 % for every country (edges are great circles to d3, lines in lon/lat to the samples: the 49th parallel), median within 1 %', () => {
+  const errors = features.map((f) => {
+    const { samples, sampledArea } = countrySampling(f);
+    assert.ok(samples >= MIN_SAMPLES_PER_COUNTRY, `${f.properties.name}: ${samples} samples`);
+    return sampledArea / geoArea(f) - 1;
+  });
+  for (const [k, e] of errors.entries()) assert.ok(Math.abs(e) < 0.07, `${features[k]!.properties.name}: ${(e * 100).toFixed(1)} %`);
+  const sorted = errors.map(Math.abs).sort((a, b) => a - b);
+  assert.ok(sorted[Math.floor(sorted.length / 2)]! < 0.01, `median ${(sorted[Math.floor(sorted.length / 2)]! * 100).toFixed(2)} %`);
 });

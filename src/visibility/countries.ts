@@ -12,9 +12,8 @@ import { geoArea, geoCentroid } from 'd3-geo';
 import type { Feature, Geometry, Position } from 'geojson';
 import { countries as countryTable, continents as continentNames } from 'countries-list';
 import isoCountries from 'i18n-iso-countries';
-import { normalAt, type Normal } from './moonUp.ts';
-import type { Visibility, VisibilityEvaluator, ZoneName } from './visibility.ts';
-import { visibilityEvaluator, ZONE_ORDER } from './visibility.ts';
+import { moonUpMargin, normalAt, type Normal } from './moonUp.ts';
+import { spanTests, zoneFromMargins, ZONE_ORDER, type Visibility, type ZoneName } from './visibility.ts';
 
 export type ZoneShares = Readonly<Record<ZoneName, number>>;
 
@@ -223,7 +222,10 @@ export function countrySampling(feature: Feature<Geometry, { name: string }>): {
 const zeroShares = (): Record<ZoneName, number> => Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;
 const largest = (shares: ZoneShares): ZoneName => ZONE_ORDER.reduce((best, z) => (shares[z] > shares[best] ? z : best), ZONE_ORDER[0]!);
 
-export function countryShares(visibility: Visibility, countries: readonly Feature<Geometry, { name: string }>[], evaluator: VisibilityEvaluator = visibilityEvaluator(visibility)): CountryShare[] {
+export function countryShares(visibility: Visibility, countries: readonly Feature<Geometry, { name: string }>[]): CountryShare[] {
+  // The zone from the Moon-up margins at the start and end of the phase, as the evaluator gives it, by table: this loop sees every sample.
+  const { start, end } = spanTests(visibility, visibility.zoneSpan);
+  const zoneIndex = [0, 1, 2, 3].map((k) => ZONE_ORDER.indexOf(zoneFromMargins({ start: k & 2 ? 1 : -1, end: k & 1 ? 1 : -1 })));
   return countries.map((feature) => {
     const { area, code, continent, normals, continentIndex, continents } = countryGeometry(feature);
     // counts[c * zones + z]: samples of continent c (the last row: all) in zone z.
@@ -231,7 +233,8 @@ export function countryShares(visibility: Visibility, countries: readonly Featur
     const counts = new Float64Array((continents.length + 1) * zones);
     const all = continents.length * zones;
     for (let k = 0; k < normals.length; k++) {
-      const z = ZONE_ORDER.indexOf(evaluator.zoneAtNormal(normals[k]!));
+      const n = normals[k]!;
+      const z = zoneIndex[(moonUpMargin(start, n) > 0 ? 2 : 0) + (moonUpMargin(end, n) > 0 ? 1 : 0)]!;
       counts[all + z]!++;
       if (continentIndex[k]! >= 0) counts[continentIndex[k]! * zones + z]!++;
     }

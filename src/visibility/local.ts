@@ -210,6 +210,9 @@ const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest'
 export const compassWord = (azimuthDeg: number) => COMPASS[Math.round(azimuthDeg / 45) % 8]!;
 const heightWord = (altitudeDeg: number) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the');
 
+/** Within this latitude of a pole (about 100 m) compass words lose their meaning. */
+const POLE_LATITUDE_DEG = 89.999;
+
 export type EclipsePhase = 'before' | 'penumbral' | 'partial' | 'total' | 'after';
 
 /** What is happening at an instant: which phase is on. */
@@ -315,7 +318,10 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   const c = eclipse.contacts;
   const t = (m: Moment) => clock.time(m.utDays);
   const zone = clock.abbreviation(eclipse.greatest.utDays);
-  const where = (e: LocalEvent) => `${heightWord(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg)}`;
+  // At a pole every direction is south (or north): give the height only.
+  const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
+  const where = (e: LocalEvent) =>
+    atPole ? `${Math.max(0, Math.round(e.moonAltitudeDeg))}° above the horizon` : `${heightWord(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg)}`;
   const view = localView(local);
   const penumbral = eclipse.kind === 'penumbral';
   const daylight = events.some((e) => e.moonUp && e.sky === 'day' && e.event !== 'moonrise' && e.event !== 'moonset')
@@ -329,7 +335,7 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   // At a rise or set the Moon is on the horizon: say only where.
   const setBefore = (e: LocalEvent) => crossings.some((x) => x.event === 'moonset' && x.moment.utDays < e.moment.utDays);
   const moves = (e: LocalEvent, time: string) =>
-    `the Moon ${e.event === 'moonrise' ? (setBefore(e) ? 'rises again' : 'rises') : 'sets'} at ${time} in the ${compassWord(e.moonAzimuthDeg)}, ${PHASE_STATE[phaseAt(eclipse, e.moment.utDays)]}`;
+    `the Moon ${e.event === 'moonrise' ? (setBefore(e) ? 'rises again' : 'rises') : 'sets'} at ${time}${atPole ? '' : ` in the ${compassWord(e.moonAzimuthDeg)}`}, ${PHASE_STATE[phaseAt(eclipse, e.moment.utDays)]}`;
   // The whole main phase in view: its span in one stretch, as almanacs give it, with any rise before it and set after it, in order.
   if (view.main === 'all') {
     const [startName, endName] = penumbral ? (['P1', 'P4'] as const) : (['U1', 'U4'] as const);

@@ -159,3 +159,19 @@ test('the calendar gives one event per stretch of a phase with the Moon up: a se
     assert.equal(Math.round(e.endDate.toJSDate().getTime() / 1000), seconds(view.intervals[k]!.toUtDays));
   });
 });
+
+test('at the poles no compass word is given (every direction is south at the North Pole, north at the South Pole: common practice), the height instead', () => {
+  let seen = 0;
+  for (const eclipse of ECLIPSES.slice(0, 12)) {
+    for (const lat of [90, -90]) {
+      const local = localCircumstances(eclipse, { latDeg: lat, lonDeg: 0 });
+      const summary = localSummary(local, clock, 'the pole station');
+      if (/cannot be seen/.test(summary)) continue;
+      seen++;
+      assert.doesNotMatch(summary, /\b(north|south|east|west|northeast|southeast|southwest|northwest)\b/, summary);
+      const greatest = local.events.find((e) => e.event === 'greatest')!;
+      if (greatest.moonUp) assert.match(summary, new RegExp(`the Moon ${Math.max(0, Math.round(greatest.moonAltitudeDeg))}° above the horizon`));
+    }
+  }
+  assert.ok(seen >= 6, `${seen}`);
+});

@@ -1,7 +1,8 @@
 /**
  * Visibility as GeoJSON (RFC 7946): per stage the region where the Moon is
  * up, and the derived zones — planar lon/lat polygons, cut at ±180° and wound
- * counter-clockwise, so that any GIS gets the right regions.
+ * counter-clockwise, so that any GIS gets the right regions. The zones come
+ * from both horizon circles at once (tiling.ts), so they tile the plane.
  */
 import type { Feature, FeatureCollection, MultiPolygon } from 'geojson';
 import { isoSeconds } from '../ephemeris/time.ts';

@@ -44,7 +44,9 @@ export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: A
   const n = columns * rows;
   const cellColumns = columns - 1;
   const cellRows = rows - 1;
-  const classOf = (k: number) => label(first[k]! > 0, second[k]! > 0);
+  // Sign classes 0–3 (first positive: 2, second positive: 1); a triangle is whole only when its corners share one (not merely a label).
+  const classOf = (k: number) => (first[k]! > 0 ? 2 : 0) + (second[k]! > 0 ? 1 : 0);
+  const labelOfClass = [label(false, false), label(false, true), label(true, false), label(true, true)];
   const vertex = (k: number): Node => {
     const i = k % columns;
     const j = (k - i) / columns;
@@ -109,17 +111,19 @@ export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: A
     return { nodes, lines };
   };
 
-  // Each triangle's class when all its corners share one; undefined when it is cut.
+  // Each triangle's label when all its corners share one sign class; -2 when it is cut.
   const triangleCount = cellColumns * cellRows * 2;
   const uniform = new Int32Array(triangleCount).fill(-2);
   for (let j = 0; j < cellRows; j++) {
     for (let i = 0; i < cellColumns; i++) {
       const k = j * columns + i;
-      const [ca, cb, cc, cd] = [classOf(k), classOf(k + 1), classOf(k + columns + 1), classOf(k + columns)];
+      const ca = classOf(k);
+      const cb = classOf(k + 1);
+      const cc = classOf(k + columns + 1);
+      const cd = classOf(k + columns);
       const cell = (j * cellColumns + i) * 2;
-      const same = (x: number, y: number, z: number) => (x === y && y === z ? x : -2);
-      uniform[cell] = same(ca, cc, cb);
-      uniform[cell + 1] = same(ca, cd, cc);
+      if (ca === cc && cc === cb) uniform[cell] = labelOfClass[ca]!;
+      if (ca === cd && cd === cc) uniform[cell + 1] = labelOfClass[ca]!;
     }
   }
   // Across each side of a triangle, the triangle on the other side (or -1 at the frame).
@@ -139,6 +143,18 @@ export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: A
     return j + 1 < cellRows ? ((j + 1) * cellColumns + i) * 2 : -1;
   };
 
+  /** A whole triangle whose three neighbours are whole with the same label (none at the frame): all its sides cancel. */
+  const isInterior = (triangle: number, whole: number): boolean => {
+    const cell = triangle >> 1;
+    const i = cell % cellColumns;
+    const j = (cell - i) / cellColumns;
+    if (uniform[triangle ^ 1] !== whole) return false;
+    if (triangle % 2 === 0) {
+      return i + 1 < cellColumns && j > 0 && uniform[(j * cellColumns + i + 1) * 2 + 1] === whole && uniform[((j - 1) * cellColumns + i) * 2 + 1] === whole;
+    }
+    return i > 0 && j + 1 < cellRows && uniform[(j * cellColumns + i - 1) * 2] === whole && uniform[((j + 1) * cellColumns + i) * 2] === whole;
+  };
+
   const edges: Map<number, [number, number]>[] = Array.from({ length: labels }, () => new Map());
   const KEY_SPAN = n * 8;
   const addEdge = (target: number, from: number, to: number) => {
@@ -156,14 +172,15 @@ export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: A
       const c = k + columns + 1;
       const d = k + columns;
       const cell = (j * cellColumns + i) * 2;
-      const triangles: [number, number[], number[]][] = [
-        [cell, [a, c, b], [2 * n + k, 1 * n + (k + 1), 0 * n + k]],
-        [cell + 1, [a, d, c], [1 * n + k, 0 * n + (k + columns), 2 * n + k]],
-      ];
-      for (const [triangle, corners, sides] of triangles) {
+      for (let half = 0; half < 2; half++) {
+        const triangle = cell + half;
         const whole = uniform[triangle]!;
-        if (whole !== -2) {
-          if (whole < 0) continue;
+        // A whole triangle with no label, or one inside a region of its own label, adds nothing.
+        if (whole === -1) continue;
+        if (whole >= 0 && isInterior(triangle, whole)) continue;
+        const corners = half === 0 ? [a, c, b] : [a, d, c];
+        const sides = half === 0 ? [2 * n + k, 1 * n + (k + 1), 0 * n + k] : [1 * n + k, 0 * n + (k + columns), 2 * n + k];
+        if (whole >= 0) {
           for (let s = 0; s < 3; s++) {
             const other = across(triangle, sides[s]!);
             if (other >= 0 && uniform[other] === whole) continue;
@@ -173,12 +190,12 @@ export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: A
         }
         const start: Piece = { nodes: corners.map(vertex), lines: sides };
         for (const firstPositive of [true, false]) {
-          const half = clip(start, 0, firstPositive, triangle);
-          if (half.nodes.length < 3) continue;
+          const part = clip(start, 0, firstPositive, triangle);
+          if (part.nodes.length < 3) continue;
           for (const secondPositive of [true, false]) {
             const target = label(firstPositive, secondPositive);
             if (target < 0) continue;
-            const piece = clip(half, 1, secondPositive, triangle);
+            const piece = clip(part, 1, secondPositive, triangle);
             if (piece.nodes.length < 3) continue;
             for (let s = 0; s < piece.nodes.length; s++) addEdge(target, piece.nodes[s]!.key, piece.nodes[(s + 1) % piece.nodes.length]!.key);
           }

@@ -18,7 +18,7 @@ export { findPlace, type Place } from './places/gazetteer.ts';
 export { timeZoneAt, timeZoneOfPlace, zonesOfCountry } from './places/timeZone.ts';
 export { visibilityOf, visibilityEvaluator, type Visibility, type VisibilityEvaluator, type ZoneName, type StageName } from './visibility/visibility.ts';
 export { moonUpCap, type MoonUpCap } from './visibility/moonUp.ts';
-export { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type SkyClass } from './visibility/local.ts';
+export { localCircumstances, localSummary, localView, upIntervals, type LocalCircumstances, type LocalEvent, type LocalView, type SkyClass, type UpInterval } from './visibility/local.ts';
 export { THEMES, THEME_NAMES, type Theme, type ThemeName } from './map/theme.ts';
 export { PROJECTION_NAMES, type View, type ProjectionName } from './map/projection.ts';
 export { composeScene, type MapStyle, type Scene } from './map/scene.ts';

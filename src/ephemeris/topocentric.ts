@@ -1,9 +1,15 @@
 /**
  * A body's altitude and azimuth for an observer on the WGS 84 ellipsoid:
  * geocentric position (EQJ) → true equator of date → Earth-fixed (GAST from
- * our own UT) → minus the observer's position → local east/north/up. Apparent
- * altitude adds Saemundsson's refraction (Meeus, Astronomical Algorithms
- * eq. 16.4), held at its −1° value below that, as JPL Horizons does.
+ * our own UT) → minus the observer's position → local east/north/up.
+ *
+ * Refraction convention: Saemundsson's formula (Meeus, Astronomical
+ * Algorithms, ch. 16, eq. 16.4) for true altitudes from −1° up, the range in
+ * which JPL Horizons and astronomy-engine's 'normal' mode apply it unchanged.
+ * Below −1° the body is under any sea-level horizon, no ray reaches the
+ * observer and refraction is not defined: the altitude given is the geometric
+ * one, as almanacs tabulate bodies below the horizon. The apparent altitude
+ * therefore steps from about −0.35° to −1° there.
  */
 import { RotateVector, Rotation_EQJ_EQD, Vector } from 'astronomy-engine';
 import { greenwichApparentSiderealDeg } from './earth.ts';
@@ -22,7 +28,7 @@ export interface Observer {
 }
 
 export interface Horizontal {
-  /** Apparent altitude of the body's centre, with refraction, degrees. */
+  /** Altitude of the body's centre, degrees: apparent (with refraction) from a true −1° up, geometric below. */
   readonly altitudeDeg: number;
   /** Altitude without refraction, degrees. */
   readonly geometricAltitudeDeg: number;
@@ -32,10 +38,13 @@ export interface Horizontal {
   readonly distanceKm: number;
 }
 
-/** Saemundsson: refraction in degrees for a true (airless) altitude in degrees. */
+/** The lowest true altitude at which refraction is applied, degrees. */
+export const REFRACTION_FLOOR_DEG = -1;
+
+/** Saemundsson (Meeus eq. 16.4): refraction in degrees for a true (airless) altitude in degrees; 0 where it is not defined (below −1°). */
 export function refractionDeg(trueAltitudeDeg: number): number {
-  if (trueAltitudeDeg > 90) return 0;
-  const h = Math.max(-1, trueAltitudeDeg);
+  if (trueAltitudeDeg > 90 || trueAltitudeDeg < REFRACTION_FLOOR_DEG) return 0;
+  const h = trueAltitudeDeg;
   return 1.02 / Math.tan((h + 10.3 / (h + 5.11)) * DEG) / 60;
 }
 

@@ -6,9 +6,9 @@ import { stringify } from 'csv-stringify/sync';
 import { fixed } from '../eclipse/figures.ts';
 import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
-import { isoMinutes, isoSeconds, type Moment } from '../ephemeris/time.ts';
+import { isoMinutes, isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
-import { localCircumstances, localSummary, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
+import { localCircumstances, localSummary, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
@@ -47,6 +47,8 @@ export const EVENT_WORDS: Record<LocalEventName, string> = {
 };
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
+/** Altitudes in data outputs: to 0.01°. */
+export const altitude2 = (v: number) => Math.round(v * 100) / 100;
 
 /**
  * RFC 3339 local time to the second, denoting the same instant as `utc`: 2025-03-14T02:09:40-03:00.
@@ -70,10 +72,10 @@ export function localJson(report: LocalReport): string {
       event: e.event,
       utc: isoSeconds(e.moment.utDays),
       local: localIso(clock, e.moment),
-      moonAltitude: round1(e.moonAltitudeDeg),
+      moonAltitude: altitude2(e.moonAltitudeDeg),
       moonAzimuth: round1(e.moonAzimuthDeg),
       moonUp: e.moonUp,
-      sunAltitude: round1(e.sunAltitudeDeg),
+      sunAltitude: altitude2(e.sunAltitudeDeg),
       sky: e.sky,
     })),
     summary,
@@ -120,7 +122,7 @@ function notes(report: LocalReport): string[] {
   const zone = report.clock.zoneDescriptionBetween(events[0]!.moment.utDays, events[events.length - 1]!.moment.utDays);
   const julian = julianDateOfIsoDate(e.id) ? ' Dates: proleptic Gregorian calendar (the Julian date is given beside the eclipse\'s date).' : '';
   return [
-    `Local time: ${zone}. Times rounded to the minute. Moon altitude: its centre, with refraction; "up": upper limb above a sea-level horizon.${julian}`,
+    `Local time: ${zone}. Times rounded to the minute. Moon altitude: its centre, with refraction from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.${julian}`,
     `Shadow: ${e.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${e.deltaT.seconds.toFixed(1)} s (${e.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
   ];
 }
@@ -199,43 +201,41 @@ const PHASES: readonly Phase[] = [
   { key: 'total', title: 'Totality', start: 'U2', end: 'U3' },
 ];
 
-/** One event per phase that can be seen from the place, cut to the time the Moon is up. */
+/** One event per phase and stretch of it that can be seen from the place, cut to the time the Moon is up. */
 export function localIcs(report: LocalReport, generator: string): string {
   const { local, place } = report;
   const events = local.events;
   const find = (name: LocalEventName) => events.find((e) => e.event === name);
-  const rise = find('moonrise');
-  const set = find('moonset');
+  const intervals = upIntervals(local);
   const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
   for (const phase of PHASES) {
     const start = find(phase.start);
     const end = find(phase.end);
     if (!start || !end) continue;
-    // The part of the phase with the Moon up: from the later of its start and moonrise, to the earlier of its end and moonset.
-    let from = start.moonUp ? start.moment : rise && rise.moment.utDays > start.moment.utDays && rise.moment.utDays < end.moment.utDays ? rise.moment : undefined;
-    let to = end.moonUp ? end.moment : set && set.moment.utDays > start.moment.utDays && set.moment.utDays < end.moment.utDays ? set.moment : undefined;
-    if (!from || !to) {
-      const inside = events.some((e) => e.moonUp && e.moment.utDays > start.moment.utDays && e.moment.utDays < end.moment.utDays);
-      if (!inside) continue;
-      from ??= start.moment;
-      to ??= end.moment;
-    }
-    const uid = `${local.eclipse.id}-${phase.key}-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`;
-    const cut = from !== start.moment || to !== end.moment ? ' (the part with the Moon above the horizon)' : '';
-    lines.push(
-      'BEGIN:VEVENT',
-      `UID:${uid}`,
-      // A stable stamp keeps the file identical from run to run: the instant of greatest eclipse.
-      `DTSTAMP:${icsTime(local.eclipse.greatest)}`,
-      `DTSTART:${icsTime(from)}`,
-      `DTEND:${icsTime(to)}`,
-      `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
-      `LOCATION:${icsText(place.name)}`,
-      `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-      `DESCRIPTION:${icsText(`${phase.title} of ${local.eclipse.id}${cut}. ${report.summary} Safe to watch with the naked eye; predictions, weather permitting.`)}`,
-      'TRANSP:TRANSPARENT',
-      'END:VEVENT',
-    );
+    // Each stretch of the phase with the Moon up (it may set and rise again inside a phase at high latitudes).
+    const stretches = intervals
+      .map((i) => [Math.max(i.fromUtDays, start.moment.utDays), Math.min(i.toUtDays, end.moment.utDays)] as const)
+      .filter(([a, b]) => b > a);
+    stretches.forEach(([a, b], k) => {
+      const from = a === start.moment.utDays ? start.moment : momentFromUT(a, start.moment.deltaTSeconds);
+      const to = b === end.moment.utDays ? end.moment : momentFromUT(b, end.moment.deltaTSeconds);
+      const uid = `${local.eclipse.id}-${phase.key}${k > 0 ? `-${k + 1}` : ''}-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`;
+      const cut = from !== start.moment || to !== end.moment ? ' (the part with the Moon above the horizon)' : '';
+      lines.push(
+        'BEGIN:VEVENT',
+        `UID:${uid}`,
+        // A stable stamp keeps the file identical from run to run: the instant of greatest eclipse.
+        `DTSTAMP:${icsTime(local.eclipse.greatest)}`,
+        `DTSTART:${icsTime(from)}`,
+        `DTEND:${icsTime(to)}`,
+        `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
+        `LOCATION:${icsText(place.name)}`,
+        `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
+        `DESCRIPTION:${icsText(`${phase.title} of ${local.eclipse.id}${cut}. ${report.summary} Safe to watch with the naked eye; predictions, weather permitting.`)}`,
+        'TRANSP:TRANSPARENT',
+        'END:VEVENT',
+      );
+    });
   }
   lines.push('END:VCALENDAR');
   return `${lines.map(fold).join('\r\n')}\r\n`;

@@ -26,7 +26,7 @@ declare module 'astronomia/parallax' {
   export default parallax;
 }
 declare module 'astronomia/refraction' {
-  const refraction: { saemundsson(trueAltitudeRad: number): number };
+  const refraction: { saemundsson(trueAltitudeRad: number): number; bennett(apparentAltitudeRad: number): number };
   export default refraction;
 }
 declare module 'astronomia/julian' {

@@ -95,7 +95,7 @@ function meeusAltitudeDeg(moment: Moment, latDeg: number, lonDeg: number): numbe
   const theta = (sidereal.apparent(jd) / 86400) * 2 * Math.PI;
   const hourAngle = theta + lonDeg * DEG - topo.ra;
   const h = Math.asin(Math.sin(latDeg * DEG) * Math.sin(topo.dec) + Math.cos(latDeg * DEG) * Math.cos(topo.dec) * Math.cos(hourAngle));
-  return (h + (h > -1 * DEG ? refraction.saemundsson(h) : refraction.saemundsson(-1 * DEG))) / DEG;
+  return (h + (h >= -1 * DEG ? refraction.saemundsson(h) : 0)) / DEG;
 }
 
 test('the Moon\'s altitude at each contact: within 0.05° of astronomy-engine\'s Horizon and within 0.2° of Meeus (astronomia)', () => {
@@ -107,8 +107,9 @@ test('the Moon\'s altitude at each contact: within 0.05° of astronomy-engine\'s
         const time = astroTimeOf(ev.moment);
         const observer = new AEObserver(lat, lon, 0);
         const equ = Equator(Body.Moon, time, observer, true, true);
-        // 'jplhor': Saemundsson held at its −1° value below the horizon, as ours is.
-        const hor = Horizon(time, observer, equ.ra, equ.dec, 'jplhor');
+        // Saemundsson ('normal') from a true −1° up, geometric below, as ours is.
+        const geometric = Horizon(time, observer, equ.ra, equ.dec);
+        const hor = geometric.altitude >= -1 ? Horizon(time, observer, equ.ra, equ.dec, 'normal') : geometric;
         assert.ok(Math.abs(hor.altitude - ev.moonAltitudeDeg) < 0.05, `${date} ${name} ${ev.event}: ${ev.moonAltitudeDeg} vs AE ${hor.altitude}`);
         const dAz = Math.abs(((hor.azimuth - ev.moonAzimuthDeg + 540) % 360) - 180);
         if (Math.abs(hor.altitude) < 85) assert.ok(dAz < 0.1, `${date} ${name} ${ev.event} azimuth ${ev.moonAzimuthDeg} vs ${hor.azimuth}`);

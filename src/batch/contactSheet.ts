@@ -1,10 +1,11 @@
 /**
  * index.html: a contact sheet of a batch that works offline from its folder —
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
- * remote fonts or styles; relative links only.
+ * remote fonts or styles; relative links only, to files inside the folder.
  */
 import { durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
+import { isPlainRelativePath } from '../outputs/files.ts';
 import type { Manifest } from './manifest.ts';
 
 const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
@@ -13,7 +14,9 @@ const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thu
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
 
 export function contactSheet(manifest: Manifest, title: string): string {
-  const cards = manifest.eclipses.map((entry) => {
+  const cards = manifest.eclipses.map((listed) => {
+    // Only plain relative paths inside the folder become links: never "../", "/", "//host" or a URL.
+    const entry = { ...listed, files: listed.files.filter((f) => isPlainRelativePath(f.path)) };
     const r = entry.record;
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
     const greatestMinute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' ');

@@ -107,14 +107,44 @@ function nestingDepth(value: unknown, limit: number): number {
   return deepest;
 }
 
+/**
+ * How deeply brackets nest in style text ([ and { outside quoted strings
+ * and comments), counted in one pass: checked before parsing, because a
+ * parser that recurses per level can exhaust the stack, and V8 ends the
+ * process outright if that happens while it compiles a regular expression.
+ */
+export function bracketDepth(text: string): number {
+  let depth = 0;
+  let deepest = 0;
+  let quote: string | undefined;
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i]!;
+    if (quote) {
+      if (c === '\\' && quote === '"') i++;
+      else if (c === quote) quote = undefined;
+    } else if (c === '"' || c === "'") {
+      quote = c;
+    } else if (c === '#' && (i === 0 || /\s/.test(text[i - 1]!))) {
+      while (i < text.length && text[i] !== '\n') i++;
+    } else if (c === '[' || c === '{') {
+      deepest = Math.max(deepest, ++depth);
+    } else if (c === ']' || c === '}') {
+      depth = Math.max(0, depth - 1);
+    }
+  }
+  return deepest;
+}
+
 /** Parse style text; every refusal is one InputError naming the file. */
 function parseStyleText(text: string, isJson: boolean, file: string): unknown {
   const kind = isJson ? 'JSON' : 'YAML';
   const tooDeep = () => new InputError(file, `a style nested at most ${MAX_STYLE_DEPTH} levels deep`, 'a file nested deeper', true);
+  // Brackets in plain YAML text ("title: Moon [low]") count too, so the text check leaves room; the parsed value is checked exactly.
+  if (bracketDepth(text) > 4 * MAX_STYLE_DEPTH) throw tooDeep();
   try {
     if (isJson) return JSON.parse(text);
     // YAML 1.2 core schema only: an unknown tag (!x, !!binary, !!set…) is an error here, not a warning on stderr.
-    const document = parseDocument(text, { logLevel: 'silent', schema: 'core', prettyErrors: false });
+    const document = parseDocument(text, { logLevel: 'silent', schema: 'core', resolveKnownTags: false, prettyErrors: false });
     const problem = document.errors[0] ?? document.warnings[0];
     if (problem) {
       if (/call stack/i.test(problem.message)) throw tooDeep();

@@ -21,7 +21,7 @@ import { spawnSync } from 'node:child_process';
 import { hostname } from 'node:os';
 import { join } from 'node:path';
 import { InputError } from '../errors.ts';
-import { readRegularFile } from '../outputs/files.ts';
+import { readRegularFile, ReadRefused } from '../outputs/files.ts';
 
 export const LOCK_NAME = '.umbracast.lock';
 const LOCK_TOOL = 'umbracast batch';
@@ -167,13 +167,14 @@ export function acquireLock(outDir: string): () => void {
     }
     const kind = describeKind(path);
     if (kind) throw new InputError('--out', `a folder whose lock ${LOCK_NAME} is a plain file`, `${outDir} (${LOCK_NAME} is ${kind}; remove it)`, true);
-    let text: string;
+    let text: string | undefined;
     try {
       text = readRegularFile(path, MAX_LOCK_BYTES, { followLinks: false }).toString('utf8');
-    } catch {
-      continue; // Gone, or replaced while we looked: try again.
+    } catch (error) {
+      // Gone, or replaced while we looked: try again. Too large to be ours: stale.
+      if (!(error instanceof ReadRefused) || error.reason !== 'too large') continue;
     }
-    const holder = parseLock(text);
+    const holder = text === undefined ? undefined : parseLock(text);
     if (holder) {
       const state = holderState(holder);
       if (state === 'alive') {
@@ -191,7 +192,7 @@ export function acquireLock(outDir: string): () => void {
       continue;
     }
     const moved = readText(aside);
-    if (moved === text) {
+    if (moved === text || (text === undefined && moved !== undefined && moved.length > MAX_LOCK_BYTES)) {
       unlinkSync(aside);
     } else {
       // A new lock arrived between our read and the move: put it back.

@@ -320,6 +320,7 @@ export async function mergeManifests(outDir: string, manifests: readonly Manifes
   if (!statSync(outDir, { throwIfNoEntry: false })?.isDirectory()) throw new InputError('--out', 'the folder that holds the shards\' files', outDir);
   const release = acquireLock(outDir);
   try {
+    removeLeftovers(outDir);
     const first = manifests[0]!;
     for (const m of manifests) {
       if (m.styleHash !== first.styleHash) throw new InputError('--merge', `manifests made with one style (${first.styleHash})`, `a manifest with style ${m.styleHash}`, true);

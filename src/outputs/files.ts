@@ -12,7 +12,7 @@
  * open descriptor must be a regular file, and at most the limit is read.
  */
 import { randomBytes } from 'node:crypto';
-import { closeSync, constants, existsSync, fstatSync, lstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
+import { closeSync, constants, type Stats, existsSync, fstatSync, lstatSync, openSync, readSync, realpathSync, statSync } from 'node:fs';
 import { open, rename, unlink } from 'node:fs/promises';
 import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { InputError } from '../errors.ts';
@@ -118,7 +118,7 @@ export class ReadRefused extends Error {
   }
 }
 
-const KIND_WORDS: [(s: ReturnType<typeof fstatSync>) => boolean, string][] = [
+const KIND_WORDS: [(s: Stats) => boolean, string][] = [
   [(s) => s.isDirectory(), 'a folder'],
   [(s) => s.isFIFO(), 'a FIFO'],
   [(s) => s.isCharacterDevice(), 'a character device'],
@@ -141,6 +141,9 @@ export function readRegularFile(path: string, maxBytes: number, { followLinks = 
     const code = (error as NodeJS.ErrnoException).code;
     if (code === 'ENOENT' || code === 'ENOTDIR') throw new ReadRefused('missing', path);
     if (code === 'ELOOP' || code === 'EMLINK') throw new ReadRefused('link', path);
+    // A socket cannot be opened at all (ENXIO): say what it is.
+    const stat = followLinks ? statSync(path, { throwIfNoEntry: false }) : lstatSync(path, { throwIfNoEntry: false });
+    if (stat && !stat.isFile()) throw new ReadRefused('not a regular file', `${path} is ${KIND_WORDS.find(([is]) => is(stat))?.[1] ?? 'not a regular file'}`);
     throw new ReadRefused('unreadable', `${path} (${code ?? 'error'})`);
   }
   try {

@@ -180,8 +180,14 @@ export function indexFiles(manifest: Manifest, title: string): [string, string][
   const records = [...manifest.eclipses].sort((a, b) => a.id.localeCompare(b.id));
   const convention = (SHADOW_CONVENTIONS as readonly unknown[]).includes(manifest.style.convention) ? (manifest.style.convention as ShadowConventionName) : 'danjon';
   const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
-  const suffix = manifest.shard ? `.shard-${manifest.shard.replace('/', '-of-')}` : '';
-  return [[`catalogue${suffix}.csv`, catalogueCsv(doc)], [`index${suffix}.html`, contactSheet({ ...manifest, eclipses: records }, title)]];
+  const [csv, html] = indexNamesFor(manifest.shard);
+  return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title)]];
+}
+
+/** The names of a manifest's catalogue.csv and index.html (a shard's carry its part). */
+function indexNamesFor(shard: string | null): [string, string] {
+  const suffix = shard ? `.shard-${shard.replace('/', '-of-')}` : '';
+  return [`catalogue${suffix}.csv`, `index${suffix}.html`];
 }
 
 /** Refresh catalogue.csv and index.html from a manifest. */
@@ -194,7 +200,8 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
   const { outDir, style } = options;
   // Everything that can be refused is checked before anything is made.
   const { mine } = planBatch(options);
-  const manifestName = manifestNameFor(options.shard ? `${options.shard.index}/${options.shard.count}` : null);
+  const shardName = options.shard ? `${options.shard.index}/${options.shard.count}` : null;
+  const manifestName = manifestNameFor(shardName);
   const made = makeOutDir(outDir);
   let release: () => void;
   try {
@@ -204,7 +211,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     throw error;
   }
   try {
-    checkFolderEntries(outDir, [manifestName, ...indexFiles(emptyManifest(options, ''), '').map(([name]) => name)]);
+    checkFolderEntries(outDir, [manifestName, ...indexNamesFor(shardName)]);
     mkdirSync(join(outDir, 'thumbs'), { recursive: true });
     const leftovers = removeLeftovers(outDir);
     if (leftovers > 0) options.onProgress?.({ type: 'notice', message: `removed ${leftovers} temporary file(s) left by an interrupted run` });

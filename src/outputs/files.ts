@@ -134,6 +134,7 @@ const KIND_WORDS: [(s: Stats) => boolean, string][] = [
  * part of the path (O_NOFOLLOW). Throws ReadRefused.
  */
 export function readRegularFile(path: string, maxBytes: number, { followLinks = true } = {}): Buffer {
+  if (path.includes('\0')) throw new ReadRefused('missing', path); // No file system path holds a NUL.
   let fd: number;
   try {
     fd = openSync(path, constants.O_RDONLY | constants.O_NONBLOCK | (followLinks ? 0 : constants.O_NOFOLLOW));

@@ -211,3 +211,14 @@ test('attack 14: --merge given a FIFO, a link or a device as its manifest is one
   }
   assert.deepEqual(readdirSync(out), []);
 });
+
+test('attack 15: a NUL byte in --out, --style or --merge (no file system path holds one) is one line, not a crash', async () => {
+  const { dir, style } = batchSetup();
+  const cases: [string[], RegExp][] = [
+    [['--out', join(dir, 'x\u0000y'), '--style', style], /^umbracast: --out: expected a folder, or a new folder inside an existing one, received ".*x\\u0000y"$/],
+    [['--style', join(dir, 's\u0000.yaml'), '--out', join(dir, 'o')], /^umbracast: --style: expected a readable style file, received ".*s\\u0000\.yaml"$/],
+    [['--merge', join(dir, '\u0000'), '--out', dir], /^umbracast: --merge: expected folders that exist, received ".*\\u0000"$/],
+  ];
+  for (const [args, pattern] of cases) assertOneLine(await run(['batch', ...TWO_ECLIPSES, ...args]), pattern);
+  assert.deepEqual(readdirSync(dir), ['style.yaml']);
+});

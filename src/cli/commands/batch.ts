@@ -67,7 +67,7 @@ export function registerBatch(program: Command, context: CommandContext): void {
 
 async function batchAction(options: BatchCommandOptions, context: CommandContext): Promise<void> {
   const outDir = resolve(options.out);
-  if (!existsSync(dirname(outDir)) || (existsSync(outDir) && !statSync(outDir).isDirectory())) {
+  if (options.out.includes('\0') || !existsSync(dirname(outDir)) || (existsSync(outDir) && !statSync(outDir).isDirectory())) {
     throw new InputError('--out', 'a folder, or a new folder inside an existing one', options.out);
   }
   if (options.merge) {
@@ -182,10 +182,10 @@ function progressReporter(context: CommandContext): { report: (event: ProgressEv
         case 'failed':
           done++;
           if (bar) bar.update(done, { current: `${event.id} ${event.kind}` });
-          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${event.message}`}\n`);
+          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${printable(event.message)}`}\n`);
           break;
         case 'notice':
-          if (!bar) context.stderr(`umbracast batch: ${event.message}\n`);
+          if (!bar) context.stderr(`umbracast batch: ${printable(event.message)}\n`);
           break;
         default:
           break;

@@ -80,6 +80,9 @@ test('4. a lock whose holder is alive with the recorded start time, or on anothe
     const live = await lockedRun(record(holder.pid!));
     assertOneLine(live.outcome, new RegExp(`^umbracast: --out: expected a folder no other batch is writing to, received .* \\(batch with process ${holder.pid} holds \\.umbracast\\.lock; wait for it, or remove the lock if that process is gone\\)$`));
     assert.equal(readFileSync(join(live.out, LOCK_NAME), 'utf8'), record(holder.pid!), 'the holder\'s lock is left as it was');
+    // A merge takes the same lock (issue point 8): refused while the batch holds it.
+    writeFileSync(join(live.out, 'manifest.shard-1-of-1.json'), JSON.stringify({ schema: 'umbracast.manifest/1', tool: 'umbracast 0.1.0', styleHash: '0123456789abcdef', style: {}, range: { from: '2026-03-01T00:00:00.000Z', to: '2026-09-01T00:00:00.000Z' }, shard: '1/1', eclipses: [] }));
+    assertOneLine(await run(['batch', '--merge', live.out, '--out', live.out]), /^umbracast: --out: expected a folder no other batch is writing to, received .* \(batch with process \d+ holds \.umbracast\.lock;/);
     const remote = await lockedRun(record(holder.pid!, { host: 'kestrel-ridge-observatory' }));
     assertOneLine(remote.outcome, /^umbracast: --out: expected a folder no other batch is writing to, received .* \(a batch on host "kestrel-ridge-observatory" holds \.umbracast\.lock; wait for it, or remove the lock if that batch is gone\)$/);
   } finally {

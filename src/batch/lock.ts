@@ -13,7 +13,7 @@
  * The lock appears whole: it is written under a temporary name and linked
  * into place (link(2) fails if the name exists), so no batch reads a lock
  * half-written. A stale lock is moved aside before it is removed, and
- * removed only if what was moved is the lock judged stale.
+ * removed only if what was moved is the lock judged stale (same inode).
  */
 import { randomBytes } from 'node:crypto';
 import { closeSync, constants, linkSync, lstatSync, openSync, readFileSync, renameSync, rmdirSync, unlinkSync, writeSync } from 'node:fs';
@@ -142,12 +142,6 @@ function tryCreate(path: string, record: LockRecord, outDir: string): boolean {
   }
 }
 
-function describeKind(path: string): string | undefined {
-  const stat = lstatSync(path, { throwIfNoEntry: false });
-  if (!stat || stat.isFile()) return undefined;
-  return stat.isDirectory() ? 'a folder' : stat.isSymbolicLink() ? 'a symbolic link' : 'not a plain file';
-}
-
 /**
  * Take the lock of `outDir`, or throw an InputError naming the live holder.
  * Returns the release function, which removes the lock only if it is still ours.
@@ -165,16 +159,20 @@ export function acquireLock(outDir: string): () => void {
         }
       };
     }
-    const kind = describeKind(path);
-    if (kind) throw new InputError('--out', `a folder whose lock ${LOCK_NAME} is a plain file`, `${outDir} (${LOCK_NAME} is ${kind}; remove it)`, true);
-    let text: string | undefined;
+    // A lock is never changed in place, only made (link) and removed: its inode identifies it.
+    const judged = lstatSync(path, { throwIfNoEntry: false });
+    if (!judged) continue;
+    if (!judged.isFile()) {
+      const kind = judged.isDirectory() ? 'a folder' : judged.isSymbolicLink() ? 'a symbolic link' : 'not a plain file';
+      throw new InputError('--out', `a folder whose lock ${LOCK_NAME} is a plain file`, `${outDir} (${LOCK_NAME} is ${kind}; remove it)`, true);
+    }
+    let holder: ReturnType<typeof parseLock>;
     try {
-      text = readRegularFile(path, MAX_LOCK_BYTES, { followLinks: false }).toString('utf8');
+      holder = parseLock(readRegularFile(path, MAX_LOCK_BYTES, { followLinks: false }).toString('utf8'));
     } catch (error) {
       // Gone, or replaced while we looked: try again. Too large to be ours: stale.
       if (!(error instanceof ReadRefused) || error.reason !== 'too large') continue;
     }
-    const holder = text === undefined ? undefined : parseLock(text);
     if (holder) {
       const state = holderState(holder);
       if (state === 'alive') {
@@ -184,25 +182,23 @@ export function acquireLock(outDir: string): () => void {
         throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (a batch on host ${JSON.stringify(holder.host)} holds ${LOCK_NAME}; wait for it, or remove the lock if that batch is gone)`, true);
       }
     }
-    // Stale (its batch is gone) or not a lock of ours: move it aside, and remove it only if it is what we judged.
+    // Stale (its batch is gone) or not a lock of ours: move it aside, and remove it only if it is the one judged.
     const aside = `${path}.stale-${randomBytes(6).toString('hex')}`;
     try {
       renameSync(path, aside);
     } catch {
       continue;
     }
-    const moved = readText(aside);
-    if (moved === text || (text === undefined && moved !== undefined && moved.length > MAX_LOCK_BYTES)) {
-      unlinkSync(aside);
-    } else {
-      // A new lock arrived between our read and the move: put it back.
+    const moved = lstatSync(aside);
+    if (moved.ino !== judged.ino || moved.dev !== judged.dev) {
+      // A new lock arrived between our look and the move: put it back (link fails if yet another is in place; that one decides).
       try {
         linkSync(aside, path);
       } catch {
-        // Another lock is in place again; it decides.
+        // Another lock is in place again.
       }
-      unlinkSync(aside);
     }
+    unlinkSync(aside);
   }
   throw new InputError('--out', 'a folder whose lock can be taken', `${outDir} (other batches keep taking ${LOCK_NAME})`, true);
 }

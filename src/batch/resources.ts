@@ -13,6 +13,8 @@
 import { availableParallelism, freemem, totalmem } from 'node:os';
 
 const MIB = 1024 * 1024;
+/** The view-from-here figure a batch draws per place. */
+export const SKY_FIGURE_PX = { widthPx: 1600, heightPx: 900 } as const;
 /** A worker's own size: Node, the world basemap, the font, the gazetteer when places are named. */
 export const WORKER_BASE_BYTES = 210 * MIB;
 

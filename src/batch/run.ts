@@ -25,7 +25,7 @@ import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipse/conven
 import { parseSizeAndDpi, optionsFromStyle } from '../cli/mapSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
-import { capNote, machineBudget, workerCount, type PictureLoad } from './resources.ts';
+import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
 import { contactSheet } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
 import { fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
@@ -86,8 +86,6 @@ export const MAX_BATCH_ECLIPSES = 500;
 /** Heap ceiling of each worker process, MB (V8's heap only; pictures live outside it, see resources.ts). */
 export const WORKER_HEAP_MB = 256;
 const RASTER_NAMES: readonly RasterFormatName[] = ['png', 'webp', 'jpg'];
-/** A view-from-here figure, as task.ts draws it. */
-const SKY_PIXELS = 1600 * 900;
 
 /**
  * Remove temporary files left by a killed run (writeFileAtomic's
@@ -131,7 +129,7 @@ export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 
 /** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
 export function pictureLoad(style: HouseStyle): PictureLoad {
   const { size } = parseSizeAndDpi(optionsFromStyle(style));
-  const skyPixels = style.sky && style.places.length > 0 ? SKY_PIXELS : 0;
+  const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
   return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter((f) => RASTER_NAMES.includes(f as RasterFormatName)).length };
 }
 

@@ -13,6 +13,7 @@ import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../cli/choose.ts';
 import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/mapSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
+import { SKY_FIGURE_PX } from './resources.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
@@ -50,7 +51,7 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
       await write(`${stem}-${slug}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
     }
     if (style.sky) {
-      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: { widthPx: 1600, heightPx: 900 }, dpi: settings.dpi, format: 'png', generator });
+      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: SKY_FIGURE_PX, dpi: settings.dpi, format: 'png', generator });
       await write(`${stem}-${slug}-sky.png`, 'sky', sky.bytes);
     }
   }

@@ -1,12 +1,13 @@
 /**
  * index.html: a contact sheet of a batch that works offline from its folder —
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
- * remote fonts or styles; relative links only.
+ * remote fonts or styles; relative links only, to files inside the folder.
  */
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import { durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
+import { isPlainRelativePath } from '../outputs/files.ts';
 import type { Manifest } from './manifest.ts';
 
 const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
@@ -27,7 +28,9 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
 }
 
 export function contactSheet(manifest: Manifest, title: string): string {
-  const cards = manifest.eclipses.map((entry) => {
+  const cards = manifest.eclipses.map((listed) => {
+    // Only plain relative paths inside the folder become links: never "../", "/", "//host" or a URL.
+    const entry = { ...listed, files: listed.files.filter((f) => isPlainRelativePath(f.path)) };
     const r = entry.record;
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
     // The figures as the maps print them: rounded once, from the full value (record.printed).

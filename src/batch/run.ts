@@ -9,7 +9,7 @@
  * Workers are processes (tinypool's child_process runtime): each has its own
  * heap and allocator, and a worker that dies fails its eclipse, not the batch.
  */
-import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, rmSync, unlinkSync, writeSync } from 'node:fs';
+import { lstatSync, mkdirSync, readdirSync, statSync, unlinkSync } from 'node:fs';
 import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
@@ -19,10 +19,16 @@ import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
 import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
-import { writeFileAtomic } from '../outputs/files.ts';
+import { TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
+import type { RasterFormatName } from '../outputs/formatNames.ts';
+import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipse/conventions.ts';
+import { parseSizeAndDpi, optionsFromStyle } from '../cli/mapSettings.ts';
+import { acquireLock, removeIfEmpty } from './lock.ts';
+import { printable } from './printable.ts';
+import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
 import { contactSheet } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
-import { filesIntact, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
+import { fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
 import { sha256, type TaskInput, type WrittenFile } from './written.ts';
 
@@ -74,61 +80,85 @@ export function entryKey(record: EclipseRecord, hash: string, tool: string): str
   return sha256(JSON.stringify({ tool, style: hash, record })).slice(0, 32);
 }
 
-export const LOCK_NAME = '.umbracast.lock';
-/** The most eclipses one batch call takes: some hours of work, bounded. */
+export { LOCK_NAME } from './lock.ts';
+/** The most eclipses one batch call (or one shard of it) takes: some hours of work, bounded. */
 export const MAX_BATCH_ECLIPSES = 500;
-/** Heap ceiling of each worker process, MB. */
+/** Heap ceiling of each worker process, MB (V8's heap only; pictures live outside it, see resources.ts). */
 export const WORKER_HEAP_MB = 256;
+const RASTER_NAMES: readonly RasterFormatName[] = ['png', 'webp', 'jpg'];
 
-/** One batch per output folder: a lock file made with O_EXCL; a lock whose process is gone is taken over. */
-export function acquireLock(outDir: string): () => void {
-  const path = join(outDir, LOCK_NAME);
-  for (let attempt = 0; attempt < 2; attempt++) {
-    try {
-      const fd = openSync(path, 'wx');
-      writeSync(fd, `${process.pid}\n`);
-      closeSync(fd);
-      return () => {
-        try {
-          if (readFileSync(path, 'utf8').trim() === String(process.pid)) unlinkSync(path);
-        } catch {
-          // Already gone.
-        }
-      };
-    } catch (error) {
-      if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
-      const holder = Number.parseInt(readFileSync(path, 'utf8'), 10);
-      let alive = false;
-      try {
-        if (Number.isInteger(holder) && holder > 0) {
-          process.kill(holder, 0);
-          alive = true;
-        }
-      } catch {
-        alive = false;
-      }
-      if (alive && holder !== process.pid) {
-        throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (batch with process ${holder} holds ${LOCK_NAME}; wait for it, or remove the lock if that process is gone)`, true);
-      }
-      unlinkSync(path);
-    }
-  }
-  throw new InputError('--out', 'a folder whose lock can be taken', outDir);
-}
-
-/** Remove temporary files left by a killed run (writeFileAtomic's ".name.partial-PID"). */
+/**
+ * Remove temporary files left by a killed run (writeFileAtomic's
+ * ".name.partial-PID-RANDOM"): in --out and in its thumbs folder, only if
+ * that is a real folder (a link is never followed), and only entries that
+ * are not folders (unlink removes a link itself, never what it points to).
+ */
 export function removeLeftovers(outDir: string): number {
   let removed = 0;
   for (const folder of [outDir, join(outDir, 'thumbs')]) {
-    if (!existsSync(folder)) continue;
+    if (!lstatSync(folder, { throwIfNoEntry: false })?.isDirectory()) continue;
     for (const name of readdirSync(folder)) {
-      if (/^\..+\.partial-\d+$/.test(name)) {
-        rmSync(join(folder, name), { force: true });
+      if (!TEMPORARY_NAME.test(name)) continue;
+      const path = join(folder, name);
+      if (lstatSync(path, { throwIfNoEntry: false })?.isDirectory() !== false) continue;
+      try {
+        unlinkSync(path);
         removed++;
+      } catch {
+        // Gone already, or not ours to remove.
       }
     }
   }
   return removed;
+}
+
+/** What a batch call will do: every eclipse of the range and kinds, this shard's part, within the ceiling. */
+export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: LunarEclipse[]; mine: LunarEclipse[] } {
+  const { style } = options;
+  const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);
+  const all = findLunarEclipses({ from: options.from, to: options.to, convention: style.convention, deltaT }).filter((e) => options.kinds.includes(e.kind));
+  const mine = shardOf(all, options.shard);
+  if (mine.length > MAX_BATCH_ECLIPSES) {
+    const which = options.shard ? `shard ${options.shard.index}/${options.shard.count}: ${mine.length} of ${all.length} eclipses` : `${all.length} eclipses`;
+    const advice = `split the range, or use --shard I/N with N of at least ${Math.ceil(all.length / MAX_BATCH_ECLIPSES)}`;
+    throw new InputError(options.shard ? '--shard' : '--to', `at most ${MAX_BATCH_ECLIPSES} eclipses per batch or per shard (about two centuries); ${advice}`, `${which} from ${options.from.toISOString().slice(0, 10)}`, true);
+  }
+  return { all, mine };
+}
+
+/** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
+export function pictureLoad(style: HouseStyle): PictureLoad {
+  const { size } = parseSizeAndDpi(optionsFromStyle(style));
+  const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
+  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter((f) => RASTER_NAMES.includes(f as RasterFormatName)).length };
+}
+
+/** Names a batch writes in --out itself, which must be files (or absent) for the batch to replace them. */
+function checkFolderEntries(outDir: string, names: readonly string[]): void {
+  const thumbs = lstatSync(join(outDir, 'thumbs'), { throwIfNoEntry: false });
+  if (thumbs && !thumbs.isDirectory()) {
+    throw new InputError('--out', 'a folder whose thumbs is a folder (or absent)', `${outDir} (thumbs is ${thumbs.isSymbolicLink() ? 'a symbolic link' : 'not a folder'})`, true);
+  }
+  for (const name of names) {
+    if (lstatSync(join(outDir, name), { throwIfNoEntry: false })?.isDirectory()) {
+      throw new InputError('--out', `a folder whose ${name} is a file (or absent)`, `${outDir} (${name} is a folder)`, true);
+    }
+  }
+}
+
+/** Make --out if it is new (its parent must exist); the caller removes it again if nothing is written. */
+function makeOutDir(outDir: string): boolean {
+  const stat = statSync(outDir, { throwIfNoEntry: false });
+  if (stat) {
+    if (!stat.isDirectory()) throw new InputError('--out', 'a folder, or a new folder inside an existing one', outDir);
+    return false;
+  }
+  try {
+    mkdirSync(outDir);
+  } catch (error) {
+    throw new InputError('--out', 'a folder, or a new folder inside an existing one', `${outDir} (${(error as NodeJS.ErrnoException).code ?? 'cannot be made'})`, true);
+  }
+  return true;
 }
 
 function emptyManifest(options: BatchOptions, hash: string): Manifest {
@@ -143,36 +173,53 @@ function emptyManifest(options: BatchOptions, hash: string): Manifest {
   };
 }
 
+/** catalogue.csv and index.html of a manifest, as [name, text]. */
+export function indexFiles(manifest: Manifest, title: string): [string, string][] {
+  const records = [...manifest.eclipses].sort((a, b) => a.id.localeCompare(b.id));
+  const convention = (SHADOW_CONVENTIONS as readonly unknown[]).includes(manifest.style.convention) ? (manifest.style.convention as ShadowConventionName) : 'danjon';
+  const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
+  const [csv, html] = indexNamesFor(manifest.shard);
+  return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title)]];
+}
+
+/** The names of a manifest's catalogue.csv and index.html (a shard's carry its part). */
+function indexNamesFor(shard: string | null): [string, string] {
+  const suffix = shard ? `.shard-${shard.replace('/', '-of-')}` : '';
+  return [`catalogue${suffix}.csv`, `index${suffix}.html`];
+}
+
 /** Refresh catalogue.csv and index.html from a manifest. */
 export async function writeIndexes(outDir: string, manifest: Manifest, title: string): Promise<void> {
-  const records = [...manifest.eclipses].sort((a, b) => a.id.localeCompare(b.id));
-  const doc = { ...catalogueDocument([], { convention: (manifest.style.convention as 'danjon' | 'chauvenet') ?? 'danjon', deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
-  const suffix = manifest.shard ? `.shard-${manifest.shard.replace('/', '-of-')}` : '';
-  await writeFileAtomic(join(outDir, `catalogue${suffix}.csv`), catalogueCsv(doc));
-  await writeFileAtomic(join(outDir, `index${suffix}.html`), contactSheet({ ...manifest, eclipses: records }, title));
+  for (const [name, text] of indexFiles(manifest, title)) await writeFileAtomic(join(outDir, name), text);
 }
 
 export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
   const started = performance.now();
   const { outDir, style } = options;
-  mkdirSync(join(outDir, 'thumbs'), { recursive: true });
-  const release = acquireLock(outDir);
+  // Everything that can be refused is checked before anything is made.
+  const { mine } = planBatch(options);
+  const shardName = options.shard ? `${options.shard.index}/${options.shard.count}` : null;
+  const manifestName = manifestNameFor(shardName);
+  const made = makeOutDir(outDir);
+  let release: () => void;
   try {
+    release = acquireLock(outDir);
+  } catch (error) {
+    if (made) removeIfEmpty(outDir);
+    throw error;
+  }
+  try {
+    checkFolderEntries(outDir, [manifestName, ...indexNamesFor(shardName)]);
+    mkdirSync(join(outDir, 'thumbs'), { recursive: true });
     const leftovers = removeLeftovers(outDir);
     if (leftovers > 0) options.onProgress?.({ type: 'notice', message: `removed ${leftovers} temporary file(s) left by an interrupted run` });
     const hash = styleHash(style);
-    const manifestPath = join(outDir, manifestNameFor(options.shard ? `${options.shard.index}/${options.shard.count}` : null));
+    const manifestPath = join(outDir, manifestName);
     const { manifest: previous, problem } = readManifest(manifestPath);
     if (problem) options.onProgress?.({ type: 'notice', message: `${problem}; rebuilding it from this run` });
     const manifest = emptyManifest(options, hash);
     const known = new Map((previous?.eclipses ?? []).map((e) => [e.id, e]));
 
-    const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);
-    const all = findLunarEclipses({ from: options.from, to: options.to, convention: style.convention, deltaT }).filter((e) => options.kinds.includes(e.kind));
-    if (all.length > MAX_BATCH_ECLIPSES) {
-      throw new InputError('--to', `a range of at most ${MAX_BATCH_ECLIPSES} eclipses per batch (about two centuries); split it, or use --shard`, `${all.length} eclipses from ${options.from.toISOString().slice(0, 10)}`, true);
-    }
-    const mine = shardOf(all, options.shard);
     const todo: { eclipse: LunarEclipse; record: EclipseRecord; key: string }[] = [];
     let skipped = 0;
     for (const eclipse of mine) {
@@ -198,7 +245,11 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     let rendered = 0;
     let interrupted = false;
     if (todo.length > 0) {
-      const workers = Math.min(options.jobs, todo.length);
+      const load = pictureLoad(style);
+      const budget = machineBudget(options.jobs, load);
+      const { workers: allowed, limitedBy } = workerCount(budget);
+      if (limitedBy) options.onProgress?.({ type: 'notice', message: capNote(budget, allowed, limitedBy, load) });
+      const workers = Math.min(allowed, todo.length);
       const pool = new Tinypool({
         filename: await workerScript(),
         runtime: 'child_process',
@@ -257,25 +308,56 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
   }
 }
 
-/** Combine shard manifests into one manifest.json (and its catalogue.csv and index.html). */
+/** The most manifests one merge reads: a shard each, for every shard count a batch allows. */
+export const MAX_MERGE_MANIFESTS = 9999;
+
+/**
+ * Combine shard manifests into one manifest.json (and its catalogue.csv and
+ * index.html), in --out, under its lock. Every manifest has been read and
+ * checked field by field (readManifest); here the shards must share one
+ * style, agree on every eclipse they share, list no file twice, and every
+ * file they list must be in --out as listed (size and SHA-256). All three
+ * files are made in memory first: a refused merge writes nothing.
+ */
 export async function mergeManifests(outDir: string, manifests: readonly Manifest[], tool: string): Promise<Manifest> {
   if (manifests.length === 0) throw new InputError('--merge', 'at least one shard manifest', 'none');
-  const first = manifests[0]!;
-  for (const m of manifests) {
-    if (m.styleHash !== first.styleHash) throw new InputError('--merge', `manifests made with one style (${first.styleHash})`, `a manifest with style ${m.styleHash}`);
-  }
-  const byId = new Map<string, ManifestEntry>();
-  for (const m of manifests) {
-    for (const e of m.eclipses) {
-      const seen = byId.get(e.id);
-      if (seen && seen.key !== e.key) throw new InputError('--merge', 'shards that agree on every eclipse they share', `two different entries for ${e.id}`);
-      byId.set(e.id, e);
+  if (manifests.length > MAX_MERGE_MANIFESTS) throw new InputError('--merge', `at most ${MAX_MERGE_MANIFESTS} manifests`, `${manifests.length}`, true);
+  if (!statSync(outDir, { throwIfNoEntry: false })?.isDirectory()) throw new InputError('--out', 'the folder that holds the shards\' files', outDir);
+  const release = acquireLock(outDir);
+  try {
+    removeLeftovers(outDir);
+    const first = manifests[0]!;
+    for (const m of manifests) {
+      if (m.styleHash !== first.styleHash) throw new InputError('--merge', `manifests made with one style (${first.styleHash})`, `a manifest with style ${m.styleHash}`, true);
     }
+    const byId = new Map<string, ManifestEntry>();
+    const owner = new Map<string, string>();
+    for (const m of manifests) {
+      for (const e of m.eclipses) {
+        const seen = byId.get(e.id);
+        if (seen && seen.key !== e.key) throw new InputError('--merge', 'shards that agree on every eclipse they share', `two different entries for ${e.id}`, true);
+        if (seen) continue;
+        for (const f of e.files) {
+          const other = owner.get(f.path);
+          if (other !== undefined) throw new InputError('--merge', 'shards whose eclipses each have files of their own', `${e.id} and ${other} both list ${f.path}`, true);
+          owner.set(f.path, e.id);
+        }
+        byId.set(e.id, e);
+      }
+    }
+    if (byId.size > MAX_MANIFEST_ECLIPSES) throw new InputError('--merge', `at most ${MAX_MANIFEST_ECLIPSES} eclipses in all`, `${byId.size}`, true);
+    for (const e of byId.values()) {
+      const broken = e.files.find((f) => !fileIntact(outDir, f));
+      if (broken) throw new InputError('--merge', 'shards whose files are in --out as their manifests list them (size and SHA-256)', `${e.id}: ${printable(broken.path)} missing or changed`, true);
+    }
+    const from = manifests.map((m) => m.range.from).sort()[0]!;
+    const to = manifests.map((m) => m.range.to).sort().at(-1)!;
+    const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
+    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(merged, `Lunar eclipses ${from.slice(0, 10)} to ${to.slice(0, 10)}`)];
+    checkFolderEntries(outDir, files.map(([name]) => name));
+    for (const [name, text] of files) await writeFileAtomic(join(outDir, name), text);
+    return merged;
+  } finally {
+    release();
   }
-  const from = manifests.map((m) => m.range.from).sort()[0]!;
-  const to = manifests.map((m) => m.range.to).sort().at(-1)!;
-  const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
-  await writeManifest(outDir, merged);
-  await writeIndexes(outDir, merged, `Lunar eclipses ${from.slice(0, 10)} to ${to.slice(0, 10)}`);
-  return merged;
 }

@@ -4,9 +4,8 @@
  * error names the file, the field and what was expected.
  */
 import { createHash } from 'node:crypto';
-import { readFileSync, statSync } from 'node:fs';
 import { extname } from 'node:path';
-import { parse as parseYaml } from 'yaml';
+import { parseDocument } from 'yaml';
 import { z } from 'zod';
 import { InputError, describeReceived } from '../errors.ts';
 import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
@@ -15,7 +14,9 @@ import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
-import { DEFAULT_NAMING, NAMING_FIELDS } from './naming.ts';
+import { MAX_FILE_NAME_BYTES, readRegularFile, ReadRefused } from '../outputs/files.ts';
+import { DEFAULT_NAMING, longestStemBytes, MAP_SUFFIX_BYTES, NAMING_FIELDS } from './naming.ts';
+import { printable } from './printable.ts';
 
 /** Style files larger than this are refused: a style is a page of settings. */
 export const MAX_STYLE_BYTES = 256 * 1024;
@@ -30,7 +31,8 @@ const namingTemplate = z
   .regex(/^[A-Za-z0-9{][A-Za-z0-9._{}-]*$/, 'a file-name template of letters, digits, . _ - and {id} {kind} {year} {saros}, with no folders')
   .refine((t) => !t.includes('..'), 'a template without ".."')
   .refine((t) => [...t.matchAll(/\{([^}]*)\}/g)].every((m) => (NAMING_FIELDS as readonly string[]).includes(m[1]!)), `placeholders among {${NAMING_FIELDS.join('}, {')}}`)
-  .refine((t) => t.includes('{id}'), 'a template containing {id}, so that every eclipse gets its own files');
+  .refine((t) => t.includes('{id}'), 'a template containing {id}, so that every eclipse gets its own files')
+  .refine((t) => longestStemBytes(t) + MAP_SUFFIX_BYTES <= MAX_FILE_NAME_BYTES, `a template whose file names fit in ${MAX_FILE_NAME_BYTES} bytes once filled in ({id} is 10 characters, {kind} up to 9, {saros} up to 4; the longest extension is .geojson)`);
 
 const styleObject = z
   .object({
@@ -88,25 +90,104 @@ export function validateStyle(data: unknown, file = 'style'): HouseStyle {
   return result.data;
 }
 
-/** Read a style file: .json, .yaml or .yml. */
-export function loadStyle(path: string): HouseStyle {
-  const extension = extname(path).toLowerCase();
-  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('--style', 'a .json, .yaml or .yml file', path);
-  let text: string;
+/** A style is a mapping of fields holding values or short lists: anything nested deeper is not a style. */
+export const MAX_STYLE_DEPTH = 8;
+
+/** How deeply a parsed value nests, counted without recursion (so no depth can overflow the stack). */
+function nestingDepth(value: unknown, limit: number): number {
+  let deepest = 0;
+  const stack: [unknown, number][] = [[value, 1]];
+  while (stack.length > 0) {
+    const [item, depth] = stack.pop()!;
+    if (item === null || typeof item !== 'object') continue;
+    deepest = Math.max(deepest, depth);
+    if (deepest > limit) return deepest;
+    for (const child of Object.values(item)) stack.push([child, depth + 1]);
+  }
+  return deepest;
+}
+
+/**
+ * How deeply brackets nest in style text ([ and { outside quoted strings
+ * and comments), counted in one pass: checked before parsing, because a
+ * parser that recurses per level can exhaust the stack, and V8 ends the
+ * process outright if that happens while it compiles a regular expression.
+ */
+export function bracketDepth(text: string): number {
+  let depth = 0;
+  let deepest = 0;
+  let quote: string | undefined;
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i]!;
+    if (quote) {
+      if (c === '\\' && quote === '"') i++;
+      else if (c === quote) quote = undefined;
+    } else if (c === '"' || c === "'") {
+      quote = c;
+    } else if (c === '#' && (i === 0 || /\s/.test(text[i - 1]!))) {
+      while (i < text.length && text[i] !== '\n') i++;
+    } else if (c === '[' || c === '{') {
+      deepest = Math.max(deepest, ++depth);
+    } else if (c === ']' || c === '}') {
+      depth = Math.max(0, depth - 1);
+    }
+  }
+  return deepest;
+}
+
+/** Parse style text; every refusal is one InputError naming the file. */
+function parseStyleText(text: string, isJson: boolean, file: string): unknown {
+  const kind = isJson ? 'JSON' : 'YAML';
+  const tooDeep = () => new InputError(file, `a style nested at most ${MAX_STYLE_DEPTH} levels deep`, 'a file nested deeper', true);
+  // Brackets in plain YAML text ("title: Moon [low]") count too, so the text check leaves room; the parsed value is checked exactly.
+  if (bracketDepth(text) > 4 * MAX_STYLE_DEPTH) throw tooDeep();
   try {
-    if (statSync(path).size > MAX_STYLE_BYTES) throw new InputError('--style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
-    text = readFileSync(path, 'utf8');
+    if (isJson) return JSON.parse(text);
+    // YAML 1.2 core schema only: an unknown tag (!x, !!binary, !!set…) is an error here, not a warning on stderr.
+    const document = parseDocument(text, { logLevel: 'silent', schema: 'core', resolveKnownTags: false, prettyErrors: false });
+    const problem = document.errors[0] ?? document.warnings[0];
+    if (problem) {
+      if (/call stack/i.test(problem.message)) throw tooDeep();
+      throw new InputError(file, 'valid YAML', `a file that does not parse (${describeReceived(problem.message.split('\n')[0]).slice(1, -1)})`, true);
+    }
+    return document.toJS({ maxAliasCount: 100 });
   } catch (error) {
     if (error instanceof InputError) throw error;
+    if (error instanceof RangeError) throw tooDeep();
+    const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
+    throw new InputError(file, `valid ${kind}`, `a file that does not parse (${describeReceived(reason).slice(1, -1)})`, true);
+  }
+}
+
+/**
+ * Read a style file: .json, .yaml or .yml. It must be a regular file (a
+ * link to one is followed; a device, FIFO or folder is refused without
+ * reading it) of at most MAX_STYLE_BYTES; at most that much is ever read.
+ * Every error is one line, with what came from the file shown escaped.
+ */
+export function loadStyle(path: string): HouseStyle {
+  try {
+    return loadStyleUnescaped(path);
+  } catch (error) {
+    if (error instanceof InputError) throw new InputError(printable(error.parameter), printable(error.expected), printable(error.received), true);
+    throw error;
+  }
+}
+
+function loadStyleUnescaped(path: string): HouseStyle {
+  const extension = extname(path).toLowerCase();
+  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('--style', 'a .json, .yaml or .yml file', path);
+  let bytes: Buffer;
+  try {
+    bytes = readRegularFile(path, MAX_STYLE_BYTES);
+  } catch (error) {
+    if (!(error instanceof ReadRefused)) throw error;
+    if (error.reason === 'too large') throw new InputError('--style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
+    if (error.reason === 'not a regular file') throw new InputError('--style', 'a regular style file', `${describeReceived(path)} (${error.detail.slice(path.length + 1)})`, true);
     throw new InputError('--style', 'a readable style file', path);
   }
-  let data: unknown;
-  try {
-    data = extension === '.json' ? JSON.parse(text) : parseYaml(text, { maxAliasCount: 100 });
-  } catch (error) {
-    const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
-    throw new InputError(`${path}`, `valid ${extension === '.json' ? 'JSON' : 'YAML'}`, `a file that does not parse (${describeReceived(reason).slice(1, -1)})`, true);
-  }
+  const data = parseStyleText(bytes.toString('utf8'), extension === '.json', path);
+  if (nestingDepth(data, MAX_STYLE_DEPTH) > MAX_STYLE_DEPTH) throw new InputError(path, `a style nested at most ${MAX_STYLE_DEPTH} levels deep`, 'a file nested deeper', true);
   if (data !== null && data !== undefined && (typeof data !== 'object' || Array.isArray(data))) {
     throw new InputError(`${path}: (top level)`, 'a mapping of style fields', JSON.stringify(data));
   }

@@ -4,7 +4,6 @@
  * what it wrote, with sizes and hashes.
  */
 import sharp from 'sharp';
-import { placeSlug } from '../places/gazetteer.ts';
 import { THEMES } from '../map/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
@@ -13,7 +12,8 @@ import { renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../cli/choose.ts';
 import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/mapSettings.ts';
-import { fileStem } from './naming.ts';
+import { fileStem, stylePlaces } from './naming.ts';
+import { SKY_FIGURE_PX } from './resources.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
@@ -29,6 +29,8 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
   const settings = mapSettings(optionsFromStyle(style) as MapOptions);
   const written: WrittenFile[] = [];
   const write = async (relative: string, role: FileRole, data: Uint8Array | string) => {
+    // Each file once: two outputs of one name would overwrite each other and never settle.
+    if (written.some((w) => w.path === relative)) throw new Error(`two outputs named ${JSON.stringify(relative)}`);
     const bytes = typeof data === 'string' ? Buffer.from(data) : data;
     await writeFileAtomic(pathInside(outDir, relative), bytes);
     written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
@@ -39,16 +41,17 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
   await write(`${stem}.txt`, 'caption', captionText(caption));
   await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail!);
 
-  for (const name of style.places) {
+  const slugs = stylePlaces(style.places).map((p) => p.slug);
+  for (const [i, name] of style.places.entries()) {
     const chosen = choosePlace({ place: name })!;
     const report = localReport(eclipse, chosen);
-    const slug = placeSlug(chosen.place.name);
+    const slug = slugs[i]!;
     for (const format of style.localFormats) {
       const text = { table: localTable, markdown: localMarkdown, csv: localCsv, json: localJson, ics: (r: typeof report) => localIcs(r, generator) }[format](report);
       await write(`${stem}-${slug}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
     }
     if (style.sky) {
-      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: { widthPx: 1600, heightPx: 900 }, dpi: settings.dpi, format: 'png', generator });
+      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: SKY_FIGURE_PX, dpi: settings.dpi, format: 'png', generator });
       await write(`${stem}-${slug}-sky.png`, 'sky', sky.bytes);
     }
   }

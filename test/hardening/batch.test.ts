@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { test } from 'node:test';
 import fc from 'fast-check';
 import { stringify as toYaml } from 'yaml';
+import { pathInside } from '../../src/outputs/files.ts';
 import { assertContract, hostile, run, SETTINGS } from './support.ts';
 
 const BIN = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
@@ -77,15 +78,17 @@ test('a lock left by a process that is gone is taken over', async () => {
   assert.equal(outcome.code, 0, outcome.stderr);
 });
 
-test('symlinks inside --out are not followed out of it: the eclipse fails, nothing is written outside', async () => {
+test('symlinks inside --out are not followed out of it: a thumbs link is refused before any work, and every write checks its folder', async () => {
   const { dir, style, out } = setup();
   const outside = join(dir, 'elsewhere');
   mkdirSync(outside);
   mkdirSync(out);
   symlinkSync(outside, join(out, 'thumbs'));
   const outcome = await run(['batch', ...RANGE, '--style', style, '--out', out]);
-  assert.equal(outcome.code, 1);
-  assert.match(outcome.stderr, /umbracast: failed: 2 eclipse\(s\) failed: .*2026-03-03 \(refusing to write "thumbs\/2026-03-03-total\.png": a link leads out of the output folder\)/);
+  assert.equal(outcome.code, 2);
+  assert.match(outcome.stderr, /^umbracast: --out: expected a folder whose thumbs is a folder \(or absent\), received .* \(thumbs is a symbolic link\)\n$/);
+  // A link made after that check (a race) is still caught by the write itself.
+  assert.throws(() => pathInside(out, 'thumbs/2026-03-03-total.png'), /refusing to write "thumbs\/2026-03-03-total\.png": a link leads out of the output folder/);
   assert.deepEqual(readdirSync(outside), []);
 });
 
@@ -126,7 +129,8 @@ test('ceilings: a batch over more than 500 eclipses, a map over 64 megapixels, a
   const { style, out } = setup();
   const batch = await run(['batch', '--from', '1000', '--to', '1300', '--style', style, '--out', out]);
   assert.equal(batch.code, 2);
-  assert.match(batch.stderr, /^umbracast: --to: expected a range of at most 500 eclipses per batch/);
+  assert.match(batch.stderr, /^umbracast: --to: expected at most 500 eclipses per batch or per shard/);
+  assert.ok(!existsSync(out), 'a refused range makes no folder');
   const map = await run(['map', '--size', '9000x9000', '-o', join(out, 'm.png')]);
   assert.match(map.stderr, /at most 64 megapixels/);
   const title = await run(['map', '--title', 'x'.repeat(301), '-o', join(out, 'm.png')]);

@@ -1,5 +1,8 @@
 /** The contract every run must keep, whatever it is given (issue "Hardening"). */
 import assert from 'node:assert/strict';
+import { lstatSync, mkdtempSync, readdirSync, readFileSync, readlinkSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import fc from 'fast-check';
 import { main } from '../../src/cli/main.ts';
 
@@ -50,3 +53,37 @@ export const SETTINGS = { seed: 20261201, endOnFailure: true } as const;
 
 /** Counts kept for the closing note. */
 export const tried = { inputs: 0 };
+
+/** A small batch setup: a style (card maps, SVG only, no figures) and an output folder to be. */
+export function batchSetup(style = 'preset: card\nformats: [svg]\nsky: false\n', prefix = 'umbracast-hard2-'): { dir: string; style: string; out: string } {
+  const dir = mkdtempSync(join(tmpdir(), prefix));
+  writeFileSync(join(dir, 'style.yaml'), style);
+  return { dir, style: join(dir, 'style.yaml'), out: join(dir, 'out') };
+}
+
+/** Two eclipses: 2026-03-03 (total) and 2026-08-28 (partial). */
+export const TWO_ECLIPSES = ['--from', '2026-03-01', '--to', '2026-09-01'];
+
+/** Every file under a folder (not following links) with its bytes: to show that a refused run changed nothing. */
+export function snapshot(dir: string): Record<string, string> {
+  const out: Record<string, string> = {};
+  const walk = (folder: string, prefix: string) => {
+    for (const name of readdirSync(folder).sort()) {
+      const path = join(folder, name);
+      const stat = lstatSync(path);
+      if (stat.isDirectory()) walk(path, `${prefix}${name}/`);
+      else out[`${prefix}${name}`] = stat.isFile() ? readFileSync(path, 'base64') : stat.isSymbolicLink() ? `link → ${readlinkSync(path)}` : 'special';
+    }
+  };
+  walk(dir, '');
+  return out;
+}
+
+/** Exit 2 and one line on stderr, matching `pattern`; nothing on stdout; no raw control character. */
+export function assertOneLine(outcome: Outcome, pattern: RegExp): void {
+  assert.equal(outcome.code, 2, outcome.stderr);
+  assert.equal(outcome.stdout, '');
+  assert.equal(outcome.stderr.split('\n').length, 2, JSON.stringify(outcome.stderr));
+  assert.ok(!/[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/.test(outcome.stderr), `no raw control characters: ${JSON.stringify(outcome.stderr)}`);
+  assert.match(outcome.stderr.trimEnd(), pattern);
+}

@@ -4,10 +4,13 @@ import { availableParallelism } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
-import { InputError } from '../../errors.ts';
+import { describeReceived, InputError } from '../../errors.ts';
 import { ECLIPSE_KINDS } from '../../eclipse/types.ts';
 import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
-import { mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
+import { MAX_MERGE_MANIFESTS, mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
+import { longestStemBytes, placeSuffixBytes, SamePlace, stylePlaces } from '../../batch/naming.ts';
+import { printable } from '../../batch/printable.ts';
+import { MAX_FILE_NAME_BYTES } from '../../outputs/files.ts';
 import { DEFAULT_STYLE, loadStyle, type HouseStyle } from '../../batch/style.ts';
 import { choosePlace } from '../choose.ts';
 import { mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.ts';
@@ -51,49 +54,61 @@ export function registerBatch(program: Command, context: CommandContext): void {
     .option('--shard <I/N>', 'render only the I-th of N disjoint parts of the range')
     .option('--merge <dirs...>', 'combine the shard manifests found in these folders into --out/manifest.json')
     .action(async (options: BatchCommandOptions) => {
-      const outDir = resolve(options.out);
-      if (!existsSync(dirname(outDir)) || (existsSync(outDir) && !statSync(outDir).isDirectory())) {
-        throw new InputError('--out', 'a folder, or a new folder inside an existing one', options.out);
-      }
-      if (options.merge) {
-        const manifests = options.merge.flatMap((dir) => {
-          const folder = resolve(dir);
-          if (!existsSync(folder)) throw new InputError('--merge', 'folders that exist', dir);
-          if (statSync(folder).isFile()) return [readManifestOrFail(folder)];
-          const files = readdirSync(folder).filter((n) => /^manifest(\.shard-\d+-of-\d+)?\.json$/.test(n) && n !== MANIFEST_NAME);
-          return files.map((n) => readManifestOrFail(join(folder, n)));
-        });
-        const merged = await mergeManifests(outDir, manifests, `umbracast ${toolVersion()}`);
-        context.stdout(`umbracast batch: merged ${manifests.length} manifests, ${merged.eclipses.length} eclipses → ${join(outDir, MANIFEST_NAME)}\n`);
-        return;
-      }
-      const range = parseRange(options.from, options.to, context.now());
-      const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
-      const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
-      checkStyleSettings(style, options.style ?? 'the default style');
-      const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });
-      if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker processes from 1 to ${MAX_JOBS}`, options.jobs);
-      const shard = options.shard === undefined ? null : parseShard(options.shard);
-      const progress = progressReporter(context);
-      const controller = new AbortController();
-      const onSignal = () => controller.abort();
-      process.once('SIGINT', onSignal);
-      process.once('SIGTERM', onSignal);
       try {
-        const summary = await runBatch({ ...range, kinds, style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
-        progress.stop();
-        const size = `${(summary.bytes / 1e6).toFixed(1)} MB`;
-        context.stdout(`umbracast batch: ${summary.planned} eclipses — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${summary.files} files, ${size}, ${summary.seconds.toFixed(1)} s → ${outDir}\n`);
-        if (summary.interrupted) throw new BatchInterrupted();
-        if (summary.failed.length > 0) {
-          throw new Error(`${summary.failed.length} eclipse(s) failed: ${summary.failed.map((f) => `${f.id} (${f.message})`).join('; ')}; rerun to finish them`);
-        }
-      } finally {
-        progress.stop();
-        process.off('SIGINT', onSignal);
-        process.off('SIGTERM', onSignal);
+        await batchAction(options, context);
+      } catch (error) {
+        // What came from outside (paths, file names, style keys) is shown escaped, on one line.
+        if (error instanceof InputError) throw new InputError(printable(error.parameter), printable(error.expected), printable(error.received), true);
+        if (error instanceof Error && !(error instanceof BatchInterrupted)) throw new Error(printable(error.message));
+        throw error;
       }
     });
+}
+
+async function batchAction(options: BatchCommandOptions, context: CommandContext): Promise<void> {
+  const outDir = resolve(options.out);
+  if (options.out.includes('\0') || !existsSync(dirname(outDir)) || (existsSync(outDir) && !statSync(outDir).isDirectory())) {
+    throw new InputError('--out', 'a folder, or a new folder inside an existing one', options.out);
+  }
+  if (options.merge) {
+    const manifests = options.merge.flatMap((dir) => {
+      const folder = resolve(dir);
+      if (!existsSync(folder)) throw new InputError('--merge', 'folders that exist', dir);
+      if (!statSync(folder).isDirectory()) return [readManifestOrFail(folder)];
+      const files = readdirSync(folder).filter((n) => /^manifest\.shard-\d{1,4}-of-\d{1,4}\.json$/.test(n)).sort();
+      if (files.length > MAX_MERGE_MANIFESTS) throw new InputError('--merge', `at most ${MAX_MERGE_MANIFESTS} shard manifests`, `${files.length} in ${dir}`, true);
+      return files.map((n) => readManifestOrFail(join(folder, n)));
+    });
+    const merged = await mergeManifests(outDir, manifests, `umbracast ${toolVersion()}`);
+    context.stdout(`umbracast batch: merged ${manifests.length} manifests, ${merged.eclipses.length} eclipses → ${join(outDir, MANIFEST_NAME)}\n`);
+    return;
+  }
+  const range = parseRange(options.from, options.to, context.now());
+  const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
+  const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
+  checkStyleSettings(style, options.style ?? 'the default style');
+  const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });
+  if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker processes from 1 to ${MAX_JOBS}`, options.jobs);
+  const shard = options.shard === undefined ? null : parseShard(options.shard);
+  const progress = progressReporter(context);
+  const controller = new AbortController();
+  const onSignal = () => controller.abort();
+  process.once('SIGINT', onSignal);
+  process.once('SIGTERM', onSignal);
+  try {
+    const summary = await runBatch({ ...range, kinds, style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
+    progress.stop();
+    const size = `${(summary.bytes / 1e6).toFixed(1)} MB`;
+    context.stdout(`umbracast batch: ${summary.planned} eclipses — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${summary.files} files, ${size}, ${summary.seconds.toFixed(1)} s → ${outDir}\n`);
+    if (summary.interrupted) throw new BatchInterrupted();
+    if (summary.failed.length > 0) {
+      throw new Error(`${summary.failed.length} eclipse(s) failed: ${summary.failed.map((f) => `${f.id} (${f.message})`).join('; ')}; rerun to finish them`);
+    }
+  } finally {
+    progress.stop();
+    process.off('SIGINT', onSignal);
+    process.off('SIGTERM', onSignal);
+  }
 }
 
 const OPTION_FIELDS: Record<string, string> = {
@@ -119,6 +134,20 @@ export function checkStyleSettings(style: HouseStyle, file: string): void {
       choosePlace({ place: name });
     } catch (error) {
       throw field(error, `places[${i}]`);
+    }
+  });
+  // Each place gets file names of its own (two Springfields are told apart by country and region), short enough to write.
+  let places: ReturnType<typeof stylePlaces>;
+  try {
+    places = stylePlaces(style.places);
+  } catch (error) {
+    if (!(error instanceof SamePlace)) throw error;
+    throw new InputError(`${file}: places[${error.second}]`, 'places that are each listed once', `${describeReceived(style.places[error.second])} (the same place as places[${error.first}])`, true);
+  }
+  places.forEach(({ slug }, i) => {
+    const longest = longestStemBytes(style.naming) + placeSuffixBytes(slug);
+    if (longest > MAX_FILE_NAME_BYTES) {
+      throw new InputError(`${file}: places[${i}]`, `a place whose file names fit in ${MAX_FILE_NAME_BYTES} bytes with the naming template`, `${describeReceived(style.places[i])} (${longest} bytes)`, true);
     }
   });
 }
@@ -154,10 +183,10 @@ function progressReporter(context: CommandContext): { report: (event: ProgressEv
         case 'failed':
           done++;
           if (bar) bar.update(done, { current: `${event.id} ${event.kind}` });
-          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${event.message}`}\n`);
+          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${printable(event.message)}`}\n`);
           break;
         case 'notice':
-          if (!bar) context.stderr(`umbracast batch: ${event.message}\n`);
+          if (!bar) context.stderr(`umbracast batch: ${printable(event.message)}\n`);
           break;
         default:
           break;

@@ -1,0 +1,74 @@
+/**
+ * How many worker processes a batch runs: no more than asked, no more than
+ * the cores (each worker is a lane of about one core), and no more than
+ * the memory available holds at the per-worker need of the style's largest
+ * picture.
+ *
+ * The need was measured (peak RSS of one worker process, with the batch's
+ * worker flags, rendering one eclipse; see README "Limits"): about 160–230 MB
+ * for a small map, 606 MB for a 12000×5333 map in one raster format and
+ * 861–863 MB in two to four (which share one drawing held as raw pixels).
+ * The estimate below lies at or above every measurement.
+ */
+import { availableParallelism, freemem, totalmem } from 'node:os';
+
+const MIB = 1024 * 1024;
+/** The view-from-here figure a batch draws per place. */
+export const SKY_FIGURE_PX = { widthPx: 1600, heightPx: 900 } as const;
+/** A worker's own size: Node, the world basemap, the font, the gazetteer when places are named. */
+export const WORKER_BASE_BYTES = 210 * MIB;
+
+export interface PictureLoad {
+  /** Pixels of the largest picture a worker draws (the map, or a view-from-here figure). */
+  readonly pixels: number;
+  /** How many raster formats (png, webp, jpg) the map is written in. */
+  readonly rasterFormats: number;
+}
+
+/**
+ * Bytes a worker needs at its peak: its base, 4 bytes a pixel for the scene
+ * (its vector detail grows with the size), 4 more for the drawn surface of
+ * a raster format, and 4 more when several raster formats share one drawing.
+ */
+export function workerNeedBytes(load: PictureLoad): number {
+  const perPixel = 4 + (load.rasterFormats >= 1 ? 4 : 0) + (load.rasterFormats >= 2 ? 4 : 0);
+  return WORKER_BASE_BYTES + load.pixels * perPixel;
+}
+
+/** Memory this process may still use: what the system has free, within a container's limit if there is one. */
+export function availableMemoryBytes(): number {
+  const free = freemem();
+  const limit = typeof process.constrainedMemory === 'function' ? process.constrainedMemory() : 0;
+  if (limit && limit > 0 && limit < totalmem()) return Math.max(0, Math.min(free, limit - process.memoryUsage().rss));
+  return free;
+}
+
+export interface WorkerBudget {
+  readonly requested: number;
+  readonly cores: number;
+  readonly availableBytes: number;
+  readonly needBytes: number;
+}
+
+/** min(requested, cores, ⌊available / need⌋), and at least one; with what limited it. */
+export function workerCount(budget: WorkerBudget): { workers: number; limitedBy: 'cores' | 'memory' | undefined } {
+  const byMemory = Math.max(1, Math.floor(budget.availableBytes / budget.needBytes));
+  const workers = Math.max(1, Math.min(budget.requested, budget.cores, byMemory));
+  if (workers === budget.requested) return { workers, limitedBy: undefined };
+  return { workers, limitedBy: byMemory < budget.cores ? 'memory' : 'cores' };
+}
+
+/** The machine's side of the budget. */
+export function machineBudget(requested: number, load: PictureLoad): WorkerBudget {
+  return { requested, cores: availableParallelism(), availableBytes: availableMemoryBytes(), needBytes: workerNeedBytes(load) };
+}
+
+/** The one-line note printed when the count is capped. */
+export function capNote(budget: WorkerBudget, workers: number, limitedBy: 'cores' | 'memory', load: PictureLoad): string {
+  const gb = (bytes: number) => `${(bytes / 1024 ** 3).toFixed(1)} GB`;
+  const mb = (bytes: number) => `${Math.round(bytes / MIB)} MB`;
+  const why = limitedBy === 'cores'
+    ? `${budget.cores} core${budget.cores === 1 ? '' : 's'}`
+    : `${gb(budget.availableBytes)} of memory available, about ${mb(budget.needBytes)} per worker for ${(load.pixels / 1e6).toFixed(1)}-megapixel pictures`;
+  return `running ${workers} worker process${workers === 1 ? '' : 'es'}, not ${budget.requested} (${why})`;
+}

@@ -75,6 +75,17 @@ const recordSchema = z
     contacts: z.record(z.string(), isoSeconds).refine((c) => Object.keys(c).every((k) => contactNames.includes(k)), 'contacts named P1, U1, U2, U3, U4, P4'),
     durations: z.object({ penumbral: finite.nonnegative(), partial: finite.nonnegative().optional(), total: finite.nonnegative().optional() }).strict(),
     subLunar: z.record(z.string(), lonLat).refine((s) => 'greatest' in s && Object.keys(s).every((k) => k === 'greatest' || contactNames.includes(k)), 'sub-lunar points at greatest and the contacts'),
+    // Figures as people read them, rounded once (absent from manifests written before they were recorded).
+    printed: z
+      .object({
+        greatestUtc: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, 'a UTC minute "YYYY-MM-DD HH:MM"'),
+        umbralMagnitude: z.string().regex(/^-?\d+\.\d{3}$/),
+        penumbralMagnitude: z.string().regex(/^-?\d+\.\d{3}$/),
+        gamma: z.string().regex(/^-?\d+\.\d{4}$/),
+        minutes: z.object({ penumbral: z.number().int().nonnegative(), partial: z.number().int().nonnegative().optional(), total: z.number().int().nonnegative().optional() }).strict(),
+      })
+      .strict()
+      .optional(),
   })
   .strict();
 

@@ -76,8 +76,8 @@ export function meeusLunarGamma(k: number): number {
  * that no eclipse is lost). The margin is three times that: 0.05.
  *
  * Meeus's own test, |sin F| > 0.36 → no eclipse, rests on the same series
- * with its own shadow (1.5573 + u); ours lets 1.1 lunations through per
- * eclipse where |sin F| ≤ 0.5 let 1.7.
+ * with its own shadow (1.5573 + u); ours lets 1.04 lunations through per
+ * eclipse (Danjon, 1000–3000) where |sin F| ≤ 0.5 let 1.70 through.
  */
 export const GAMMA_SERIES_MARGIN = 0.05;
 

@@ -72,6 +72,18 @@ test('determinism: a render with an empty font configuration (no system fonts at
   assert.equal(child.stdout, sha256((await render({ theme: 'light' })).bytes));
 });
 
+test('determinism: a machine with one core or with many draws the same bytes (libvips and libuv thread counts: VIPS_CONCURRENCY, UV_THREADPOOL_SIZE)', async () => {
+  const expected = sha256((await render({ theme: 'light' })).bytes);
+  for (const threads of ['1', '6']) {
+    const child = spawnSync(process.execPath, ['--import', 'tsx', new URL('./renderHash.ts', import.meta.url).pathname], {
+      encoding: 'utf8',
+      env: { ...process.env, VIPS_CONCURRENCY: threads, UV_THREADPOOL_SIZE: threads },
+    });
+    assert.equal(child.status, 0, child.stderr);
+    assert.equal(child.stdout, expected, `${threads} thread(s)`);
+  }
+});
+
 test('no system font is ever used: an SVG whose only content is text in a generic family draws as the bare page (resvg-js option font.loadSystemFonts = false, its README)', async () => {
   const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="200" height="80"><rect width="200" height="80" fill="#faf8f3"/>'
     + '<text x="10" y="50" font-family="sans-serif, serif, monospace" font-size="40" fill="#000000">Night Notes</text></svg>';

@@ -37,31 +37,41 @@ async function time(fn: () => unknown): Promise<number> {
   return performance.now() - start;
 }
 
-/** Every round's time of each job, by name. */
-const roundTimes = new Map<Record<string, number>, Record<string, number[]>>();
+/** Every round's time of each job, by name: wall clock, and CPU time of this process (all its threads). */
+const roundTimes = new Map<Record<string, number>, { wall: Record<string, number[]>; cpu: Record<string, number[]> }>();
 
 /** Run each job once to warm up, then alternate them `rounds` times so that drift hits all alike. */
 async function alternate(jobs: Record<string, () => unknown>, rounds = ROUNDS): Promise<Record<string, number>> {
   for (const job of Object.values(jobs)) await job();
   const times: Record<string, number[]> = Object.fromEntries(Object.keys(jobs).map((k) => [k, []]));
+  const cpu: Record<string, number[]> = Object.fromEntries(Object.keys(jobs).map((k) => [k, []]));
   for (let round = 0; round < rounds; round++) {
-    for (const [name, job] of Object.entries(jobs)) times[name]!.push(await time(job));
+    for (const [name, job] of Object.entries(jobs)) {
+      const before = process.cpuUsage();
+      times[name]!.push(await time(job));
+      const used = process.cpuUsage(before);
+      cpu[name]!.push((used.user + used.system) / 1000);
+    }
   }
   const medians = Object.fromEntries(Object.entries(times).map(([k, v]) => [k, median(v)]));
-  roundTimes.set(medians, times);
+  roundTimes.set(medians, { wall: times, cpu });
   return medians;
 }
 
-/** A ratio of two jobs' medians, with the spread (10th–90th percentile) of the ratios round by round. */
+/**
+ * A ratio of two jobs' median wall times, with the spread (10th–90th
+ * percentile) of the ratios round by round, and the ratio of their median CPU
+ * times, which other work on a shared machine disturbs far less.
+ */
 function ratio(medians: Record<string, number>, job: string, baseline: string): string {
-  const times = roundTimes.get(medians)!;
-  const perRound = times[job]!.map((t, i) => t / times[baseline]![i]!).sort((a, b) => a - b);
+  const { wall, cpu } = roundTimes.get(medians)!;
+  const perRound = wall[job]!.map((t, i) => t / wall[baseline]![i]!).sort((a, b) => a - b);
   const at = (p: number) => perRound[Math.round((perRound.length - 1) * p)]!.toFixed(2);
-  return `${(medians[job]! / medians[baseline]!).toFixed(2)} (rounds ${at(0.1)}–${at(0.9)})`;
+  return `${(medians[job]! / medians[baseline]!).toFixed(2)} (rounds ${at(0.1)}–${at(0.9)}; CPU ${(median(cpu[job]!) / median(cpu[baseline]!)).toFixed(2)})`;
 }
 
 const line = (label: string, value: string) => console.log(`${label.padEnd(84)} ${value}`);
-console.log(`umbracast bench (median of ${ROUNDS} rounds unless said, ratios with the 10th–90th percentile of their rounds; Node ${process.version})`);
+console.log(`umbracast bench (median of ${ROUNDS} rounds unless said; ratios of wall times, their rounds' 10th–90th percentile, and of CPU times; Node ${process.version})`);
 
 // Catalogue against a bare astronomy-engine search over the same years.
 const from = new Date('1900-01-01T00:00:00Z');

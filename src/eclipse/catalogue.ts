@@ -72,7 +72,7 @@ export function findLunarEclipses(options: CatalogueOptions): LunarEclipse[] {
   const lastK = lunationIndexNear(toUT + 1) + 1;
   const eclipses: LunarEclipse[] = [];
   for (let k = firstK; k <= lastK; k++) {
-    if (!mayHoldLunarEclipse(k)) continue;
+    if (!mayHoldLunarEclipse(k, convention)) continue;
     const eclipse = eclipseAtLunation(k, convention, deltaTModel);
     if (!eclipse) continue;
     if (eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);

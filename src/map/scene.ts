@@ -15,6 +15,7 @@ import { fieldLines } from '../visibility/fieldLines.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
 import { stage, type Stage, type Visibility, type ZoneName } from '../visibility/visibility.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
+import { thinnedProjection } from './thin.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
@@ -71,6 +72,13 @@ const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
   penumbral: 'Penumbral lunar eclipse',
 };
 
+/**
+ * Land and borders keep no point within this distance (output pixels) of the
+ * last one kept. Measured on 2400-px world maps: 0.5 px takes a third of
+ * the basemap's points and bytes and changes 0.001–0.007 % of pixels
+ * (pixelmatch, threshold 0.1), at 1 px 0.015–0.04 %.
+ */
+export const BASEMAP_THINNING_PX = 0.5;
 
 
 export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
@@ -279,9 +287,11 @@ export function composeScene(input: SceneInput): Scene {
   base.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
   const zones = zonePolygons(start, end);
   for (const zone of ['rises-during', 'sets-during', 'sees-all'] as const) base.push(`<path d="${path(zones[zone]) ?? ''}" fill="${theme.zones[zone]}"/>`);
-  base.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
+  // World data is denser than the picture: points within half a pixel of the last one kept add bytes and drawing time, not detail.
+  const basemapPath = geoPath(thinnedProjection(projection, BASEMAP_THINNING_PX)).digits(1);
+  base.push(`<path d="${basemapPath(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
   if (style.borders === 'countries') {
-    base.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
+    base.push(`<path d="${basemapPath(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
   }
   base.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="0.5"/>`);
 

@@ -70,7 +70,7 @@ export async function renderMapFiles(
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
   const rasters = await rasteriseSet(
-    { svg: scene.svg, widthPx: request.size.widthPx },
+    scene.svg,
     formats.filter((f): f is RasterFormat => (RASTER_FORMATS as readonly string[]).includes(f)),
     { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` },
     thumbnailWidthPx,

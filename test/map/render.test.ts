@@ -72,6 +72,48 @@ test('determinism: a render with an empty font configuration (no system fonts at
   assert.equal(child.stdout, sha256((await render({ theme: 'light' })).bytes));
 });
 
+test('determinism: a machine with one core or with many draws the same bytes (libvips and libuv thread counts: VIPS_CONCURRENCY, UV_THREADPOOL_SIZE)', async () => {
+  const expected = sha256((await render({ theme: 'light' })).bytes);
+  for (const threads of ['1', '6']) {
+    const child = spawnSync(process.execPath, ['--import', 'tsx', new URL('./renderHash.ts', import.meta.url).pathname], {
+      encoding: 'utf8',
+      env: { ...process.env, VIPS_CONCURRENCY: threads, UV_THREADPOOL_SIZE: threads },
+    });
+    assert.equal(child.status, 0, child.stderr);
+    assert.equal(child.stdout, expected, `${threads} thread(s)`);
+  }
+});
+
+test('no system font is ever used: an SVG whose only content is text in a generic family draws as the bare page (resvg-js option font.loadSystemFonts = false, its README)', async () => {
+  const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="200" height="80"><rect width="200" height="80" fill="#faf8f3"/>'
+    + '<text x="10" y="50" font-family="sans-serif, serif, monospace" font-size="40" fill="#000000">Night Notes</text></svg>';
+  const { data, info } = await sharp(await rasterise(svg, { format: 'png', dpi: 72 })).raw().toBuffer({ resolveWithObject: true });
+  const page = [0xfa, 0xf8, 0xf3];
+  let inked = 0;
+  for (let i = 0; i < data.length; i += info.channels) if (page.some((v, c) => data[i + c] !== v)) inked++;
+  assert.equal(inked, 0, `${inked} pixels drawn by a font the machine happened to have`);
+});
+
+test('PNG is written as RGB: three channels, no alpha, and the same pixels as the drawing (resvg-js own PNG encoder as the reference, RGBA)', async () => {
+  const { Resvg } = await import('@resvg/resvg-js');
+  const svg = Buffer.from((await render({ format: 'svg', width: 960, height: 540 })).bytes).toString('utf8');
+  const ours = await rasterise(svg, { format: 'png', dpi: 72 });
+  const meta = await sharp(ours).metadata();
+  assert.deepEqual([meta.channels, meta.hasAlpha], [3, false]);
+  const reference = await sharp(new Resvg(svg, { font: { loadSystemFonts: false } }).render().asPng()).raw().toBuffer({ resolveWithObject: true });
+  assert.equal(reference.info.channels, 4);
+  const rgb = await sharp(ours).raw().toBuffer();
+  assert.equal(rgb.length, 960 * 540 * 3);
+  let opaque = 0;
+  let same = 0;
+  for (let p = 0; p < 960 * 540; p++) {
+    if (reference.data[4 * p + 3] === 255) opaque++;
+    if ([0, 1, 2].every((c) => reference.data[4 * p + c] === rgb[3 * p + c])) same++;
+  }
+  assert.equal(opaque, 960 * 540, 'every pixel of the map is opaque');
+  assert.equal(same, 960 * 540, 'every pixel is the same');
+});
+
 test('PNG dimensions and density are as asked', async () => {
   const file = await render({ width: 1000, height: 640, dpi: 300 });
   const meta = await sharp(file.bytes).metadata();
@@ -120,13 +162,13 @@ test('one drawing for several files: each raster file and the thumbnail match dr
   const pixels = async (image: Uint8Array) => (await sharp(image).ensureAlpha().raw().toBuffer()).toString('base64');
 
   // One file: drawn straight into its encoder, byte for byte as alone; the thumbnail is shrunk from it.
-  const single = await rasteriseSet({ svg, widthPx: 960 }, ['png'], options, 240);
+  const single = await rasteriseSet(svg, ['png'], options, 240);
   assert.equal(sha256(single.files.get('png')!), sha256(alone));
   const thumb = await sharp(single.thumbnail!).metadata();
   assert.deepEqual([thumb.format, thumb.width, thumb.height], ['png', 240, 135]);
 
   // Several files: every one decodes at full size; the PNG has the same pixels as the lone drawing.
-  const several = await rasteriseSet({ svg, widthPx: 960 }, ['png', 'webp', 'jpg'], options, 240);
+  const several = await rasteriseSet(svg, ['png', 'webp', 'jpg'], options, 240);
   assert.equal(await pixels(several.files.get('png')!), await pixels(alone));
   for (const [format, name] of [['webp', 'webp'], ['jpg', 'jpeg']] as const) {
     const meta = await sharp(several.files.get(format)!).metadata();
@@ -135,7 +177,7 @@ test('one drawing for several files: each raster file and the thumbnail match dr
   assert.equal(await pixels(several.thumbnail!), await pixels(single.thumbnail!), 'the thumbnail is the same whichever way it was made');
 
   // No raster file at all (an SVG-only style): the thumbnail is drawn small.
-  const none = await rasteriseSet({ svg, widthPx: 960 }, [], options, 240);
+  const none = await rasteriseSet(svg, [], options, 240);
   assert.equal(none.files.size, 0);
   assert.equal((await sharp(none.thumbnail!).metadata()).width, 240);
 });

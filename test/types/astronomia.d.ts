@@ -4,6 +4,8 @@ declare module 'astronomia/eclipse' {
     type: number;
     jdeMax: number;
     magnitude: number;
+    /** γ, Earth radii (Meeus ch. 54); absent when there is no eclipse. */
+    distance?: number;
   }
   const eclipse: {
     TYPE: { None: number; Penumbral: number; Umbral: number; Total: number };

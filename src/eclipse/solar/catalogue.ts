@@ -11,7 +11,7 @@ import { ephemerisTime } from '../../ephemeris/bodies.ts';
 import { standardDeltaTModel, type DeltaTModel } from '../../ephemeris/deltaT.ts';
 import { decimalYearFromDays, utDaysFromDate } from '../../ephemeris/time.ts';
 import { checkRange, SUPPORTED_RANGE } from '../catalogue.ts';
-import { argumentOfLatitudeAtFullMoon, lunationIndexNear, meanFullMoonTTDays } from '../lunations.ts';
+import { lunationIndexNear, meanArgumentOfLatitude, meanFullMoonTTDays } from '../lunations.ts';
 import { fitAxisOnly, fitBesselian, sampleAxis, type AxisSamples } from './besselian.ts';
 import { describeSolarEclipse, greatestTT, penumbraAtWindowEdge, penumbraTouchesEarth } from './global.ts';
 import type { SolarEclipse } from './types.ts';
@@ -38,12 +38,12 @@ export const meanNewMoonTTDays = (k: number): number => meanFullMoonTTDays(k - 0
  * Meeus ch. 54 rejects a new moon when |sin F| > 0.36; the solar eclipses of
  * 1000–3000 found here reach 0.347 at most (measured for this project). We
  * keep a margin of about 3° beyond Meeus (0.40) and let the geometry decide;
- * narrower than the lunar side's 0.5, it spares a quarter of the candidates.
+ * it spares a quarter of the candidates that |sin F| ≤ 0.5 would keep.
  */
 export const SOLAR_PRUNE_SIN_F = 0.4;
 
 export function mayHoldSolarEclipse(k: number): boolean {
-  return Math.abs(Math.sin(argumentOfLatitudeAtFullMoon(k - 0.5))) <= SOLAR_PRUNE_SIN_F;
+  return Math.abs(Math.sin(meanArgumentOfLatitude(k))) <= SOLAR_PRUNE_SIN_F;
 }
 
 /** Every solar eclipse whose greatest (UT) falls in [from, to), in time order. */

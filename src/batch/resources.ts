@@ -4,11 +4,12 @@
  * the memory available holds at the per-worker need of the style's largest
  * picture.
  *
- * The need was measured (peak RSS of one worker process, with the batch's
- * worker flags, rendering one eclipse; see README "Limits"): about 160–230 MB
- * for a small map, 606 MB for a 12000×5333 map in one raster format and
- * 861–863 MB in two to four (which share one drawing held as raw pixels).
- * The estimate below lies at or above every measurement.
+ * The need was measured (peak RSS of a one-worker batch, rendering one
+ * eclipse, resvg drawing; see README "Limits"): about 230 MiB for a
+ * 12000×5333 map as SVG only, 729 MiB in one raster format and about
+ * 1060 MiB in two to four (which share one drawing held as raw pixels; resvg
+ * holds its canvas and the finished picture at once). The estimate below lies
+ * at or above every measurement.
  */
 import { availableParallelism, freemem, totalmem } from 'node:os';
 
@@ -27,11 +28,12 @@ export interface PictureLoad {
 
 /**
  * Bytes a worker needs at its peak: its base, 4 bytes a pixel for the scene
- * (its vector detail grows with the size), 4 more for the drawn surface of
- * a raster format, and 4 more when several raster formats share one drawing.
+ * (its vector detail grows with the size), 5 more for drawing a raster format
+ * (resvg's canvas and the picture it hands over), and 6 more when several
+ * raster formats share one drawing held as raw pixels.
  */
 export function workerNeedBytes(load: PictureLoad): number {
-  const perPixel = 4 + (load.rasterFormats >= 1 ? 4 : 0) + (load.rasterFormats >= 2 ? 4 : 0);
+  const perPixel = 4 + (load.rasterFormats >= 1 ? 5 : 0) + (load.rasterFormats >= 2 ? 6 : 0);
   return WORKER_BASE_BYTES + load.pixels * perPixel;
 }
 

@@ -114,7 +114,7 @@ export interface PixelSize {
   readonly heightPx: number;
 }
 
-/** The largest image we render: 12 000 px a side and 64 megapixels (about 600 MB while drawing: see src/raster/raster.ts). */
+/** The largest image we render: 12 000 px a side and 64 megapixels (about 730 MiB in a batch worker drawing one PNG: README "Limits"). */
 export const MAX_SIDE_PX = 12_000;
 export const MAX_PIXELS = 64_000_000;
 export const MIN_SIDE_PX = 320;

@@ -274,11 +274,12 @@ export function composeScene(input: SceneInput): Scene {
   base.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
   const zones = zonePolygons(start, end);
   for (const zone of ['rises-during', 'sets-during', 'sees-all'] as const) base.push(`<path d="${path(zones[zone]) ?? ''}" fill="${theme.zones[zone]}"/>`);
-  base.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.45 * unit)}" stroke-opacity="0.7"/>`);
+  // The graticule under the land, the coastline above both.
+  base.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="${theme.graticuleOpacity}"/>`);
+  base.push(`<path d="${path(basemap.land as GeoPermissibleObjects) ?? ''}" fill="${theme.land}" fill-opacity="${theme.landOpacity}" stroke="${theme.coastline}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="${theme.coastlineOpacity}"/>`);
   if (style.borders === 'countries') {
     base.push(`<path d="${path(basemap.borders) ?? ''}" fill="none" stroke="${theme.border}" stroke-width="${n2(0.5 * unit)}" stroke-opacity="0.75"/>`);
   }
-  base.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="0.5"/>`);
 
   // The continuous field: lines of equal minutes with the Moon up.
   const lines = fieldLines(visibility);
@@ -379,7 +380,12 @@ function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme:
     case 'marker':
       return `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}"/>`
         + `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`;
-    default:
-      return `<rect x="${n2(x)}" y="${n2(y + size * 0.1)}" width="${n2(size)}" height="${n2(size * 0.8)}" rx="${n2(2 * unit)}" fill="${theme.zones[key]}" stroke="${theme.textMuted}" stroke-width="${n2(0.5 * unit)}"/>`;
+    default: {
+      // The zone at sea (upper left) and on land (lower right), as the map shows it.
+      const [left, top, w, h] = [x, y + size * 0.1, size, size * 0.8];
+      return `<rect x="${n2(left)}" y="${n2(top)}" width="${n2(w)}" height="${n2(h)}" fill="${theme.zones[key]}"/>`
+        + `<path d="M${n2(left + w)},${n2(top)}V${n2(top + h)}H${n2(left)}Z" fill="${theme.land}" fill-opacity="${theme.landOpacity}"/>`
+        + `<rect x="${n2(left)}" y="${n2(top)}" width="${n2(w)}" height="${n2(h)}" fill="none" stroke="${theme.textMuted}" stroke-width="${n2(0.5 * unit)}"/>`;
+    }
   }
 }

@@ -14,12 +14,20 @@ export interface Theme {
   /** Page behind everything. */
   readonly paper: string;
   readonly zones: Readonly<Record<ZoneName, string>>;
-  /** Land is drawn over the zone fills in this colour at `landOpacity`. */
+  /**
+   * Land is drawn over the zone fills in this colour at `landOpacity`: a
+   * tint that moves every zone the same way in lightness (darker in the
+   * light themes, lighter in the dark one), so that land and sea stay apart
+   * inside every zone and the zones stay apart on land and at sea.
+   */
   readonly land: string;
   readonly landOpacity: number;
   readonly border: string;
+  /** Coastlines are drawn above the graticule, and stand out more than it in every zone (test/map/theme.test.ts). */
   readonly coastline: string;
+  readonly coastlineOpacity: number;
   readonly graticule: string;
+  readonly graticuleOpacity: number;
   /** Moon-up edges at the start and end of the zone-defining phase. */
   readonly edgeStrong: string;
   /** Moon-up edges at the other stages. */
@@ -43,12 +51,14 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
   light: {
     name: 'light',
     paper: '#faf8f3',
-    zones: { 'sees-all': '#27366b', 'sets-during': '#6d78b0', 'rises-during': '#a9c4d6', 'sees-none': '#eef0f2' },
-    land: '#ffffff',
-    landOpacity: 0.3,
+    zones: { 'sees-all': '#2f3f7a', 'sets-during': '#6d78b0', 'rises-during': '#a9c4d6', 'sees-none': '#eef0f2' },
+    land: '#000000',
+    landOpacity: 0.25,
     border: '#ffffff',
-    coastline: '#5d6470',
+    coastline: '#7d8696',
+    coastlineOpacity: 0.85,
     graticule: '#8a93a3',
+    graticuleOpacity: 0.3,
     edgeStrong: '#10152b',
     edgeLight: '#3a4259',
     field: '#b8581c',
@@ -64,12 +74,14 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
   dark: {
     name: 'dark',
     paper: '#0d111b',
-    zones: { 'sees-all': '#e9d8a6', 'sets-during': '#9a86c9', 'rises-during': '#43677e', 'sees-none': '#1b2231' },
+    zones: { 'sees-all': '#cdb783', 'sets-during': '#9080bd', 'rises-during': '#43677e', 'sees-none': '#1b2231' },
     land: '#ffffff',
-    landOpacity: 0.12,
+    landOpacity: 0.24,
     border: '#0d111b',
-    coastline: '#9aa3b5',
+    coastline: '#e4e8f0',
+    coastlineOpacity: 0.8,
     graticule: '#59627a',
+    graticuleOpacity: 0.2,
     edgeStrong: '#f5f1e6',
     edgeLight: '#c9cedb',
     field: '#ff9a5c',
@@ -86,11 +98,13 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     name: 'print',
     paper: '#ffffff',
     zones: { 'sees-all': '#4a4a4a', 'sets-during': '#8c8c8c', 'rises-during': '#bdbdbd', 'sees-none': '#f0f0f0' },
-    land: '#ffffff',
-    landOpacity: 0.28,
+    land: '#000000',
+    landOpacity: 0.22,
     border: '#ffffff',
-    coastline: '#222222',
+    coastline: '#000000',
+    coastlineOpacity: 0.8,
     graticule: '#777777',
+    graticuleOpacity: 0.3,
     edgeStrong: '#000000',
     edgeLight: '#222222',
     field: '#000000',

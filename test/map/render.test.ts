@@ -166,3 +166,37 @@ test('marked towns a few pixels apart each get their own label: no plate overlap
     }
   }
 });
+
+test('regional views keep land and sea apart in every theme: the pixel at sea is its zone\'s legend colour, on land the land-tinted one, and the two differ (boxes wholly inside one zone too; zones from the Moon-up caps, Meeus ch. 15; coasts from Natural Earth)', async () => {
+  const { visibilityEvaluator } = await import('../../src/visibility/visibility.ts');
+  const parse = (hex: string) => [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16));
+  const distance = (a: number[], b: number[]) => Math.hypot(...a.map((v, i) => v - b[i]!));
+  // Places well inside land and well out at sea, so that no coastline at any detail comes near them.
+  const cases: { date: string; bbox: [number, number, number, number]; land: [number, number]; sea: [number, number]; oneZone: boolean }[] = [
+    { date: '2027-02-20', bbox: [-20, 30, 45, 72], land: [25, 50], sea: [-15, 45], oneZone: false }, // the README's example
+    { date: '2026-03-03', bbox: [160, -50, 180, -32], land: [170.2, -44], sea: [165, -38], oneZone: true }, // New Zealand and the Tasman Sea
+    { date: '2026-03-03', bbox: [-75, 0, -60, 15], land: [-66, 7], sea: [-70, 14], oneZone: true }, // the Orinoco plains and the Caribbean, where the Moon sets
+    { date: '2026-03-03', bbox: [5, 30, 35, 50], land: [22, 46], sea: [18, 34], oneZone: true }, // a box with the Moon below the horizon throughout
+  ];
+  for (const c of cases) {
+    const eclipse = eclipseOn(c.date);
+    const zoneAt = visibilityEvaluator(visibilityOf(eclipse)).zoneAt;
+    const zone = zoneAt(c.land);
+    assert.equal(zoneAt(c.sea), zone, `${c.bbox}: both places in one zone`);
+    if (c.oneZone) {
+      const [w, s, e, n] = c.bbox;
+      for (let lon = w; lon <= e; lon += (e - w) / 8) for (let lat = s; lat <= n; lat += (n - s) / 8) assert.equal(zoneAt([lon, lat]), zone, `${c.bbox} lies wholly in ${zone}`);
+    }
+    for (const themeName of ['light', 'dark', 'print'] as const) {
+      const theme = THEMES[themeName];
+      const file = await render({ date: c.date, theme: themeName, borders: 'land', view: { projection: 'region', bbox: c.bbox }, width: 1200, height: 675 });
+      const seaPixel = await pixelAt(file.bytes, file.scene!.project(c.sea)!);
+      const landPixel = await pixelAt(file.bytes, file.scene!.project(c.land)!);
+      const seaColour = parse(theme.zones[zone]);
+      const landColour = seaColour.map((v, i) => v * (1 - theme.landOpacity) + parse(theme.land)[i]! * theme.landOpacity);
+      assert.ok(distance(seaPixel, seaColour) <= 4, `${themeName} ${c.bbox}: sea ${seaPixel} is not ${zone}'s ${theme.zones[zone]}`);
+      assert.ok(distance(landPixel, landColour) <= 4, `${themeName} ${c.bbox}: land ${landPixel} is not ${zone} on land ${landColour.map(Math.round)}`);
+      assert.ok(distance(landPixel, seaPixel) >= 20, `${themeName} ${c.bbox}: land ${landPixel} and sea ${seaPixel} look alike`);
+    }
+  }
+});

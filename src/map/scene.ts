@@ -57,6 +57,10 @@ export interface Scene {
   readonly smallPrint: string;
   /** Where the map sits on the page, and how lon/lat reach it: for tests and marks. */
   readonly project: (place: LonLat) => [number, number] | null;
+  /** The page point back to lon/lat. */
+  readonly unproject: (point: [number, number]) => LonLat | null;
+  /** The map's frame on the page (pixels). */
+  readonly frame: Frame;
   /** The world-atlas detail drawn. */
   readonly basemapDetail: BasemapDetail;
   /** The plates of the labels on the map (page pixels): on the zone edges and field lines, and of the marked places. */
@@ -249,11 +253,16 @@ export function composeScene(input: SceneInput): Scene {
 
   // Projection and data. A map shorter than its frame pulls header and footer in around it.
   const greatest = stage(visibility, 'greatest');
+  // A box is shown whole and no more: the frame takes the box's shape, centred across the page (with paper beside it).
   let fitted = fitView(style.view, available, greatest.cap.centre);
-  const [[, top], [, bottom]] = geoPath(fitted.projection).bounds(fitted.outline);
-  const slack = fitted.world ? Math.max(0, available.height - (bottom - top)) / 2 : 0;
-  const frame: Frame = { ...available, y: available.y + slack, height: available.height - 2 * slack };
-  if (slack > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
+  const boxView = style.view.projection === 'region' && 'bbox' in style.view;
+  const clip = fitted.projection.clipExtent();
+  const [[left, top], [right, bottom]] = geoPath(fitted.projection.clipExtent(null)).bounds(fitted.outline);
+  fitted.projection.clipExtent(clip);
+  const slack = fitted.world || boxView ? Math.max(0, available.height - (bottom - top)) / 2 : 0;
+  const slackX = boxView ? Math.max(0, available.width - (right - left)) / 2 : 0;
+  const frame: Frame = { x: available.x + slackX, y: available.y + slack, width: available.width - 2 * slackX, height: available.height - 2 * slack };
+  if (slack > 0 || slackX > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
   const shiftDown = slack;
   const footerTop = frame.y + frame.height + gap;
   const projection: GeoProjection = fitted.projection;
@@ -361,6 +370,8 @@ export function composeScene(input: SceneInput): Scene {
     subtitle: texts.subtitle,
     smallPrint: texts.smallPrint,
     project: (place) => projection([place[0], place[1]]),
+    unproject: (point) => (projection.invert?.(point) as LonLat | undefined) ?? null,
+    frame,
     basemapDetail: basemap.detail,
     labelPlates: { zones: zoneLabelPlates, marks: marked.plates },
   };

@@ -200,3 +200,36 @@ test('regional views keep land and sea apart in every theme: the pixel at sea is
     }
   }
 });
+
+test('--bbox shows the box and no more, --span is the width across: the shown extent measured on the page (Lambert azimuthal equal-area inverse, Snyder, Map Projections — A Working Manual, ch. 24)', async () => {
+  const { angularDistanceDeg } = await import('../../src/visibility/circles.ts');
+  for (const [width, height] of [[1200, 675], [1080, 1080], [2126, 1318]] as const) {
+    for (const bbox of [[-20, 30, 45, 72], [160, -50, 180, -32], [170, -20, -150, 10]] as [number, number, number, number][]) {
+      const { scene } = await render({ format: 'svg', width, height, view: { projection: 'region', bbox } });
+      const { frame } = scene!;
+      const [w, s, e, n] = bbox;
+      const spanLon = e > w ? e - w : e + 360 - w;
+      const edge: [number, number][] = [];
+      for (let i = 0; i <= 40; i++) {
+        const lon = ((w + (spanLon * i) / 40 + 540) % 360) - 180;
+        edge.push([lon, s], [lon, n]);
+      }
+      for (let i = 0; i <= 40; i++) edge.push([w, s + ((n - s) * i) / 40], [e, s + ((n - s) * i) / 40]);
+      const points = edge.map((p) => scene!.project(p)!);
+      const xs = points.map((p) => p[0]);
+      const ys = points.map((p) => p[1]);
+      // Every edge of the box on the page, and the box touching all four sides of the frame (within a pixel).
+      assert.ok(Math.abs(Math.min(...xs) - frame.x) <= 1 && Math.abs(Math.max(...xs) - (frame.x + frame.width)) <= 1, `${bbox} at ${width}x${height}: box ${Math.min(...xs)}–${Math.max(...xs)} vs frame ${frame.x}–${frame.x + frame.width}`);
+      assert.ok(Math.abs(Math.min(...ys) - frame.y) <= 1 && Math.abs(Math.max(...ys) - (frame.y + frame.height)) <= 1, `${bbox} at ${width}x${height}: box ${Math.min(...ys)}–${Math.max(...ys)} vs frame ${frame.y}–${frame.y + frame.height}`);
+    }
+    for (const [centre, spanDeg] of [[[151.2, -33.9], 70], [[0, 80], 60], [[-105, 40], 20]] as [[number, number], number][]) {
+      const { scene } = await render({ format: 'svg', width, height, view: { projection: 'region', centre, spanDeg } });
+      const { frame } = scene!;
+      const midY = frame.y + frame.height / 2;
+      const leftEdge = scene!.unproject([frame.x, midY])!;
+      const rightEdge = scene!.unproject([frame.x + frame.width, midY])!;
+      assert.ok(Math.abs(angularDistanceDeg(leftEdge, rightEdge) - spanDeg) < 0.05, `span ${spanDeg} at ${width}x${height}: ${angularDistanceDeg(leftEdge, rightEdge)} across`);
+      assert.ok(Math.abs(angularDistanceDeg(centre, leftEdge) - spanDeg / 2) < 0.05);
+    }
+  }
+});

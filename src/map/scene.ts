@@ -12,7 +12,8 @@ import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines } from '../visibility/fieldLines.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
-import { stage, type Stage, type Visibility, type ZoneName } from '../visibility/visibility.ts';
+import { stage, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
+import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
@@ -33,6 +34,14 @@ export interface MapMark {
   readonly lonDeg: number;
   readonly latDeg: number;
   readonly label: string;
+}
+
+/** A label on a Moon-up edge: "Moon rises as totality begins · 11:05", tag "U2", at a place on that edge. */
+export interface CurveLabel {
+  readonly words: string;
+  readonly tag: string;
+  readonly at: LonLat;
+  readonly utDays: number;
 }
 
 export interface MapSize {
@@ -61,6 +70,8 @@ export interface Scene {
   readonly unproject: (point: [number, number]) => LonLat | null;
   /** The map's frame on the page (pixels). */
   readonly frame: Frame;
+  /** The labels on the Moon-up edges, with the place on the edge each names. */
+  readonly curveLabels: readonly CurveLabel[];
   /** The world-atlas detail drawn. */
   readonly basemapDetail: BasemapDetail;
   /** The plates of the labels on the map (page pixels): on the zone edges and field lines, and of the marked places. */
@@ -98,7 +109,6 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
   const smallPrint = [
     `${timesIn}, 24-hour clock, rounded to the minute.`,
     `Shadow: ${convention} convention; ΔT ${deltaTLabel}.`,
-    'P1/P4: the Moon enters/leaves the penumbra; U1/U4: the umbra; U2/U3: totality begins/ends.',
     'Moon up: upper limb on a sea-level horizon with standard refraction.',
     'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',
     `${BASEMAP_CREDIT}. Type: ${FONT_CREDIT}. Made with ${generator}.`,
@@ -186,9 +196,9 @@ function capEdge(s: Stage): LineString {
   return { type: 'LineString', coordinates: circleRing(s.cap.centre, s.cap.radiusDeg, 0.5) };
 }
 
-/** Where a projected line crosses a horizontal line y = targetY, inside a frame. */
-function crossingsAtY(points: ([number, number] | null)[], targetY: number, frame: Frame): [number, number][] {
-  const found: [number, number][] = [];
+/** Where a projected line crosses a horizontal line y = targetY, inside a frame; with the index of the point before. */
+function crossingsAtY(points: ([number, number] | null)[], targetY: number, frame: Frame): { point: [number, number]; index: number }[] {
+  const found: { point: [number, number]; index: number }[] = [];
   for (let k = 1; k < points.length; k++) {
     const a = points[k - 1];
     const b = points[k];
@@ -197,11 +207,42 @@ function crossingsAtY(points: ([number, number] | null)[], targetY: number, fram
     if ((a[1] - targetY) * (b[1] - targetY) > 0 || a[1] === b[1]) continue;
     const f = (targetY - a[1]) / (b[1] - a[1]);
     const x = a[0] + f * (b[0] - a[0]);
-    if (x > frame.x && x < frame.x + frame.width) found.push([x, targetY]);
+    if (x > frame.x && x < frame.x + frame.width) found.push({ point: [x, targetY], index: k - 1 });
   }
   return found;
 }
 
+
+/** What happens at a stage, in a reader's words: "Moon rises as totality begins". */
+function curveWords(stageName: StageName, kind: LunarEclipse['kind']): string {
+  switch (stageName) {
+    case 'P1': return kind === 'penumbral' ? 'as the eclipse begins' : 'as the faint outer shadow begins';
+    case 'U1': return 'as the partial eclipse begins';
+    case 'U2': return 'as totality begins';
+    case 'greatest': return 'at mid-eclipse';
+    case 'U3': return 'as totality ends';
+    case 'U4': return 'as the partial eclipse ends';
+    case 'P4': return kind === 'penumbral' ? 'as the eclipse ends' : 'as the faint outer shadow ends';
+  }
+}
+
+/**
+ * A curve's label: words and time in the label type, then the trade code as a
+ * small muted tag, on one plate centred on the crossing, kept inside the frame.
+ */
+function curveLabel(words: string, tag: string, x: number, y: number, style: TextStyle, tagStyle: TextStyle, theme: Theme, unit: number, frame: Frame): { element: string; plate: Box } {
+  const gap = tag ? 4 * unit : 0;
+  const width = measureText(words, style) + gap + (tag ? measureText(tag, tagStyle) : 0);
+  const pad = 2.2 * unit;
+  const half = width / 2 + pad;
+  const cx = Math.min(Math.max(x, frame.x + half), frame.x + frame.width - half);
+  const left = cx - width / 2;
+  const plate: Box = { left: left - pad, top: y - style.sizePx * 0.8 - pad * 0.6, right: left + width + pad, bottom: y + style.sizePx * 0.25 + pad * 0.6 };
+  const rect = `<rect x="${n2(plate.left)}" y="${n2(plate.top)}" width="${n2(plate.right - plate.left)}" height="${n2(plate.bottom - plate.top)}" rx="${n2(2.2 * unit)}" fill="${theme.halo}" fill-opacity="${theme.haloOpacity}"/>`;
+  const text = textElement(words, left, y, style, theme.text);
+  const code = tag ? textElement(tag, left + measureText(words, style) + gap, y, tagStyle, theme.textMuted) : '';
+  return { element: rect + text + code, plate };
+}
 
 const PHASE_WORDS: Record<Visibility['fieldSpan']['phase'], string> = {
   totality: 'totality',
@@ -230,16 +271,24 @@ export function composeScene(input: SceneInput): Scene {
 
   // Footer: legend rows, then small print.
   const zoneSpan = visibility.zoneSpan;
-  const phaseName = eclipse.kind === 'penumbral' ? 'the penumbral eclipse' : 'the eclipse';
+  // The zones are those of the umbral phase (of the whole eclipse when it is penumbral): the legend says which.
+  const phaseName = eclipse.kind === 'penumbral' ? 'the eclipse' : 'the umbral phase';
+  const stageCodes = visibility.stages.map((s) => s.name).filter((n) => n !== 'greatest');
+  const codeWords = [
+    stageCodes.includes('P1') ? 'P1/P4 the Moon meets/leaves the outer shadow (penumbra)' : '',
+    stageCodes.includes('U1') ? 'U1/U4 the umbra' : '',
+    stageCodes.includes('U2') ? 'U2/U3 totality begins/ends' : '',
+  ].filter(Boolean).join(', ');
   const legendItems: { key: string; label: string }[] = [
     { key: 'sees-all', label: `Moon up for all of ${phaseName}` },
-    { key: 'sets-during', label: 'Moon sets while it is on' },
-    { key: 'rises-during', label: 'Moon rises while it is on' },
-    { key: 'sees-none', label: 'Moon below the horizon' },
-    { key: 'edge-strong', label: `Moonrise/moonset line at ${zoneSpan.start} and ${zoneSpan.end}` },
+    { key: 'sets-during', label: `Moon sets during ${phaseName}` },
+    { key: 'rises-during', label: `Moon rises during ${phaseName}` },
+    { key: 'sees-none', label: 'Moon below the horizon throughout' },
+    { key: 'edge-strong', label: `Moonrise/moonset as ${phaseName} begins and ends` },
     { key: 'edge-light', label: 'at other stages' },
     { key: 'field', label: `minutes of ${PHASE_WORDS[visibility.fieldSpan.phase]} with the Moon up` },
     { key: 'marker', label: 'Moon overhead at greatest' },
+    { key: 'codes', label: `small tags on the lines: ${codeWords}` },
   ];
   const swatch = 15 * unit;
   const itemGap = 16 * unit;
@@ -320,14 +369,31 @@ export function composeScene(input: SceneInput): Scene {
     overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
   }
 
-  // Labels on the Moon-up edges, each stage at its own height so that none collide.
+  // Labels on the Moon-up edges, each stage at its own height so that none collide: in words, with
+  // the time, and the contact's code as a small tag after them (explained once, in the legend).
   const stages = visibility.stages;
+  const curveLabels: CurveLabel[] = [];
+  const curveStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.95, weight: 'semibold' };
+  const tagStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.72, weight: 'regular' };
   stages.forEach((s, index) => {
     const targetY = frame.y + frame.height * (0.16 + (0.5 * index) / Math.max(1, stages.length - 1));
-    const points = edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]));
-    const name = s.name === 'greatest' ? 'Greatest' : s.name;
-    for (const [x, y] of crossingsAtY(points, targetY, frame)) {
-      label(`${name} ${clock.time(s.cap.moment.utDays)}`, x, y + layout.labelStyle.sizePx * 0.35, layout.labelStyle);
+    const ring = edges.get(s.name)!.coordinates;
+    const points = ring.map((p) => projection([p[0]!, p[1]!]));
+    const at = s.cap.moment.utDays;
+    for (const crossing of crossingsAtY(points, targetY, frame)) {
+      // West of the sub-lunar point the Earth turns places into the Moon-up cap: the Moon rises there.
+      const [lon] = ring[crossing.index]!;
+      const rising = ((lon! - s.cap.centre[0] + 540) % 360) - 180 < 0;
+      const words = `Moon ${rising ? 'rises' : 'sets'} ${curveWords(s.name, eclipse.kind)} · ${timeOnDay(clock, at, eclipse.greatest.utDays)}`;
+      const tag = s.name === 'greatest' ? '' : s.name;
+      const a = ring[crossing.index]!;
+      const b = ring[Math.min(crossing.index + 1, ring.length - 1)]!;
+      curveLabels.push({ words, tag, at: [(a[0]! + b[0]!) / 2, (a[1]! + b[1]!) / 2], utDays: at });
+      // The lines that bound the zones, and totality's, in the label type's weight; the others lighter.
+      const strong = s.name === zoneSpan.start || s.name === zoneSpan.end || s.name === 'U2' || s.name === 'U3';
+      const placed = curveLabel(words, tag, crossing.point[0], crossing.point[1] + curveStyle.sizePx * 0.35, strong ? curveStyle : { ...curveStyle, weight: 'regular' }, tagStyle, theme, unit, frame);
+      taken.push(placed.plate);
+      labels.push(placed.element);
     }
   });
   const fieldLabelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'regular' };
@@ -337,7 +403,7 @@ export function composeScene(input: SceneInput): Scene {
   for (const l of lines) {
     const targetY = frame.y + frame.height * 0.84 - levels.indexOf(l.minutes) * rung;
     const points = l.line.map((p) => projection([p[0]!, p[1]!]));
-    for (const [x, y] of crossingsAtY(points, targetY, frame).slice(0, 1)) {
+    for (const { point: [x, y] } of crossingsAtY(points, targetY, frame).slice(0, 1)) {
       label(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
     }
   }
@@ -370,6 +436,7 @@ export function composeScene(input: SceneInput): Scene {
     subtitle: texts.subtitle,
     smallPrint: texts.smallPrint,
     project: (place) => projection([place[0], place[1]]),
+    curveLabels,
     unproject: (point) => (projection.invert?.(point) as LonLat | undefined) ?? null,
     frame,
     basemapDetail: basemap.detail,
@@ -377,7 +444,7 @@ export function composeScene(input: SceneInput): Scene {
   };
 }
 
-type LegendKey = ZoneName | 'edge-strong' | 'edge-light' | 'field' | 'marker';
+type LegendKey = ZoneName | 'edge-strong' | 'edge-light' | 'field' | 'marker' | 'codes';
 
 function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme: Theme, unit: number): string {
   const midY = n2(y + size / 2);
@@ -388,6 +455,8 @@ function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme:
       return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`;
     case 'field':
       return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`;
+    case 'codes':
+      return textElement(size >= 0 ? 'U1' : '', x + size / 2, y + size * 0.72, { sizePx: size * 0.62, weight: 'regular' }, theme.textMuted, 'middle');
     case 'marker':
       return `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}"/>`
         + `<circle cx="${n2(x + size / 2)}" cy="${midY}" r="${n2(size * 0.32)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`;

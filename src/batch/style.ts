@@ -14,6 +14,7 @@ import { isKnownTimeZone } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
+import { MARK_CLOCKS } from '../map/markClock.ts';
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
 import { DEFAULT_NAMING, NAMING_FIELDS } from './naming.ts';
 
@@ -47,6 +48,7 @@ const styleObject = z
     borders: enumOf(BORDER_STYLES).default('countries'),
     title: z.string().min(1).max(300).optional(),
     marks: z.array(z.string().min(1).max(200)).max(20).default([]),
+    markClock: enumOf(MARK_CLOCKS).default('map'),
     places: z.array(z.string().min(1).max(200)).max(20).default([]),
     formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),

@@ -8,6 +8,7 @@ import { civilClock } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../map/projection.ts';
 import { THEME_NAMES, THEMES } from '../map/theme.ts';
+import { MARK_CLOCKS } from '../map/markClock.ts';
 import type { MapStyle } from '../map/scene.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import type { HouseStyle } from '../batch/style.ts';
@@ -26,6 +27,7 @@ export interface MapOptions extends SizeOptions, EclipseChoice {
   output?: string;
   format?: string;
   mark: string[];
+  markClock?: string;
   style?: string;
 }
 
@@ -97,7 +99,8 @@ export function mapSettings(options: MapOptions): MapSettings {
   const title = checkTitle(options.title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
-  return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+  const markClock = parseChoice('--mark-clock', options.markClock ?? 'map', MARK_CLOCKS);
+  return { style: { theme, view, borders, clock, markClock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
 }
 
 /** A house style as map options, for whatever the command line leaves unset. */
@@ -115,6 +118,7 @@ export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
     borders: style.borders,
     ...(style.title !== undefined ? { title: style.title } : {}),
     mark: style.marks,
+    markClock: style.markClock,
     convention: style.convention,
     ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
   };

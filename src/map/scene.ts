@@ -17,6 +17,7 @@ import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
+import type { MarkClock } from './markClock.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
 import { flowRows, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box } from './draw.ts';
 
@@ -27,6 +28,8 @@ export interface MapStyle {
   readonly clock: CivilClock;
   /** Replaces the generated title. */
   readonly title?: string;
+  /** Marked towns' times on the map's clock (one clock per map, the default) or each on its own. */
+  readonly markClock?: MarkClock;
 }
 
 /** A place marked on the map with a short label ("Dakar · sets 07:23 GMT"). */
@@ -124,7 +127,7 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
  * still get a readable label each). Only when every spot clashes does it
  * take the one with the fewest clashes.
  */
-function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[]): { elements: string[]; plates: Box[] } {
+function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[], lineHits: (box: Box) => number): { elements: string[]; plates: Box[] } {
   const elements: string[] = [];
   const plates: Box[] = [];
   const gap = 7 * unit;
@@ -146,10 +149,13 @@ function markElements(marks: readonly MapMark[], projection: GeoProjection, fram
         // Below the dot the baseline drops by the letters' height; beside it, the text centres on the dot.
         const sy = dy === 0 ? y + lift : dy < 0 ? y - gap * reach : y + gap * reach + style.sizePx * 0.7;
         const plate = plateBox(mark.label, sx, sy, style, unit, anchor);
-        return { sx, sy, anchor, plate, reach, clashes: taken.filter((t) => overlaps(t, plate)).length + (inFrame(plate) ? 0 : 10) };
+        return { sx, sy, anchor, plate, reach, clashes: taken.filter((t) => overlaps(t, plate)).length + (inFrame(plate) ? 0 : 10), crossings: lineHits(plate) };
       }),
     );
-    const best = candidates.find((c) => c.clashes === 0) ?? candidates.filter((c) => c.reach === 1).reduce((a, b) => (b.clashes < a.clashes ? b : a));
+    // Clear of labels and of lines if any spot is; else clear of labels, crossing as little line as may be.
+    const best = candidates.find((c) => c.clashes === 0 && c.crossings === 0)
+      ?? candidates.filter((c) => c.clashes === 0).sort((a, b) => a.crossings + (a.reach - 1) * 6 - (b.crossings + (b.reach - 1) * 6))[0]
+      ?? candidates.filter((c) => c.reach === 1).reduce((a, b) => (b.clashes < a.clashes ? b : a));
     taken.push(best.plate);
     plates.push(best.plate);
     if (best.reach > 1) {
@@ -158,14 +164,56 @@ function markElements(marks: readonly MapMark[], projection: GeoProjection, fram
       const ty = Math.min(Math.max(y, best.plate.top), best.plate.bottom);
       const length = Math.hypot(tx - x, ty - y);
       const start = (4 * unit) / Math.max(length, 1e-9);
-      elements.push(`<line x1="${n2(x + (tx - x) * start)}" y1="${n2(y + (ty - y) * start)}" x2="${n2(tx)}" y2="${n2(ty)}" stroke="${theme.text}" stroke-width="${n2(0.9 * unit)}" stroke-opacity="0.7"/>`);
+      const leader = `x1="${n2(x + (tx - x) * start)}" y1="${n2(y + (ty - y) * start)}" x2="${n2(tx)}" y2="${n2(ty)}"`;
+      elements.push(`<line ${leader} stroke="${theme.halo}" stroke-width="${n2(2.6 * unit)}" stroke-opacity="0.8"/><line ${leader} stroke="${theme.text}" stroke-width="${n2(0.9 * unit)}"/>`);
     }
-    elements.push(`<circle cx="${n2(x)}" cy="${n2(y)}" r="${n2(3.2 * unit)}" fill="${theme.marker}" stroke="${theme.halo}" stroke-width="${n2(1.6 * unit)}"/>`);
+    elements.push(townSymbol(x, y, 5 * unit, theme, unit));
     elements.push(labelElement(mark.label, best.sx, best.sy, style, theme, unit, best.anchor));
   });
   return { elements, plates };
 }
 
+
+/** A marked town: a small square of ink with a paper rim, unlike the Moon-overhead ring. */
+function townSymbol(x: number, y: number, side: number, theme: Theme, unit: number): string {
+  return `<rect x="${n2(x - side / 2)}" y="${n2(y - side / 2)}" width="${n2(side)}" height="${n2(side)}" fill="${theme.text}" stroke="${theme.halo}" stroke-width="${n2(1.3 * unit)}"/>`;
+}
+
+/**
+ * Where the lines run on the page, as points every few pixels in a grid of
+ * cells: how many of them a label's plate would cover.
+ */
+function lineHitCounter(polylines: readonly (readonly ([number, number] | null)[])[], frame: Frame, cellPx: number): (box: Box) => number {
+  const cells = new Map<number, [number, number][]>();
+  const key = (cx: number, cy: number) => cx * 100_003 + cy;
+  const add = (x: number, y: number) => {
+    const k = key(Math.floor(x / cellPx), Math.floor(y / cellPx));
+    const list = cells.get(k);
+    if (list) list.push([x, y]);
+    else cells.set(k, [[x, y]]);
+  };
+  const step = cellPx / 3;
+  for (const line of polylines) {
+    for (let k = 1; k < line.length; k++) {
+      const a = line[k - 1];
+      const b = line[k];
+      if (!a || !b) continue;
+      const length = Math.hypot(b[0] - a[0], b[1] - a[1]);
+      if (length > frame.width / 8) continue; // a jump across the map's edge
+      const n = Math.max(1, Math.ceil(length / step));
+      for (let i = 0; i < n; i++) add(a[0] + ((b[0] - a[0]) * i) / n, a[1] + ((b[1] - a[1]) * i) / n);
+    }
+  }
+  return (box) => {
+    let hits = 0;
+    for (let cx = Math.floor(box.left / cellPx); cx <= Math.floor(box.right / cellPx); cx++) {
+      for (let cy = Math.floor(box.top / cellPx); cy <= Math.floor(box.bottom / cellPx); cy++) {
+        for (const [x, y] of cells.get(key(cx, cy)) ?? []) if (x >= box.left && x <= box.right && y >= box.top && y <= box.bottom) hits++;
+      }
+    }
+    return hits;
+  };
+}
 
 /**
  * The zones a start cap S and an end cap E make, as disjoint spherical
@@ -288,6 +336,7 @@ export function composeScene(input: SceneInput): Scene {
     { key: 'edge-light', label: 'at other stages' },
     { key: 'field', label: `minutes of ${PHASE_WORDS[visibility.fieldSpan.phase]} with the Moon up` },
     { key: 'marker', label: 'Moon overhead at greatest' },
+    ...((input.marks ?? []).length > 0 ? [{ key: 'town', label: style.markClock === 'town' ? 'marked town: the key phase in its own time' : 'marked town: the key phase' }] : []),
     { key: 'codes', label: `small tags on the lines: ${codeWords}` },
   ];
   const swatch = 15 * unit;
@@ -409,7 +458,12 @@ export function composeScene(input: SceneInput): Scene {
   }
   overlay.push(...labels);
   const zoneLabelPlates = [...taken];
-  const marked = markElements(input.marks ?? [], projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken);
+  const marks = input.marks ?? [];
+  const lineHits = marks.length === 0 ? () => 0 : lineHitCounter([
+    ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]))),
+    ...lines.map((l) => l.line.map((p) => projection([p[0]!, p[1]!]))),
+  ], frame, 6 * unit);
+  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, lineHits);
   overlay.push(...marked.elements);
 
   // Header.
@@ -444,7 +498,7 @@ export function composeScene(input: SceneInput): Scene {
   };
 }
 
-type LegendKey = ZoneName | 'edge-strong' | 'edge-light' | 'field' | 'marker' | 'codes';
+type LegendKey = ZoneName | 'edge-strong' | 'edge-light' | 'field' | 'marker' | 'codes' | 'town';
 
 function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme: Theme, unit: number): string {
   const midY = n2(y + size / 2);
@@ -455,6 +509,8 @@ function legendSwatch(key: LegendKey, x: number, y: number, size: number, theme:
       return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.edgeLight}" stroke-width="${n2(0.8 * unit)}" stroke-dasharray="${n2(1.5 * unit)} ${n2(2.5 * unit)}" stroke-linecap="round"/>`;
     case 'field':
       return `<path d="M${n2(x)},${midY}h${n2(size)}" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`;
+    case 'town':
+      return townSymbol(x + size / 2, y + size / 2, 5 * unit, theme, unit);
     case 'codes':
       return textElement(size >= 0 ? 'U1' : '', x + size / 2, y + size * 0.72, { sizePx: size * 0.62, weight: 'regular' }, theme.textMuted, 'middle');
     case 'marker':

@@ -38,3 +38,64 @@ test('the codes are explained once, in the legend, not in the small print (commo
   assert.ok(!/U1\/U4/.test(scene!.smallPrint));
   assert.ok(scene!.curveLabels.some((l) => l.tag === 'U2' && l.words.includes('as totality begins')));
 });
+
+test('marked towns: their own symbol (ink square, not the Moon-overhead ring\'s colour), labels clear of every drawn line and label, one clock per map unless asked (times via Intl, the IANA database)', async () => {
+  const { findPlace } = await import('../../src/places/gazetteer.ts');
+  const { renderMapFile, markLabel } = await import('../../src/outputs/mapFile.ts');
+  const { civilClock } = await import('../../src/ephemeris/civilTime.ts');
+  const { THEMES } = await import('../../src/map/theme.ts');
+  const { eclipseOn } = await import('./support.ts');
+  const { visibilityOf } = await import('../../src/visibility/visibility.ts');
+  const { fieldLines } = await import('../../src/visibility/fieldLines.ts');
+  const { circleRing } = await import('../../src/visibility/circles.ts');
+  const sharp = (await import('sharp')).default;
+  const eclipse = eclipseOn('2026-03-03');
+  const denver = civilClock('America/Denver');
+  const places = ['Denver', 'Boulder', 'Cheyenne, US', 'Tokyo', 'Sydney', 'Honolulu'].map((name) => findPlace(name));
+  const marks = places.map((p) => ({ ...p, tz: p.name === 'Tokyo' ? 'Asia/Tokyo' : p.name === 'Sydney' ? 'Australia/Sydney' : p.name === 'Honolulu' ? 'Pacific/Honolulu' : 'America/Denver' }));
+
+  // One clock: Tokyo's greatest on the map's clock reads as Intl prints the instant in Denver; asked for, in Tokyo's own zone.
+  // utDays count from J2000.0 = 2000-01-01 12:00 UT (Meeus ch. 7); rounded to the minute as printed.
+  const greatest = new Date(Date.UTC(2000, 0, 1, 12) + Math.round(eclipse.greatest.utDays * 1440) * 60_000);
+  const intlTime = (zone: string) => new Intl.DateTimeFormat('en-GB', { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(greatest);
+  const tokyo = marks.find((m) => m.name === 'Tokyo')!;
+  assert.equal(markLabel(eclipse, tokyo, denver), `Tokyo · greatest ${intlTime('America/Denver')}`);
+  assert.match(markLabel(eclipse, tokyo), new RegExp(`^Tokyo · greatest ${intlTime('Asia/Tokyo')} `));
+
+  for (const [widthPx, heightPx] of [[1200, 675], [2400, 1350]] as const) {
+    const style = { theme: THEMES.light, view: { projection: 'equal-earth' as const }, borders: 'countries' as const, clock: denver };
+    const svgFile = await renderMapFile({ eclipse, style, size: { widthPx, heightPx }, dpi: 72, format: 'svg', generator: 'umbracast test', marks });
+    const scene = svgFile.scene!;
+    // Every drawn line (Moon-up edges, the field's lines) as page points.
+    const visibility = visibilityOf(eclipse);
+    const polylines = [
+      ...visibility.stages.map((s) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.5)),
+      ...fieldLines(visibility).map((l) => l.line),
+    ].map((line) => line.map((p) => scene.project([p[0]!, p[1]!])));
+    const linePoints: [number, number][] = [];
+    for (const line of polylines) {
+      for (let k = 1; k < line.length; k++) {
+        const a = line[k - 1];
+        const b = line[k];
+        if (!a || !b || Math.hypot(b[0] - a[0], b[1] - a[1]) > widthPx / 8) continue;
+        for (let i = 0; i < 10; i++) linePoints.push([a[0] + ((b[0] - a[0]) * i) / 10, a[1] + ((b[1] - a[1]) * i) / 10]);
+      }
+    }
+    const plates = scene.labelPlates.marks;
+    assert.equal(plates.length, marks.length);
+    for (const plate of plates) {
+      const hits = linePoints.filter(([x, y]) => x > plate.left && x < plate.right && y > plate.top && y < plate.bottom).length;
+      assert.equal(hits, 0, `${widthPx}px: a mark label lies on a line`);
+    }
+    // The symbol's pixels: the theme's ink, far from the Moon-overhead ring's colour.
+    const png = await renderMapFile({ eclipse, style, size: { widthPx, heightPx }, dpi: 72, format: 'png', generator: 'umbracast test', marks });
+    const { data, info } = await sharp(png.bytes).raw().toBuffer({ resolveWithObject: true });
+    const [x, y] = scene.project([tokyo.lonDeg, tokyo.latDeg])!.map(Math.round) as [number, number];
+    const at = (y * info.width + x) * info.channels;
+    const pixel = [data[at]!, data[at + 1]!, data[at + 2]!];
+    const hex = (h: string) => [1, 3, 5].map((i) => parseInt(h.slice(i, i + 2), 16));
+    const distance = (a: number[], b: number[]) => Math.hypot(...a.map((v, i) => v - b[i]!));
+    assert.ok(distance(pixel, hex(THEMES.light.text)) < 30, `symbol ${pixel}`);
+    assert.ok(distance(pixel, hex(THEMES.light.marker)) > 150, 'unlike the Moon-overhead ring');
+  }
+});

@@ -23,3 +23,14 @@ export function dayMark(clock: CivilClock, utDays: number, referenceUtDays: numb
 export function timeOnDay(clock: CivilClock, utDays: number, referenceUtDays: number): string {
   return `${clock.time(utDays)}${dayMark(clock, utDays, referenceUtDays)}`;
 }
+
+/**
+ * A range of times, each marked when it falls on another day than the
+ * reference's: "21:12–01:13 +1 day"; "23:40 −1 day – 01:20" (spaced when the
+ * first time carries a mark, so the dash is not read as part of it).
+ */
+export function timeRange(clock: CivilClock, fromUtDays: number, toUtDays: number, referenceUtDays = fromUtDays): string {
+  const first = timeOnDay(clock, fromUtDays, referenceUtDays);
+  const last = timeOnDay(clock, toUtDays, referenceUtDays);
+  return first.includes(' ') ? `${first} – ${last}` : `${first}–${last}`;
+}

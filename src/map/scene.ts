@@ -13,7 +13,7 @@ import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines } from '../visibility/fieldLines.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
 import { stage, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
-import { timeOnDay } from '../ephemeris/dayMark.ts';
+import { timeOnDay, timeRange } from '../ephemeris/dayMark.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
@@ -95,7 +95,7 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
   const at = eclipse.greatest.utDays;
   const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} · ${clock.date(at)}`;
   const zone = clock.abbreviation(at);
-  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)}`;
+  const range = (a: number, b: number) => timeRange(clock, a, b, at);
   const c = eclipse.contacts;
   const parts = [`Greatest ${clock.time(at)} ${zone}`];
   if (eclipse.kind === 'penumbral') {
@@ -110,7 +110,7 @@ export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel
   const timesIn = `Times in ${clock.zoneDescription(at)}`;
   const convention = eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet';
   const smallPrint = [
-    `${timesIn}, 24-hour clock, rounded to the minute.`,
+    `${timesIn}, 24-hour clock, rounded to the minute; "+1 day": the day after the date in the title.`,
     `Shadow: ${convention} convention; ΔT ${deltaTLabel}.`,
     'Moon up: upper limb on a sea-level horizon with standard refraction.',
     'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',

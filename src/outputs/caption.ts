@@ -6,6 +6,7 @@
 import isoCountries from 'i18n-iso-countries';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
+import { timeRange } from '../ephemeris/dayMark.ts';
 import { loadBasemap } from '../map/basemap.ts';
 import { continentShares, countryShares, type ContinentShare, type CountryShare } from '../visibility/countries.ts';
 import type { Visibility, ZoneName } from '../visibility/visibility.ts';
@@ -53,7 +54,7 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const at = eclipse.greatest.utDays;
   const zone = clock.abbreviation(at);
   const c = eclipse.contacts;
-  const range = (a: number, b: number) => `${clock.time(a)}–${clock.time(b)} ${zone}`;
+  const range = (a: number, b: number) => `${timeRange(clock, a, b, at)} ${zone}`;
   const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.time(at)} ${zone}`];
   if (eclipse.kind === 'penumbral') {
     facts[1] += `, penumbral magnitude ${eclipse.penumbralMagnitude.toFixed(3)}; the Moon is in the penumbra for ${durationWords(eclipse.durations.penumbralSeconds)} (${range(c.P1!.utDays, c.P4!.utDays)}), a subtle dimming.`;

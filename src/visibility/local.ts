@@ -8,6 +8,7 @@ import { CONTACT_ORDER } from '../eclipse/contacts.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { ephemerisTime, moonPositionKm, sunPositionKm } from '../ephemeris/bodies.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { timeRange } from '../ephemeris/dayMark.ts';
 import { momentFromUT, type Moment } from '../ephemeris/time.ts';
 import { horizontal, type Observer } from '../ephemeris/topocentric.ts';
 import { capTest, moonUpCap, moonUpMargin, normalAt } from './moonUp.ts';
@@ -184,10 +185,10 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
 
   if (start.moonUp && end.moonUp) {
     const what = penumbral ? 'the whole penumbral eclipse is in view' : 'the whole eclipse is in view';
-    const totality = eclipse.kind === 'total' ? `, totality ${t(c.U2!)}–${t(c.U3!)}` : '';
+    const totality = eclipse.kind === 'total' ? `, totality ${timeRange(clock, c.U2!.utDays, c.U3!.utDays, start.moment.utDays)}` : '';
     const extra = [rise, set].filter((e): e is LocalEvent => Boolean(e))
       .map((e) => `; the Moon ${e.event === 'moonrise' ? 'rises' : 'sets'} at ${t(e.moment)}, ${PHASE_STATE[phaseAt(eclipse, e.moment.utDays)]}`).join('');
-    return `${from} ${what}: ${penumbral ? 'penumbral phase' : 'partial phases'} ${t(start.moment)}–${t(end.moment)} ${zone}${totality}, the Moon ${where(greatest)} at greatest${extra}.${daylight}`;
+    return `${from} ${what}: ${penumbral ? 'penumbral phase' : 'partial phases'} ${timeRange(clock, start.moment.utDays, end.moment.utDays)} ${zone}${totality}, the Moon ${where(greatest)} at greatest${extra}.${daylight}`;
   }
   if (start.moonUp && set) {
     const totality = eclipse.kind === 'total' && up('U2') ? ` and totality at ${t(c.U2!)}` : '';

@@ -99,3 +99,31 @@ test('marked towns: their own symbol (ink square, not the Moon-overhead ring\'s 
     assert.ok(distance(pixel, hex(THEMES.light.marker)) > 150, 'unlike the Moon-overhead ring');
   }
 });
+
+test('times on another calendar day than the title\'s carry a day mark, in subtitle, caption and curve labels (calendar dates from Intl, the IANA database; Kiritimati at UTC+14, the world\'s earliest clock)', async () => {
+  const { eclipseCaption } = await import('../../src/outputs/caption.ts');
+  const { civilClock } = await import('../../src/ephemeris/civilTime.ts');
+  const { visibilityOf } = await import('../../src/visibility/visibility.ts');
+  const { eclipseOn } = await import('./support.ts');
+  const intlDate = (utDays: number, zone: string) => new Intl.DateTimeFormat('en-CA', { timeZone: zone }).format(new Date(Date.UTC(2000, 0, 1, 12) + Math.round(utDays * 1440) * 60_000));
+  const cases = [
+    { date: '2027-02-20', zone: 'UTC', expect: '(21:12–01:13 +1 day)' },
+    { date: '2027-02-20', zone: 'Asia/Tokyo', expect: '(06:12–10:13)' },
+    { date: '2026-03-03', zone: 'Pacific/Kiritimati', expect: '(23:50 −1 day – 03:17)' },
+  ];
+  for (const c of cases) {
+    const eclipse = eclipseOn(c.date);
+    const [from, to] = eclipse.kind === 'penumbral' ? [eclipse.contacts.P1!, eclipse.contacts.P4!] : [eclipse.contacts.U1!, eclipse.contacts.U4!];
+    // The premise, from Intl: do the ends fall on the date of greatest?
+    const days = [from, to].map((m) => intlDate(m.utDays, c.zone) === intlDate(eclipse.greatest.utDays, c.zone));
+    assert.equal(c.expect.includes('day'), days.includes(false), `${c.date} ${c.zone}: premise`);
+    const { scene } = await render({ date: c.date, tz: c.zone, format: 'svg' });
+    assert.ok(scene!.subtitle.includes(c.expect), `${scene!.subtitle} lacks ${c.expect}`);
+    const caption = eclipseCaption(eclipse, visibilityOf(eclipse), civilClock(c.zone)).caption;
+    assert.ok(caption.includes(c.expect.slice(1, -1)), `caption: ${caption.slice(0, 200)}`);
+    for (const label of scene!.curveLabels) {
+      const marked = / [+−]\d days?$/.test(label.words);
+      assert.equal(marked, intlDate(label.utDays, c.zone) !== intlDate(eclipse.greatest.utDays, c.zone), label.words);
+    }
+  }
+});

@@ -49,6 +49,7 @@ export interface BatchOptions {
 export type ProgressEvent =
   | { readonly type: 'planned'; readonly total: number; readonly upToDate: number }
   | { readonly type: 'started'; readonly id: string; readonly kind: string }
+  /** `seconds`: since the batch began (eclipses run side by side, so there is no per-eclipse clock worth printing). */
   | { readonly type: 'done'; readonly id: string; readonly kind: string; readonly files: number; readonly seconds: number }
   | { readonly type: 'skipped'; readonly id: string; readonly kind: string }
   | { readonly type: 'failed'; readonly id: string; readonly kind: string; readonly message: string }
@@ -221,7 +222,6 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
       try {
         await Promise.all(
           todo.map(async ({ eclipse, record, key }) => {
-            const t0 = performance.now();
             try {
               const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
               const files = (await pool.run(input, { signal: abort.signal })) as WrittenFile[];
@@ -230,7 +230,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
               rendered++;
               await saveManifest();
-              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - t0) / 1000 });
+              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - started) / 1000 });
             } catch (error) {
               if (interrupted) return;
               // Errors from a worker process arrive as plain objects: take their message.

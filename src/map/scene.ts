@@ -10,7 +10,7 @@ import type { LineString, MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
-import { fieldLines } from '../visibility/fieldLines.ts';
+import { fieldLines, type FieldLine } from '../visibility/fieldLines.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
 import { stage, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
 import { timeOnDay, timeRange } from '../ephemeris/dayMark.ts';
@@ -216,6 +216,66 @@ function lineHitCounter(polylines: readonly (readonly ([number, number] | null)[
 }
 
 /**
+ * Where the field's lines crowd together on the page (they converge towards
+ * the poles, and a small page brings them all closer), dashed lines would
+ * merge into one dark band. Keep them apart: lines in order of rank (every
+ * second level first, like a contour map's index lines), each point kept
+ * only when no kept point of another line lies within `minGapPx` on the
+ * page. Returns the kept runs, still in lon/lat for the path to clip.
+ */
+export function thinnedFieldLines(lines: readonly FieldLine[], projection: GeoProjection, minGapPx: number): Position[][] {
+  const levels = [...new Set(lines.map((l) => l.minutes))].sort((a, b) => a - b);
+  const rank = (l: FieldLine) => (levels.indexOf(l.minutes) % 2 === 1 ? 0 : 1);
+  const order = lines.map((l, id) => ({ l, id })).sort((a, b) => rank(a.l) - rank(b.l) || a.l.minutes - b.l.minutes);
+  const [rotLon, rotLat] = projection.rotate();
+  const front: LonLat = [-rotLon, -rotLat];
+  // d3-geo reports no small-circle clip as 0 (or null): only a globe hides a far side.
+  const clipDeg = projection.clipAngle() ?? 0;
+  const globe = clipDeg > 0 && clipDeg <= 90;
+  const cells = new Map<number, { x: number; y: number; id: number }[]>();
+  const cellOf = (x: number, y: number) => Math.floor(x / minGapPx) * 100_003 + Math.floor(y / minGapPx);
+  const runs: Position[][] = [];
+  for (const { l, id } of order) {
+    const kept: boolean[] = [];
+    const points = l.line.map((p) => (globe && angularDistanceDeg(front, p) > 90 ? null : projection([p[0]!, p[1]!])));
+    points.forEach((pt) => {
+      if (!pt) return kept.push(true);
+      const [x, y] = pt;
+      let clear = true;
+      for (let dx = -1; dx <= 1 && clear; dx++) {
+        for (let dy = -1; dy <= 1 && clear; dy++) {
+          for (const q of cells.get(cellOf(x + dx * minGapPx, y + dy * minGapPx)) ?? []) {
+            if (q.id !== id && Math.hypot(q.x - x, q.y - y) < minGapPx) {
+              clear = false;
+              break;
+            }
+          }
+        }
+      }
+      kept.push(clear);
+    });
+    let run: Position[] = [];
+    l.line.forEach((p, i) => {
+      const pt = points[i];
+      if (kept[i]) {
+        run.push(p);
+        if (pt) {
+          const key = cellOf(pt[0], pt[1]);
+          const list = cells.get(key);
+          if (list) list.push({ x: pt[0], y: pt[1], id });
+          else cells.set(key, [{ x: pt[0], y: pt[1], id }]);
+        }
+      } else {
+        if (run.length > 1) runs.push(run);
+        run = [];
+      }
+    });
+    if (run.length > 1) runs.push(run);
+  }
+  return runs;
+}
+
+/**
  * The zones a start cap S and an end cap E make, as disjoint spherical
  * polygons built from arcs of the two circles, each ring clockwise around
  * what it encloses (d3-geo's rule): both caps (sees all), S only (sets
@@ -292,6 +352,9 @@ function curveLabel(words: string, tag: string, x: number, y: number, style: Tex
   return { element: rect + text + code, plate };
 }
 
+/** How much of a flat world map's width a squarer page may crop (its far sides, opposite the eclipse). */
+const WORLD_CROP = 0.45;
+
 const PHASE_WORDS: Record<Visibility['fieldSpan']['phase'], string> = {
   totality: 'totality',
   umbral: 'the umbral phase',
@@ -357,10 +420,21 @@ export function composeScene(input: SceneInput): Scene {
   const clip = fitted.projection.clipExtent();
   const [[left, top], [right, bottom]] = geoPath(fitted.projection.clipExtent(null)).bounds(fitted.outline);
   fitted.projection.clipExtent(clip);
-  const slack = fitted.world || boxView ? Math.max(0, available.height - (bottom - top)) / 2 : 0;
+  // A flat world map on a page squarer than the world (the square preset) grows to the page's height
+  // and gives up its far sides — the meridians farthest from the eclipse — up to WORLD_CROP of its width.
+  const flatWorld = fitted.world && style.view.projection !== 'globe';
+  const naturalAspect = (right - left) / (bottom - top);
+  const grownWidth = flatWorld ? Math.min(available.height * naturalAspect, available.width * (1 + WORLD_CROP)) : right - left;
+  const grown = flatWorld && grownWidth > available.width * 1.01;
+  const mapHeight = grown ? grownWidth / naturalAspect : bottom - top;
+  const slack = fitted.world || boxView ? Math.max(0, available.height - mapHeight) / 2 : 0;
   const slackX = boxView ? Math.max(0, available.width - (right - left)) / 2 : 0;
   const frame: Frame = { x: available.x + slackX, y: available.y + slack, width: available.width - 2 * slackX, height: available.height - 2 * slack };
-  if (slack > 0 || slackX > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
+  if (grown) {
+    const wide: Frame = { x: frame.x - (grownWidth - frame.width) / 2, y: frame.y, width: grownWidth, height: frame.height };
+    fitted = fitView(style.view, wide, greatest.cap.centre);
+    fitted.projection.clipExtent([[frame.x, frame.y], [frame.x + frame.width, frame.y + frame.height]]);
+  } else if (slack > 0 || slackX > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
   const shiftDown = slack;
   const footerTop = frame.y + frame.height + gap;
   const projection: GeoProjection = fitted.projection;
@@ -390,7 +464,7 @@ export function composeScene(input: SceneInput): Scene {
 
   // The continuous field: lines of equal minutes with the Moon up.
   const lines = fieldLines(visibility);
-  const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: lines.map((l) => l.line) };
+  const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: thinnedFieldLines(lines, projection, 5 * unit) };
   overlay.push(`<path d="${path(fieldGeometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
 
   // Moon-up edges at each stage (drawn, then labelled).

@@ -233,3 +233,48 @@ test('--bbox shows the box and no more, --span is the width across: the shown ex
     }
   }
 });
+
+test('each preset is laid out for its shape: on the square card, the wide card and the print page at most a fifth of the rows are bare paper (margins and the gaps between lines of type; it was two fifths on the square card) (pixels counted)', async () => {
+  for (const [width, height] of [[1080, 1080], [1200, 675], [2126, 1318]] as const) {
+    const file = await render({ width, height });
+    const { data, info } = await sharp(file.bytes).raw().toBuffer({ resolveWithObject: true });
+    const paper = [1, 3, 5].map((i) => parseInt(THEMES.light.paper.slice(i, i + 2), 16));
+    let bareRows = 0;
+    for (let y = 0; y < info.height; y++) {
+      let bare = true;
+      for (let x = 0; x < info.width && bare; x++) {
+        const i = (y * info.width + x) * info.channels;
+        bare = Math.abs(data[i]! - paper[0]!) + Math.abs(data[i + 1]! - paper[1]!) + Math.abs(data[i + 2]! - paper[2]!) < 6;
+      }
+      if (bare) bareRows++;
+    }
+    const share = bareRows / info.height;
+    assert.ok(share <= 0.2, `${width}x${height}: ${(share * 100).toFixed(0)} % of rows bare`);
+  }
+});
+
+test('the field\'s dashed lines never crowd closer than their gap on the page, yet every level still reaches its label row (print page, print theme)', async () => {
+  const { thinnedFieldLines } = await import('../../src/map/scene.ts');
+  const { fieldLines } = await import('../../src/visibility/fieldLines.ts');
+  const { fitView } = await import('../../src/map/projection.ts');
+  const eclipse = eclipseOn('2026-03-03');
+  const visibility = visibilityOf(eclipse);
+  const lines = fieldLines(visibility);
+  const frame = { x: 40, y: 150, width: 2046, height: 900 };
+  const { projection } = fitView({ projection: 'equal-earth' }, frame, stage(visibility, 'greatest').cap.centre);
+  const gap = 9;
+  const runs = thinnedFieldLines(lines, projection, gap);
+  // Which line each run came from: the line whose points it shares.
+  const owner = (run: number[][]) => lines.findIndex((l) => l.line.some((p) => p[0] === run[0]![0] && p[1] === run[0]![1]));
+  const points = runs.flatMap((run) => run.map((p) => ({ at: projection([p[0]!, p[1]!])!, line: owner(run) })));
+  for (let i = 0; i < points.length; i += 3) {
+    for (let j = 0; j < points.length; j++) {
+      if (points[i]!.line === points[j]!.line) continue;
+      const d = Math.hypot(points[i]!.at[0] - points[j]!.at[0], points[i]!.at[1] - points[j]!.at[1]);
+      assert.ok(d >= gap * 0.999, `lines ${points[i]!.line} and ${points[j]!.line} ${d.toFixed(2)} px apart at ${points[i]!.at.map(Math.round)}`);
+    }
+  }
+  // Across the middle of the map, where labels go, all of them remain.
+  const mid = frame.y + frame.height * 0.6;
+  for (let k = 0; k < lines.length; k++) assert.ok(points.some((p) => p.line === k && Math.abs(p.at[1] - mid) < 10), `${lines[k]!.minutes} min (${lines[k]!.side}) kept at mid-height`);
+});

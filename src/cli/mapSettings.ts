@@ -54,6 +54,7 @@ function parseView(options: MapOptions): View {
   const projection = parseChoice('--projection', options.projection, PROJECTION_NAMES);
   if (options.bbox !== undefined && options.centre !== undefined) throw new InputError('--bbox', 'either --bbox or --centre, not both', options.bbox);
   if (options.bbox !== undefined) return { projection: 'region', bbox: parseBoundingBox(options.bbox) };
+  if (options.centre !== undefined && projection === 'globe') return { projection, centre: parseLatLon('--centre', options.centre) };
   if (options.centre !== undefined) {
     return { projection: 'region', centre: parseLatLon('--centre', options.centre), spanDeg: parseNumber('--span', options.span ?? '60', { min: 2, max: 180, unit: 'degrees' }) };
   }
@@ -107,7 +108,7 @@ export function mapSettings(options: MapOptions): MapSettings {
 export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
   return {
     theme: style.theme,
-    projection: style.bbox || style.centre ? 'region' : style.projection,
+    projection: style.bbox || (style.centre && style.projection !== 'globe') ? 'region' : style.projection,
     ...(style.bbox ? { bbox: style.bbox.join(',') } : {}),
     ...(style.centre ? { centre: style.centre.join(','), span: String(style.span ?? 60) } : {}),
     ...(style.size ? { size: style.size } : {}),

@@ -22,7 +22,9 @@ export const PROJECTION_NAMES: readonly ProjectionName[] = ['equal-earth', 'equi
 export type BoundingBox = readonly [west: number, south: number, east: number, north: number];
 
 export type View =
-  | { readonly projection: 'equal-earth' | 'equirectangular' | 'globe' }
+  | { readonly projection: 'equal-earth' | 'equirectangular' }
+  /** A globe looks down on `centre` (by default: where the story is, see storyCentre). */
+  | { readonly projection: 'globe'; readonly centre?: LonLat }
   | { readonly projection: 'region'; readonly bbox: BoundingBox }
   | { readonly projection: 'region'; readonly centre: LonLat; readonly spanDeg: number };
 
@@ -65,8 +67,9 @@ export function bboxCentre([west, south, east, north]: BoundingBox): LonLat {
 
 /**
  * Fit a view into a frame on the page. `focus` is the sub-lunar point at
- * greatest: world maps are centred on its meridian (to 5°), so that where
- * the eclipse is seen sits in the middle, and the globe looks down on it.
+ * greatest for flat world maps — centred on its meridian (to 5°), so that
+ * where the eclipse is seen sits in the middle — and, for the globe, the
+ * point it looks down on.
  */
 export function fitView(view: View, frame: Frame, focus: LonLat): FittedView {
   const extent: [[number, number], [number, number]] = [[frame.x, frame.y], [frame.x + frame.width, frame.y + frame.height]];
@@ -77,7 +80,10 @@ export function fitView(view: View, frame: Frame, focus: LonLat): FittedView {
     case 'equirectangular':
       return { projection: geoEquirectangular().rotate([-centralMeridian, 0]).fitExtent(extent, SPHERE), outline: SPHERE, world: true };
     case 'globe': {
-      const projection = geoOrthographic().rotate([-focus[0], -focus[1]]).fitExtent(extent, SPHERE);
+      // The disc fills the frame's width up to 1.8 times its height; what would fall outside is cut at the frame.
+      const diameter = Math.min(frame.width, frame.height * 1.8);
+      const projection = geoOrthographic().rotate([-focus[0], -focus[1]]).scale(diameter / 2).translate([frame.x + frame.width / 2, frame.y + frame.height / 2]);
+      if (diameter > frame.height) projection.clipExtent(extent);
       return { projection, outline: SPHERE, world: true };
     }
     case 'region': {

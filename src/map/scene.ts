@@ -11,6 +11,7 @@ import type { LunarEclipse } from '../eclipse/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines, type FieldLine } from '../visibility/fieldLines.ts';
+import { storyCentre } from '../visibility/storyCentre.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
 import { stage, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
 import { timeOnDay, timeRange } from '../ephemeris/dayMark.ts';
@@ -415,7 +416,8 @@ export function composeScene(input: SceneInput): Scene {
   // Projection and data. A map shorter than its frame pulls header and footer in around it.
   const greatest = stage(visibility, 'greatest');
   // A box is shown whole and no more: the frame takes the box's shape, centred across the page (with paper beside it).
-  let fitted = fitView(style.view, available, greatest.cap.centre);
+  const focus = style.view.projection === 'globe' ? (style.view.centre ?? storyCentre(visibility)) : greatest.cap.centre;
+  let fitted = fitView(style.view, available, focus);
   const boxView = style.view.projection === 'region' && 'bbox' in style.view;
   const clip = fitted.projection.clipExtent();
   const [[left, top], [right, bottom]] = geoPath(fitted.projection.clipExtent(null)).bounds(fitted.outline);
@@ -432,9 +434,9 @@ export function composeScene(input: SceneInput): Scene {
   const frame: Frame = { x: available.x + slackX, y: available.y + slack, width: available.width - 2 * slackX, height: available.height - 2 * slack };
   if (grown) {
     const wide: Frame = { x: frame.x - (grownWidth - frame.width) / 2, y: frame.y, width: grownWidth, height: frame.height };
-    fitted = fitView(style.view, wide, greatest.cap.centre);
+    fitted = fitView(style.view, wide, focus);
     fitted.projection.clipExtent([[frame.x, frame.y], [frame.x + frame.width, frame.y + frame.height]]);
-  } else if (slack > 0 || slackX > 0) fitted = fitView(style.view, frame, greatest.cap.centre);
+  } else if (slack > 0 || slackX > 0) fitted = fitView(style.view, frame, focus);
   const shiftDown = slack;
   const footerTop = frame.y + frame.height + gap;
   const projection: GeoProjection = fitted.projection;
@@ -496,14 +498,21 @@ export function composeScene(input: SceneInput): Scene {
   // the time, and the contact's code as a small tag after them (explained once, in the legend).
   const stages = visibility.stages;
   const curveLabels: CurveLabel[] = [];
+  // A point's place on the page, or null on a globe's far side (the projection alone would fold it onto the near side).
+  const onPage = (p: Position): [number, number] | null =>
+    style.view.projection === 'globe' && angularDistanceDeg(focus, p) > 90 ? null : projection([p[0]!, p[1]!]);
   const curveStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.95, weight: 'semibold' };
   const tagStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.72, weight: 'regular' };
   stages.forEach((s, index) => {
     const targetY = frame.y + frame.height * (0.16 + (0.5 * index) / Math.max(1, stages.length - 1));
     const ring = edges.get(s.name)!.coordinates;
-    const points = ring.map((p) => projection([p[0]!, p[1]!]));
+    const points = ring.map(onPage);
     const at = s.cap.moment.utDays;
-    for (const crossing of crossingsAtY(points, targetY, frame)) {
+    // On a crowded view (a globe, where rising and setting lines of different stages meet), try a little higher or lower.
+    const rows = [0, 1, -1, 2, -2].map((k) => targetY + k * curveStyle.sizePx * 1.6);
+    const found = new Map<number, { point: [number, number]; index: number }>();
+    for (const crossing of crossingsAtY(points, targetY, frame)) found.set(crossing.index, crossing);
+    for (const crossing of found.values()) {
       // West of the sub-lunar point the Earth turns places into the Moon-up cap: the Moon rises there.
       const [lon] = ring[crossing.index]!;
       const rising = ((lon! - s.cap.centre[0] + 540) % 360) - 180 < 0;
@@ -514,7 +523,17 @@ export function composeScene(input: SceneInput): Scene {
       curveLabels.push({ words, tag, at: [(a[0]! + b[0]!) / 2, (a[1]! + b[1]!) / 2], utDays: at });
       // The lines that bound the zones, and totality's, in the label type's weight; the others lighter.
       const strong = s.name === zoneSpan.start || s.name === zoneSpan.end || s.name === 'U2' || s.name === 'U3';
-      const placed = curveLabel(words, tag, crossing.point[0], crossing.point[1] + curveStyle.sizePx * 0.35, strong ? curveStyle : { ...curveStyle, weight: 'regular' }, tagStyle, theme, unit, frame);
+      const style = strong ? curveStyle : { ...curveStyle, weight: 'regular' as const };
+      // The nearest crossing of this same stretch of line at each candidate row; the first whose plate is clear.
+      const placed = rows
+        .map((y) => crossingsAtY(points, y, frame).sort((p, q) => Math.abs(p.point[0] - crossing.point[0]) - Math.abs(q.point[0] - crossing.point[0]))[0])
+        .filter((c): c is { point: [number, number]; index: number } => c !== undefined && Math.abs(c.point[0] - crossing.point[0]) < frame.width / 6)
+        .map((c) => curveLabel(words, tag, c.point[0], c.point[1] + curveStyle.sizePx * 0.35, style, tagStyle, theme, unit, frame))
+        .find((p) => !taken.some((t) => overlaps(t, p.plate)));
+      if (!placed) {
+        curveLabels.pop();
+        continue;
+      }
       taken.push(placed.plate);
       labels.push(placed.element);
     }
@@ -525,7 +544,7 @@ export function composeScene(input: SceneInput): Scene {
   const levels = [...new Set(lines.map((l) => l.minutes))];
   for (const l of lines) {
     const targetY = frame.y + frame.height * 0.84 - levels.indexOf(l.minutes) * rung;
-    const points = l.line.map((p) => projection([p[0]!, p[1]!]));
+    const points = l.line.map(onPage);
     for (const { point: [x, y] } of crossingsAtY(points, targetY, frame).slice(0, 1)) {
       label(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
     }

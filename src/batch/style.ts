@@ -15,6 +15,7 @@ import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
 import { MARK_CLOCKS } from '../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../map/areaNames.ts';
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
 import { DEFAULT_NAMING, NAMING_FIELDS } from './naming.ts';
 
@@ -49,6 +50,7 @@ const styleObject = z
     title: z.string().min(1).max(300).optional(),
     marks: z.array(z.string().min(1).max(200)).max(20).default([]),
     markClock: enumOf(MARK_CLOCKS).default('map'),
+    areaNames: enumOf(AREA_NAMES_CHOICES).default('auto'),
     places: z.array(z.string().min(1).max(200)).max(20).default([]),
     formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),

@@ -9,6 +9,7 @@ import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../map/projection.ts';
 import { THEME_NAMES, THEMES } from '../map/theme.ts';
 import { MARK_CLOCKS } from '../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../map/areaNames.ts';
 import type { MapStyle } from '../map/scene.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import type { HouseStyle } from '../batch/style.ts';
@@ -28,6 +29,7 @@ export interface MapOptions extends SizeOptions, EclipseChoice {
   format?: string;
   mark: string[];
   markClock?: string;
+  areaNames?: string;
   style?: string;
 }
 
@@ -101,7 +103,10 @@ export function mapSettings(options: MapOptions): MapSettings {
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
   const markClock = parseChoice('--mark-clock', options.markClock ?? 'map', MARK_CLOCKS);
-  return { style: { theme, view, borders, clock, markClock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+  // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
+  const namesChoice = parseChoice('--area-names', options.areaNames ?? 'auto', AREA_NAMES_CHOICES);
+  const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && options.preset !== 'card' : namesChoice === 'on';
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
 }
 
 /** A house style as map options, for whatever the command line leaves unset. */
@@ -120,6 +125,7 @@ export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
     ...(style.title !== undefined ? { title: style.title } : {}),
     mark: style.marks,
     markClock: style.markClock,
+    areaNames: style.areaNames,
     convention: style.convention,
     ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
   };

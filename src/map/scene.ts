@@ -12,8 +12,9 @@ import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines, type FieldLine } from '../visibility/fieldLines.ts';
 import { storyCentre } from '../visibility/storyCentre.ts';
+import { AREA_NAMES } from './areaNames.ts';
 import { circleRing, runWhere, angularDistanceDeg } from '../visibility/circles.ts';
-import { stage, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
+import { stage, visibilityEvaluator, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/visibility.ts';
 import { timeOnDay, timeRange } from '../ephemeris/dayMark.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from './basemap.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
@@ -29,6 +30,8 @@ export interface MapStyle {
   readonly clock: CivilClock;
   /** Replaces the generated title. */
   readonly title?: string;
+  /** Continent and ocean names (resolved: true or false). */
+  readonly areaNames?: boolean;
   /** Marked towns' times on the map's clock (one clock per map, the default) or each on its own. */
   readonly markClock?: MarkClock;
 }
@@ -74,6 +77,8 @@ export interface Scene {
   readonly unproject: (point: [number, number]) => LonLat | null;
   /** The map's frame on the page (pixels). */
   readonly frame: Frame;
+  /** The continent and ocean names written, with their plates. */
+  readonly areaNames: readonly { readonly name: string; readonly plate: Box }[];
   /** The labels on the Moon-up edges, with the place on the edge each names. */
   readonly curveLabels: readonly CurveLabel[];
   /** The world-atlas detail drawn. */
@@ -174,6 +179,22 @@ function markElements(marks: readonly MapMark[], projection: GeoProjection, fram
   return { elements, plates };
 }
 
+
+/** `top` over `bottom` at an opacity, as the renderer composites sRGB values. */
+function mixHex(bottom: string, top: string, opacity: number): string {
+  const channel = (i: number) => Math.round(parseInt(bottom.slice(i, i + 2), 16) * (1 - opacity) + parseInt(top.slice(i, i + 2), 16) * opacity).toString(16).padStart(2, '0');
+  return `#${channel(1)}${channel(3)}${channel(5)}`;
+}
+
+/** CIE L* of an sRGB colour (IEC 61966-2-1). */
+function hexLightness(hex: string): number {
+  const linear = [1, 3, 5].map((i) => {
+    const c = parseInt(hex.slice(i, i + 2), 16) / 255;
+    return c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4;
+  });
+  const y = 0.2126 * linear[0]! + 0.7152 * linear[1]! + 0.0722 * linear[2]!;
+  return y > 216 / 24389 ? 116 * Math.cbrt(y) - 16 : (24389 / 27) * y;
+}
 
 /** A marked town: a small square of ink with a paper rim, unlike the Moon-overhead ring. */
 function townSymbol(x: number, y: number, side: number, theme: Theme, unit: number): string {
@@ -490,6 +511,7 @@ export function composeScene(input: SceneInput): Scene {
   };
   if (marker) {
     const [mx, my] = marker;
+    taken.push({ left: mx - 9 * unit, top: my - 9 * unit, right: mx + 9 * unit, bottom: my + 9 * unit });
     overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.halo}" stroke-width="${n2(4.2 * unit)}" stroke-opacity="0.9"/>`);
     overlay.push(`<circle cx="${n2(mx)}" cy="${n2(my)}" r="${n2(6.5 * unit)}" fill="none" stroke="${theme.marker}" stroke-width="${n2(2.2 * unit)}"/>`);
   }
@@ -559,6 +581,39 @@ export function composeScene(input: SceneInput): Scene {
   const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, lineHits);
   overlay.push(...marked.elements);
 
+  // Continent and ocean names, last: each at the first of its anchors (and a row above or below) that is on
+  // the page and clear of every label and line; in ink that stands out from what lies under it.
+  const named: { name: string; plate: Box }[] = [];
+  if (style.areaNames ?? false) {
+    const nameStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 1.05, weight: 'regular' };
+    const zoneAt = visibilityEvaluator(visibility).zoneAt;
+    const hits = lineHitCounter([
+      ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map(onPage)),
+      ...lines.map((l) => l.line.map(onPage)),
+    ], frame, 6 * unit);
+    const inFrame = (b: Box) => b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height;
+    for (const area of AREA_NAMES) {
+      const spots = area.anchors.flatMap((anchor) => {
+        const p = onPage([anchor[0], anchor[1]]);
+        if (!p) return [];
+        return [0, -1.6, 1.6].map((k) => ({ anchor, x: p[0], y: p[1] + k * nameStyle.sizePx }));
+      });
+      const spot = spots.find(({ x, y }) => {
+        const box = plateBox(area.name, x, y, nameStyle, unit);
+        return inFrame(box) && !taken.some((t) => overlaps(t, box)) && hits(box) === 0;
+      });
+      if (!spot) continue;
+      const plate = plateBox(area.name, spot.x, spot.y, nameStyle, unit);
+      taken.push(plate);
+      named.push({ name: area.name, plate });
+      const zone = zoneAt(spot.anchor);
+      const under = area.kind === 'ocean' ? theme.zones[zone] : mixHex(theme.zones[zone], theme.land, theme.landOpacity);
+      const contrast = (ink: string) => Math.abs(hexLightness(ink) - hexLightness(under));
+      const ink = contrast(theme.text) >= contrast(theme.paper) ? theme.text : theme.paper;
+      overlay.push(textElement(area.name, spot.x, spot.y, nameStyle, ink, 'middle').replace('/>', ' fill-opacity="0.78"/>'));
+    }
+  }
+
   // Header.
   overlay.push(textElement(titleText, margin, titleBaseline + shiftDown, layout.titleStyle, theme.text));
   subtitleLines.forEach((line, i) => {
@@ -584,6 +639,7 @@ export function composeScene(input: SceneInput): Scene {
     smallPrint: texts.smallPrint,
     project: (place) => projection([place[0], place[1]]),
     curveLabels,
+    areaNames: named,
     unproject: (point) => (projection.invert?.(point) as LonLat | undefined) ?? null,
     frame,
     basemapDetail: basemap.detail,

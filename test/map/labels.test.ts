@@ -127,3 +127,37 @@ test('times on another calendar day than the title\'s carry a day mark, in subti
     }
   }
 });
+
+test('continent and ocean names: on world views by default, off on cards and regional views, switchable; never on a label, a mark or a line (names placed on Natural Earth\'s continents)', async () => {
+  const { mapSettings } = await import('../../src/cli/mapSettings.ts');
+  const base = { projection: 'equal-earth', tz: 'UTC', borders: 'countries', theme: 'light', mark: [] as string[], convention: 'danjon' };
+  assert.equal(mapSettings({ ...base }).style.areaNames, true);
+  assert.equal(mapSettings({ ...base, projection: 'globe' }).style.areaNames, true);
+  assert.equal(mapSettings({ ...base, preset: 'card' }).style.areaNames, false);
+  assert.equal(mapSettings({ ...base, bbox: '-20,30,45,72' }).style.areaNames, false);
+  assert.equal(mapSettings({ ...base, preset: 'card', areaNames: 'on' }).style.areaNames, true);
+  assert.equal(mapSettings({ ...base, areaNames: 'off' }).style.areaNames, false);
+  assert.throws(() => mapSettings({ ...base, areaNames: 'maybe' }), /--area-names/);
+
+  const { visibilityOf } = await import('../../src/visibility/visibility.ts');
+  const { fieldLines } = await import('../../src/visibility/fieldLines.ts');
+  const { circleRing } = await import('../../src/visibility/circles.ts');
+  const { eclipseOn } = await import('./support.ts');
+  for (const [date, width, height] of [['2026-03-03', 2400, 1350], ['2026-08-28', 1200, 675], ['2027-02-20', 2126, 1318]] as const) {
+    const { scene } = await render({ date, width, height, format: 'svg', areaNames: true });
+    const names = scene!.areaNames;
+    assert.ok(names.length >= 3, `${date}: ${names.map((n) => n.name)}`);
+    const others = [...scene!.labelPlates.zones, ...scene!.labelPlates.marks];
+    const visibility = visibilityOf(eclipseOn(date));
+    const linePoints = [
+      ...visibility.stages.map((s) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.5)),
+      ...fieldLines(visibility).map((l) => l.line),
+    ].flatMap((line) => line.map((p) => scene!.project([p[0]!, p[1]!])).filter((p): p is [number, number] => p !== null));
+    for (const { name, plate } of names) {
+      for (const o of others) assert.ok(plate.right <= o.left || o.right <= plate.left || plate.bottom <= o.top || o.bottom <= plate.top, `${date}: ${name} on a label`);
+      assert.ok(!linePoints.some(([x, y]) => x > plate.left && x < plate.right && y > plate.top && y < plate.bottom), `${date}: ${name} on a line`);
+    }
+    const { scene: off } = await render({ date, width, height, format: 'svg' });
+    assert.equal(off!.areaNames.length, 0);
+  }
+});

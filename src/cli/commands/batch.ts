@@ -99,7 +99,7 @@ export function registerBatch(program: Command, context: CommandContext): void {
 
 const OPTION_FIELDS: Record<string, string> = {
   '--size': 'size', '--preset': 'preset', '--width-mm': 'widthMm', '--dpi': 'dpi', '--bbox': 'bbox', '--centre': 'centre',
-  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--mark-clock': 'markClock', '--delta-t': 'deltaT', '--projection': 'projection',
+  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--mark-clock': 'markClock', '--area-names': 'areaNames', '--delta-t': 'deltaT', '--projection': 'projection',
 };
 
 /**

@@ -7,6 +7,7 @@ import { BORDER_STYLES } from '../../map/basemap.ts';
 import { PROJECTION_NAMES } from '../../map/projection.ts';
 import { THEME_NAMES } from '../../map/theme.ts';
 import { MARK_CLOCKS } from '../../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../../map/areaNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
 import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
@@ -42,6 +43,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png)')
     .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`))
     .option('--mark <place>', 'mark a place with its time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
+    .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
     .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
     .action(async (whenText: string | undefined, options: MapOptions, self: Command) => {

@@ -52,6 +52,8 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
   // Each English names its own zones: British (CET, BST), American (CST), Australian (AEDT), Indian (IST), New Zealand (NZDT).
   const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
+  // Where no English has an abbreviation, the zone's common long name ("Japan Standard Time"), when Intl has one.
+  const longName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'long' });
   const part = (format: Intl.DateTimeFormat, utDays: number) =>
     format.formatToParts(dateFromDays(utDays)).find((p) => p.type === 'timeZoneName')?.value ?? '';
   const isUtc = zone.toUpperCase() === 'UTC' || zone === 'Etc/UTC';
@@ -67,7 +69,7 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
     zoneLabel: (utDays) => {
       if (isUtc) return 'UTC';
       const utcOffset = `UTC${offset(utDays).replace("-", "\u2212")}`;
-      const name = shortNames.map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
+      const name = [...shortNames, longName].map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
       return name ? `${name}, ${utcOffset}` : utcOffset;
     },
     offset,

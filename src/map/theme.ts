@@ -43,6 +43,8 @@ export interface Theme {
   /** The "view from here" figure: the sky's brightness behind the Moon's path. */
   readonly sky: Readonly<Record<SkyClass, string>>;
   readonly ground: string;
+  /** Drawn under the Moon's path on every sky: it shows where the path's own colour would not. */
+  readonly pathCasing: string;
   /** The Moon's path, by phase. */
   readonly path: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
 }
@@ -69,6 +71,7 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     haloOpacity: 0.85,
     sky: { day: '#e7eef5', civil: '#c3d0e2', nautical: '#8c9dbd', astronomical: '#56658c', night: '#2b3457' },
     ground: '#d9d3c4',
+    pathCasing: '#161a26',
     path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
   },
   dark: {
@@ -92,7 +95,8 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     haloOpacity: 0.8,
     sky: { day: '#3b4a66', civil: '#2c3852', nautical: '#1f2840', astronomical: '#161d30', night: '#0d111b' },
     ground: '#252a33',
-    path: { outside: '#59627a', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
+    pathCasing: '#05070c',
+    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
   },
   print: {
     name: 'print',
@@ -115,6 +119,7 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     haloOpacity: 0.85,
     sky: { day: '#f4f4f4', civil: '#dcdcdc', nautical: '#bdbdbd', astronomical: '#9a9a9a', night: '#7a7a7a' },
     ground: '#e6e6e6',
+    pathCasing: '#000000',
     path: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
   },
 };

@@ -120,6 +120,8 @@ export function localCircumstances(eclipse: LunarEclipse, observer: Observer): L
 export interface AltitudeSample {
   readonly moment: Moment;
   readonly moonAltitudeDeg: number;
+  /** From north through east. */
+  readonly moonAzimuthDeg: number;
   readonly sunAltitudeDeg: number;
 }
 
@@ -128,9 +130,11 @@ export function altitudeTrack(observer: Observer, from: Moment, to: Moment, step
   return Array.from({ length: steps + 1 }, (_, i) => {
     const moment = momentFromUT(from.utDays + ((to.utDays - from.utDays) * i) / steps, from.deltaTSeconds);
     const time = ephemerisTime(moment.ttDays);
+    const moon = horizontal(moonPositionKm(time), moment, observer);
     return {
       moment,
-      moonAltitudeDeg: horizontal(moonPositionKm(time), moment, observer).altitudeDeg,
+      moonAltitudeDeg: moon.altitudeDeg,
+      moonAzimuthDeg: moon.azimuthDeg,
       sunAltitudeDeg: horizontal(sunPositionKm(time), moment, observer).geometricAltitudeDeg,
     };
   });
@@ -140,6 +144,9 @@ export function altitudeTrack(observer: Observer, from: Moment, to: Moment, step
 
 const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'];
 export const compassWord = (azimuthDeg: number) => COMPASS[Math.round(azimuthDeg / 45) % 8]!;
+/** The 16 points in their short forms, "ESE" for east-southeast (common practice on charts and forecasts). */
+const COMPASS_16 = ['N', 'NNE', 'NE', 'ENE', 'E', 'ESE', 'SE', 'SSE', 'S', 'SSW', 'SW', 'WSW', 'W', 'WNW', 'NW', 'NNW'];
+export const compassPoint = (azimuthDeg: number) => COMPASS_16[Math.round((((azimuthDeg % 360) + 360) % 360) / 22.5) % 16]!;
 const heightWord = (altitudeDeg: number) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the');
 
 export type EclipsePhase = 'before' | 'penumbral' | 'partial' | 'total' | 'after';

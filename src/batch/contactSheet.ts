@@ -3,7 +3,7 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only.
  */
-import { durationWords } from '../ephemeris/civilTime.ts';
+import { civilClock, durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
 import type { Manifest } from './manifest.ts';
 
@@ -12,13 +12,34 @@ const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thu
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
 
-export function contactSheet(manifest: Manifest, title: string): string {
+/** The sheet's heading for a range whose end is exclusive: "Lunar eclipses 2026-01-01 to 2035-12-31", both days included. */
+export function sheetTitle(fromIso: string, toIsoExclusive: string): string {
+  const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
+  return `Lunar eclipses ${fromIso.slice(0, 10)} to ${lastDay}`;
+}
+
+/** Width and height of a PNG from its IHDR chunk (PNG specification, §11.2.2): bytes 16–23. */
+export function pngSize(head: Uint8Array): [number, number] | undefined {
+  if (head.length < 24 || head[12] !== 0x49 || head[13] !== 0x48 || head[14] !== 0x44 || head[15] !== 0x52) return undefined;
+  const view = new DataView(head.buffer, head.byteOffset, head.byteLength);
+  return [view.getUint32(16), view.getUint32(20)];
+}
+
+/**
+ * `thumbSize` gives each thumbnail's pixel size (read from the file), for the
+ * <img> width and height. Each card carries one date, the one the map's
+ * title prints: greatest eclipse's date in the style's time zone.
+ */
+export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
+  const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
+  const clock = civilClock(tz);
   const cards = manifest.eclipses.map((entry) => {
     const r = entry.record;
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
-    const greatestMinute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' ');
+    // utDays count from J2000.0, 2000-01-01 12:00 UT.
+    const greatestUtDays = (Date.parse(r.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
     const facts = [
-      `Greatest ${greatestMinute} UTC`,
+      `Greatest ${clock.time(greatestUtDays)} ${clock.abbreviation(greatestUtDays)}`,
       r.kind === 'penumbral' ? `penumbral magnitude ${r.penumbralMagnitude.toFixed(3)}` : `umbral magnitude ${r.umbralMagnitude.toFixed(3)}`,
       ...(r.durations.total !== undefined ? [`totality ${durationWords(r.durations.total)}`] : []),
       ...(r.durations.partial !== undefined ? [`in the umbra ${durationWords(r.durations.partial)}`] : [`penumbral phase ${durationWords(r.durations.penumbral)}`]),
@@ -28,12 +49,15 @@ export function contactSheet(manifest: Manifest, title: string): string {
       .filter((f) => f.role !== 'thumbnail')
       .map((f) => `<li><a href="${escapeXml(href(f.path))}">${escapeXml(f.path.split('/').pop()!)}</a> <span>${ROLE_WORDS[f.role] ?? f.role}, ${(f.bytes / 1024).toFixed(0)} KiB</span></li>`)
       .join('\n        ');
+    const size = thumb ? thumbSize(thumb.path) : undefined;
+    const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
+    const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${r.id}`)}" width="480" height="270" loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${date}`)}"${dimensions} loading="lazy"></a>`
       : '';
-    return `    <article class="${escapeXml(r.kind)}">
+    return `    <article class="${escapeXml(r.kind)}" id="${escapeXml(r.id)}">
       ${image}
-      <h2>${escapeXml(r.id)} <small>${escapeXml(r.kind)}</small></h2>
+      <h2>${escapeXml(date)} <small>${escapeXml(r.kind)}</small></h2>
       <p>${facts.map(escapeXml).join(' · ')}</p>
       <ul>
         ${links}
@@ -64,7 +88,7 @@ export function contactSheet(manifest: Manifest, title: string): string {
 <body>
 <header>
   <h1>${escapeXml(title)}</h1>
-  <p>${manifest.eclipses.length} eclipses · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
+  <p>${manifest.eclipses.length === 1 ? '1 eclipse' : `${manifest.eclipses.length} eclipses`} · dates and times in ${escapeXml(tz)} · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
 </header>
 <main>
 ${cards.join('\n')}

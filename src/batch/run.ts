@@ -20,7 +20,7 @@ import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { writeFileAtomic } from '../outputs/files.ts';
-import { contactSheet } from './contactSheet.ts';
+import { contactSheet, pngSize, sheetTitle } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
 import { filesIntact, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
@@ -150,7 +150,14 @@ export async function writeIndexes(outDir: string, manifest: Manifest, title: st
   const doc = { ...catalogueDocument([], { convention: (manifest.style.convention as 'danjon' | 'chauvenet') ?? 'danjon', deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
   const suffix = manifest.shard ? `.shard-${manifest.shard.replace('/', '-of-')}` : '';
   await writeFileAtomic(join(outDir, `catalogue${suffix}.csv`), catalogueCsv(doc));
-  await writeFileAtomic(join(outDir, `index${suffix}.html`), contactSheet({ ...manifest, eclipses: records }, title));
+  const thumbSize = (path: string) => {
+    try {
+      return pngSize(readFileSync(join(outDir, path)).subarray(0, 24));
+    } catch {
+      return undefined;
+    }
+  };
+  await writeFileAtomic(join(outDir, `index${suffix}.html`), contactSheet({ ...manifest, eclipses: records }, title, thumbSize));
 }
 
 export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
@@ -248,7 +255,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     }
     if (interrupted) removeLeftovers(outDir);
     await saveManifest();
-    await writeIndexes(outDir, manifest, `Lunar eclipses ${options.from.toISOString().slice(0, 10)} to ${options.to.toISOString().slice(0, 10)}`);
+    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString()));
     const files = manifest.eclipses.reduce((n, e) => n + e.files.length, 0);
     const bytes = manifest.eclipses.reduce((n, e) => n + e.files.reduce((m, f) => m + f.bytes, 0), 0);
     return { planned: mine.length, rendered, skipped, failed, files, bytes, seconds: (performance.now() - started) / 1000, interrupted };
@@ -276,6 +283,6 @@ export async function mergeManifests(outDir: string, manifests: readonly Manifes
   const to = manifests.map((m) => m.range.to).sort().at(-1)!;
   const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
   await writeManifest(outDir, merged);
-  await writeIndexes(outDir, merged, `Lunar eclipses ${from.slice(0, 10)} to ${to.slice(0, 10)}`);
+  await writeIndexes(outDir, merged, sheetTitle(from, to));
   return merged;
 }

@@ -568,7 +568,10 @@ export function composeScene(input: SceneInput): Scene {
     const targetY = frame.y + frame.height * 0.84 - levels.indexOf(l.minutes) * rung;
     const points = l.line.map(onPage);
     for (const { point: [x, y] } of crossingsAtY(points, targetY, frame).slice(0, 1)) {
-      label(`${l.minutes} min`, x, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
+      // Kept inside the frame, as the line labels are.
+      const half = measureText(`${l.minutes} min`, fieldLabelStyle) / 2 + 2.2 * unit;
+      const cx = Math.min(Math.max(x, frame.x + half), frame.x + frame.width - half);
+      label(`${l.minutes} min`, cx, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
     }
   }
   overlay.push(...labels);

@@ -52,6 +52,7 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
       const skySize = style.preset === 'print' ? { widthPx: settings.size.widthPx, heightPx: Math.round((settings.size.widthPx * 9) / 16) } : { widthPx: 1600, heightPx: 900 };
       const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: skySize, dpi: settings.dpi, format: 'png', generator });
       await write(`${stem}-${slug}-sky.png`, 'sky', sky.bytes);
+      await write(`${stem}-${slug}-sky.txt`, 'caption', sky.caption);
     }
   }
   return written;

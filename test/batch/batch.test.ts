@@ -64,7 +64,7 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
   const listed = new Set<string>(['manifest.json', 'catalogue.csv', 'index.html']);
   for (const entry of manifest.eclipses) {
     const stem = `${entry.id}-${entry.kind}`;
-    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-dakar-sky.png`, `${stem}-dakar.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
+    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-dakar-sky.png`, `${stem}-dakar-sky.txt`, `${stem}-dakar.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
     for (const f of entry.files) {
       const bytes = readFileSync(join(out, f.path));
       assert.equal(bytes.length, f.bytes, f.path);

@@ -105,6 +105,7 @@ test('sky writes its caption beside it; a print house style makes its figures as
   const map = await sharp(join(out, '2026-03-03-total.png')).metadata();
   const sky = await sharp(join(out, '2026-03-03-total-dakar-sky.png')).metadata();
   assert.ok(existsSync(join(out, '2026-03-03-total-dakar-sky.png')));
+  assert.match(readFileSync(join(out, '2026-03-03-total-dakar-sky.txt'), 'utf8'), /^The total lunar eclipse from Dakar /);
   assert.equal(sky.width, map.width, 'as wide as the map (90 mm at 200 dpi)');
   assert.equal(sky.density, 200);
 });

@@ -487,7 +487,7 @@ export function composeScene(input: SceneInput): Scene {
 
   // The continuous field: lines of equal minutes with the Moon up.
   const lines = fieldLines(visibility);
-  const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: thinnedFieldLines(lines, projection, 5 * unit) };
+  const fieldGeometry: MultiLineString = { type: 'MultiLineString', coordinates: thinnedFieldLines(lines, projection, 6.5 * unit) };
   overlay.push(`<path d="${path(fieldGeometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
 
   // Moon-up edges at each stage (drawn, then labelled).

@@ -3,8 +3,7 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only, to files inside the folder.
  */
-import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
-import { durationWords } from '../ephemeris/civilTime.ts';
+import { civilClock, durationWords } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../map/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
@@ -27,7 +26,27 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
   };
 }
 
-export function contactSheet(manifest: Manifest, title: string): string {
+/** The sheet's heading for a range whose end is exclusive: "Lunar eclipses 2026-01-01 to 2035-12-31", both days included. */
+export function sheetTitle(fromIso: string, toIsoExclusive: string): string {
+  const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
+  return `Lunar eclipses ${fromIso.slice(0, 10)} to ${lastDay}`;
+}
+
+/** Width and height of a PNG from its IHDR chunk (PNG specification, §11.2.2): bytes 16–23. */
+export function pngSize(head: Uint8Array): [number, number] | undefined {
+  if (head.length < 24 || head[12] !== 0x49 || head[13] !== 0x48 || head[14] !== 0x44 || head[15] !== 0x52) return undefined;
+  const view = new DataView(head.buffer, head.byteOffset, head.byteLength);
+  return [view.getUint32(16), view.getUint32(20)];
+}
+
+/**
+ * `thumbSize` gives each thumbnail's pixel size (read from the file), for the
+ * <img> width and height. Each card carries one date, the one the map's
+ * title prints: greatest eclipse's date in the style's time zone.
+ */
+export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
+  const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
+  const clock = civilClock(tz);
   const cards = manifest.eclipses.map((listed) => {
     // Only plain relative paths inside the folder become links: never "../", "/", "//host" or a URL.
     const entry = { ...listed, files: listed.files.filter((f) => isPlainRelativePath(f.path)) };
@@ -35,9 +54,10 @@ export function contactSheet(manifest: Manifest, title: string): string {
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
     // The figures as the maps print them: rounded once, from the full value (record.printed).
     const p = r.printed ?? figuresFromRecord(r);
-    const julian = julianDateOfIsoDate(r.id);
+    // utDays count from J2000.0, 2000-01-01 12:00 UT.
+    const greatestUtDays = (Date.parse(r.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
     const facts = [
-      `Greatest ${p.greatestUtc} UTC`,
+      clock.zone === 'UTC' ? `Greatest ${p.greatestUtc.slice(11)} UTC` : `Greatest ${clock.stamp(greatestUtDays)}`,
       r.kind === 'penumbral' ? `penumbral magnitude ${p.penumbralMagnitude}` : `umbral magnitude ${p.umbralMagnitude}`,
       ...(p.minutes.total !== undefined ? [`totality ${durationWords(p.minutes.total * 60)}`] : []),
       ...(p.minutes.partial !== undefined ? [`in the umbra ${durationWords(p.minutes.partial * 60)}`] : [`penumbral phase ${durationWords(p.minutes.penumbral * 60)}`]),
@@ -47,12 +67,15 @@ export function contactSheet(manifest: Manifest, title: string): string {
       .filter((f) => f.role !== 'thumbnail')
       .map((f) => `<li><a href="${escapeXml(href(f.path))}">${escapeXml(f.path.split('/').pop()!)}</a> <span>${ROLE_WORDS[f.role] ?? f.role}, ${(f.bytes / 1024).toFixed(0)} KiB</span></li>`)
       .join('\n        ');
+    const size = thumb ? thumbSize(thumb.path) : undefined;
+    const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
+    const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${r.id}`)}" width="480" height="270" loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${date}`)}"${dimensions} loading="lazy"></a>`
       : '';
-    return `    <article class="${escapeXml(r.kind)}">
+    return `    <article class="${escapeXml(r.kind)}" id="${escapeXml(r.id)}">
       ${image}
-      <h2>${escapeXml(r.id)}${julian ? ` <small>(Julian: ${escapeXml(julian)})</small>` : ''} <small>${escapeXml(r.kind)}</small></h2>
+      <h2>${escapeXml(date)} <small>${escapeXml(r.kind)}</small></h2>
       <p>${facts.map(escapeXml).join(' · ')}</p>
       <ul>
         ${links}
@@ -83,7 +106,7 @@ export function contactSheet(manifest: Manifest, title: string): string {
 <body>
 <header>
   <h1>${escapeXml(title)}</h1>
-  <p>${manifest.eclipses.length} eclipses · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
+  <p>${manifest.eclipses.length === 1 ? '1 eclipse' : `${manifest.eclipses.length} eclipses`} · dates and times in ${escapeXml(tz)} · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
 </header>
 <main>
 ${cards.join('\n')}

@@ -9,7 +9,7 @@
  * Workers are processes (tinypool's child_process runtime): each has its own
  * heap and allocator, and a worker that dies fails its eclipse, not the batch.
  */
-import { lstatSync, mkdirSync, readdirSync, statSync, unlinkSync } from 'node:fs';
+import { closeSync, lstatSync, mkdirSync, readdirSync, readSync, statSync, unlinkSync } from 'node:fs';
 import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
@@ -19,14 +19,14 @@ import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
 import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
-import { TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
+import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
 import type { RasterFormatName } from '../outputs/formatNames.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipse/conventions.ts';
 import { parseSizeAndDpi, optionsFromStyle } from '../cli/mapSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
 import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
-import { contactSheet } from './contactSheet.ts';
+import { contactSheet, pngSize, sheetTitle } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
 import { fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
@@ -55,6 +55,7 @@ export interface BatchOptions {
 export type ProgressEvent =
   | { readonly type: 'planned'; readonly total: number; readonly upToDate: number }
   | { readonly type: 'started'; readonly id: string; readonly kind: string }
+  /** `seconds`: since the batch began (eclipses run side by side, so there is no per-eclipse clock worth printing). */
   | { readonly type: 'done'; readonly id: string; readonly kind: string; readonly files: number; readonly seconds: number }
   | { readonly type: 'skipped'; readonly id: string; readonly kind: string }
   | { readonly type: 'failed'; readonly id: string; readonly kind: string; readonly message: string }
@@ -174,12 +175,23 @@ function emptyManifest(options: BatchOptions, hash: string): Manifest {
 }
 
 /** catalogue.csv and index.html of a manifest, as [name, text]. */
-export function indexFiles(manifest: Manifest, title: string): [string, string][] {
+export function indexFiles(outDir: string, manifest: Manifest, title: string): [string, string][] {
   const records = [...manifest.eclipses].sort((a, b) => a.id.localeCompare(b.id));
+  // A thumbnail's size from its PNG header: a checked relative path, a regular file, 24 bytes read.
+  const thumbSize = (path: string) => {
+    const opened = openRegularInside(outDir, path);
+    if (!opened) return undefined;
+    try {
+      const head = Buffer.alloc(24);
+      return readSync(opened.fd, head, 0, 24, 0) === 24 ? pngSize(head) : undefined;
+    } finally {
+      closeSync(opened.fd);
+    }
+  };
   const convention = (SHADOW_CONVENTIONS as readonly unknown[]).includes(manifest.style.convention) ? (manifest.style.convention as ShadowConventionName) : 'danjon';
   const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
   const [csv, html] = indexNamesFor(manifest.shard);
-  return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title)]];
+  return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title, thumbSize)]];
 }
 
 /** The names of a manifest's catalogue.csv and index.html (a shard's carry its part). */
@@ -190,7 +202,7 @@ function indexNamesFor(shard: string | null): [string, string] {
 
 /** Refresh catalogue.csv and index.html from a manifest. */
 export async function writeIndexes(outDir: string, manifest: Manifest, title: string): Promise<void> {
-  for (const [name, text] of indexFiles(manifest, title)) await writeFileAtomic(join(outDir, name), text);
+  for (const [name, text] of indexFiles(outDir, manifest, title)) await writeFileAtomic(join(outDir, name), text);
 }
 
 export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
@@ -272,7 +284,6 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
       try {
         await Promise.all(
           todo.map(async ({ eclipse, record, key }) => {
-            const t0 = performance.now();
             try {
               const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
               const files = (await pool.run(input, { signal: abort.signal })) as WrittenFile[];
@@ -281,7 +292,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
               rendered++;
               await saveManifest();
-              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - t0) / 1000 });
+              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - started) / 1000 });
             } catch (error) {
               if (interrupted) return;
               // Errors from a worker process arrive as plain objects: take their message.
@@ -299,7 +310,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     }
     if (interrupted) removeLeftovers(outDir);
     await saveManifest();
-    await writeIndexes(outDir, manifest, `Lunar eclipses ${options.from.toISOString().slice(0, 10)} to ${options.to.toISOString().slice(0, 10)}`);
+    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString()));
     const files = manifest.eclipses.reduce((n, e) => n + e.files.length, 0);
     const bytes = manifest.eclipses.reduce((n, e) => n + e.files.reduce((m, f) => m + f.bytes, 0), 0);
     return { planned: mine.length, rendered, skipped, failed, files, bytes, seconds: (performance.now() - started) / 1000, interrupted };
@@ -353,7 +364,7 @@ export async function mergeManifests(outDir: string, manifests: readonly Manifes
     const from = manifests.map((m) => m.range.from).sort()[0]!;
     const to = manifests.map((m) => m.range.to).sort().at(-1)!;
     const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
-    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(merged, `Lunar eclipses ${from.slice(0, 10)} to ${to.slice(0, 10)}`)];
+    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(outDir, merged, sheetTitle(from, to))];
     checkFolderEntries(outDir, files.map(([name]) => name));
     for (const [name, text] of files) await writeFileAtomic(join(outDir, name), text);
     return merged;

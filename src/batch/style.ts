@@ -13,6 +13,8 @@ import { isKnownTimeZone } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES } from '../map/projection.ts';
 import { THEME_NAMES } from '../map/theme.ts';
+import { MARK_CLOCKS } from '../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../map/areaNames.ts';
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
 import { MAX_FILE_NAME_BYTES, readRegularFile, ReadRefused } from '../outputs/files.ts';
 import { DEFAULT_NAMING, longestStemBytes, MAP_SUFFIX_BYTES, NAMING_FIELDS } from './naming.ts';
@@ -49,6 +51,8 @@ const styleObject = z
     borders: enumOf(BORDER_STYLES).default('countries'),
     title: z.string().min(1).max(300).optional(),
     marks: z.array(z.string().min(1).max(200)).max(20).default([]),
+    markClock: enumOf(MARK_CLOCKS).default('map'),
+    areaNames: enumOf(AREA_NAMES_CHOICES).default('auto'),
     places: z.array(z.string().min(1).max(200)).max(20).default([]),
     formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),

@@ -51,8 +51,11 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
       await write(`${stem}-${slug}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
     }
     if (style.sky) {
-      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: SKY_FIGURE_PX, dpi: settings.dpi, format: 'png', generator });
+      // A print style's figure is as wide as its map (same millimetres and density); otherwise SKY_FIGURE_PX (1600x900).
+      const skySize = style.preset === 'print' ? { widthPx: settings.size.widthPx, heightPx: Math.round((settings.size.widthPx * 9) / 16) } : SKY_FIGURE_PX;
+      const sky = await renderSkyFile({ report, theme: THEMES[style.theme], size: skySize, dpi: settings.dpi, format: 'png', generator });
       await write(`${stem}-${slug}-sky.png`, 'sky', sky.bytes);
+      await write(`${stem}-${slug}-sky.txt`, 'caption', sky.caption);
     }
   }
   return written;

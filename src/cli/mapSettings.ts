@@ -8,6 +8,8 @@ import { civilClock } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../map/basemap.ts';
 import { PROJECTION_NAMES, type View } from '../map/projection.ts';
 import { THEME_NAMES, THEMES } from '../map/theme.ts';
+import { MARK_CLOCKS } from '../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../map/areaNames.ts';
 import type { MapStyle } from '../map/scene.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import type { HouseStyle } from '../batch/style.ts';
@@ -26,6 +28,8 @@ export interface MapOptions extends SizeOptions, EclipseChoice {
   output?: string;
   format?: string;
   mark: string[];
+  markClock?: string;
+  areaNames?: string;
   style?: string;
 }
 
@@ -52,6 +56,7 @@ function parseView(options: MapOptions): View {
   const projection = parseChoice('--projection', options.projection, PROJECTION_NAMES);
   if (options.bbox !== undefined && options.centre !== undefined) throw new InputError('--bbox', 'either --bbox or --centre, not both', options.bbox);
   if (options.bbox !== undefined) return { projection: 'region', bbox: parseBoundingBox(options.bbox) };
+  if (options.centre !== undefined && projection === 'globe') return { projection, centre: parseLatLon('--centre', options.centre) };
   if (options.centre !== undefined) {
     return { projection: 'region', centre: parseLatLon('--centre', options.centre), spanDeg: parseNumber('--span', options.span ?? '60', { min: 2, max: 180, unit: 'degrees' }) };
   }
@@ -97,14 +102,18 @@ export function mapSettings(options: MapOptions): MapSettings {
   const title = checkTitle(options.title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
   const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
-  return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+  const markClock = parseChoice('--mark-clock', options.markClock ?? 'map', MARK_CLOCKS);
+  // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
+  const namesChoice = parseChoice('--area-names', options.areaNames ?? 'auto', AREA_NAMES_CHOICES);
+  const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && options.preset !== 'card' : namesChoice === 'on';
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
 }
 
 /** A house style as map options, for whatever the command line leaves unset. */
 export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
   return {
     theme: style.theme,
-    projection: style.bbox || style.centre ? 'region' : style.projection,
+    projection: style.bbox || (style.centre && style.projection !== 'globe') ? 'region' : style.projection,
     ...(style.bbox ? { bbox: style.bbox.join(',') } : {}),
     ...(style.centre ? { centre: style.centre.join(','), span: String(style.span ?? 60) } : {}),
     ...(style.size ? { size: style.size } : {}),
@@ -115,6 +124,8 @@ export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
     borders: style.borders,
     ...(style.title !== undefined ? { title: style.title } : {}),
     mark: style.marks,
+    markClock: style.markClock,
+    areaNames: style.areaNames,
     convention: style.convention,
     ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
   };

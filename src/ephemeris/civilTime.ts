@@ -8,6 +8,7 @@
  */
 import { InputError } from '../errors.ts';
 import { julianDateOfUtcDay } from './calendar.ts';
+import { dayMark, timeRange } from './dayMark.ts';
 import { dateFromDays } from './time.ts';
 
 export interface CivilClock {
@@ -29,10 +30,16 @@ export interface CivilClock {
   abbreviation(utDays: number): string;
   /** The zone as the small print names it: "Europe/Berlin (CET, UTC+01:00)", or "UTC". */
   zoneDescription(utDays: number): string;
-  /** A time with its own zone: "23:15 NZDT". */
-  stamp(utDays: number): string;
-  /** From one time to another, one zone named if both share it: "23:15–01:43 NZDT", else each its own: "02:15 NZDT–02:43 NZST". */
-  range(fromUtDays: number, toUtDays: number): string;
+  /**
+   * A time with its own zone: "23:15 NZDT". Given a reference instant (the one whose date a title
+   * names), a time on another calendar day in this zone says so: "01:13 +1 day NZDT".
+   */
+  stamp(utDays: number, referenceUtDays?: number): string;
+  /**
+   * From one time to another, one zone named if both share it: "23:15–01:43 NZDT", else each its own:
+   * "02:15 NZDT–02:43 NZST"; with a reference instant, day marks as `stamp` gives them: "21:12–01:13 +1 day NZDT".
+   */
+  range(fromUtDays: number, toUtDays: number, referenceUtDays?: number): string;
   /** The instants, between two others, where the offset changes (daylight time starting or ending). */
   offsetChanges(fromUtDays: number, toUtDays: number): OffsetChange[];
   /**
@@ -84,6 +91,8 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
   // Each English names its own zones: British (CET, BST), American (CST), Australian (AEDT), Indian (IST), New Zealand (NZDT).
   const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
+  // Where no English has an abbreviation, the zone's common long name ("Japan Standard Time"), when Intl has one.
+  const longName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'long' });
   const part = (format: Intl.DateTimeFormat, utDays: number) =>
     format.formatToParts(dateFromDays(utDays)).find((p) => p.type === 'timeZoneName')?.value ?? '';
   const isUtc = zone.toUpperCase() === 'UTC' || zone === 'Etc/UTC';
@@ -102,12 +111,15 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
   const zoneLabel = (utDays: number) => {
     if (isUtc) return 'UTC';
     const utcOffset = `UTC${offset(utDays).replace('-', '\u2212')}`;
-    const name = shortNames.map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
+    const name = [...shortNames, longName].map((format) => part(format, utDays)).find((n) => !/^(GMT|UTC)/.test(n));
     return name ? `${name}, ${utcOffset}` : utcOffset;
   };
   const abbreviation = (utDays: number) => (isUtc ? 'UTC' : zoneLabel(utDays).split(',')[0]!);
   const time = (utDays: number) => timeFormat.format(wallMinute(utDays));
-  const stamp = (utDays: number) => `${time(utDays)} ${abbreviation(utDays)}`;
+  // Day marks need the finished clock (its dates in this zone): filled in below.
+  let self: CivilClock;
+  const marked = (utDays: number, referenceUtDays?: number) => (referenceUtDays === undefined ? time(utDays) : `${time(utDays)}${dayMark(self, utDays, referenceUtDays)}`);
+  const stamp = (utDays: number, referenceUtDays?: number) => `${marked(utDays, referenceUtDays)} ${abbreviation(utDays)}`;
   const zoneDescription = (utDays: number) => (isUtc ? 'UTC' : `${zone} (${zoneLabel(utDays)})`);
   const offsetChanges = (fromUtDays: number, toUtDays: number): OffsetChange[] => {
     if (isUtc || !(toUtDays > fromUtDays)) return [];
@@ -134,7 +146,7 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
     }
     return changes;
   };
-  return {
+  self = {
     zone: isUtc ? 'UTC' : zone,
     time,
     date(utDays) {
@@ -149,10 +161,10 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
     abbreviation,
     zoneDescription,
     stamp,
-    range(fromUtDays, toUtDays) {
-      return zoneLabel(fromUtDays) === zoneLabel(toUtDays)
-        ? `${time(fromUtDays)}–${time(toUtDays)} ${abbreviation(toUtDays)}`
-        : `${stamp(fromUtDays)}–${stamp(toUtDays)}`;
+    range(fromUtDays, toUtDays, referenceUtDays) {
+      if (zoneLabel(fromUtDays) !== zoneLabel(toUtDays)) return `${stamp(fromUtDays, referenceUtDays)}–${stamp(toUtDays, referenceUtDays)}`;
+      const times = referenceUtDays === undefined ? `${time(fromUtDays)}–${time(toUtDays)}` : timeRange(self, fromUtDays, toUtDays, referenceUtDays);
+      return `${times} ${abbreviation(toUtDays)}`;
     },
     offsetChanges,
     zoneDescriptionBetween(fromUtDays, toUtDays) {
@@ -177,4 +189,5 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
       return `${local}${sign}${hh}:${mm}`;
     },
   };
+  return self;
 }

@@ -5,7 +5,8 @@
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import type { FeatureCollection, MultiLineString, Geometry } from 'geojson';
+import { geoArea } from 'd3-geo';
+import type { FeatureCollection, MultiLineString, Geometry, Position } from 'geojson';
 import { feature, mesh } from 'topojson-client';
 import type { GeometryCollection, Topology } from 'topojson-specification';
 
@@ -45,6 +46,26 @@ function readTopology(detail: BasemapDetail): [WorldTopology, GeometryCollection
   return [topology, topology.objects.countries];
 }
 
+/**
+ * d3-geo reads a ring's winding on the sphere: a polygon that comes out
+ * larger than a hemisphere is everything but its outline. No landmass is
+ * that large, so such a polygon is a ring wound the wrong way in the data
+ * (the 1:10m land has one, a speck in the Indian Ocean, which otherwise
+ * floods every regional view with land): reverse its rings.
+ */
+function withLandWinding(land: FeatureCollection<Geometry>): FeatureCollection<Geometry> {
+  const fix = (rings: Position[][]) => (geoArea({ type: 'Polygon', coordinates: rings }) > 2 * Math.PI ? rings.map((ring) => [...ring].reverse()) : rings);
+  return {
+    ...land,
+    features: land.features.map((f) => {
+      const g = f.geometry;
+      if (g.type === 'Polygon') return { ...f, geometry: { ...g, coordinates: fix(g.coordinates) } };
+      if (g.type === 'MultiPolygon') return { ...f, geometry: { ...g, coordinates: g.coordinates.map(fix) } };
+      return f;
+    }),
+  };
+}
+
 /** World data is immutable: parse each detail once per process. */
 export function loadBasemap(detail: BasemapDetail): Basemap {
   let basemap = cache.get(detail);
@@ -53,7 +74,7 @@ export function loadBasemap(detail: BasemapDetail): Basemap {
     let countries: FeatureCollection<Geometry, { name: string }> | undefined;
     basemap = {
       detail,
-      land: feature(topology, topology.objects.land),
+      land: withLandWinding(feature(topology, topology.objects.land)),
       borders: mesh(topology, topology.objects.countries, (a, b) => a !== b),
       // Read again when asked, rather than keep the whole topology alive for a caption.
       countries: () => (countries ??= feature(...readTopology(detail)) as FeatureCollection<Geometry, { name: string }>),

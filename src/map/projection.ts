@@ -22,7 +22,9 @@ export const PROJECTION_NAMES: readonly ProjectionName[] = ['equal-earth', 'equi
 export type BoundingBox = readonly [west: number, south: number, east: number, north: number];
 
 export type View =
-  | { readonly projection: 'equal-earth' | 'equirectangular' | 'globe' }
+  | { readonly projection: 'equal-earth' | 'equirectangular' }
+  /** A globe looks down on `centre` (by default: where the story is, see storyCentre). */
+  | { readonly projection: 'globe'; readonly centre?: LonLat }
   | { readonly projection: 'region'; readonly bbox: BoundingBox }
   | { readonly projection: 'region'; readonly centre: LonLat; readonly spanDeg: number };
 
@@ -45,11 +47,16 @@ const SPHERE = { type: 'Sphere' } as const;
 
 function bboxOutline([west, south, east, north]: BoundingBox): GeoPermissibleObjects {
   const span = east > west ? east - west : east + 360 - west;
-  const steps = Math.max(2, Math.ceil(span / 2));
+  // Dense edges (every half degree): d3-geo's fit measures a shape at a small trial scale, where its adaptive
+  // sampling would cut the bulge of a long meridian or parallel by a few pixels of the final map.
+  const steps = Math.max(2, Math.ceil(span * 2));
+  const sides = Math.max(2, Math.ceil((north - south) * 2));
   const northEdge = Array.from({ length: steps + 1 }, (_, i) => [west + (span * i) / steps, north]);
+  const eastEdge = Array.from({ length: sides - 1 }, (_, i) => [west + span, north - ((north - south) * (i + 1)) / sides]);
   const southEdge = Array.from({ length: steps + 1 }, (_, i) => [west + span - (span * i) / steps, south]);
+  const westEdge = Array.from({ length: sides - 1 }, (_, i) => [west, south + ((north - south) * (i + 1)) / sides]);
   // d3-geo winds polygons clockwise; this ring runs west→east along the north edge, then back along the south.
-  return { type: 'Polygon', coordinates: [[...northEdge, ...southEdge, northEdge[0]!]] };
+  return { type: 'Polygon', coordinates: [[...northEdge, ...eastEdge, ...southEdge, ...westEdge, northEdge[0]!]] };
 }
 
 export function bboxCentre([west, south, east, north]: BoundingBox): LonLat {
@@ -60,8 +67,9 @@ export function bboxCentre([west, south, east, north]: BoundingBox): LonLat {
 
 /**
  * Fit a view into a frame on the page. `focus` is the sub-lunar point at
- * greatest: world maps are centred on its meridian (to 5°), so that where
- * the eclipse is seen sits in the middle, and the globe looks down on it.
+ * greatest for flat world maps — centred on its meridian (to 5°), so that
+ * where the eclipse is seen sits in the middle — and, for the globe, the
+ * point it looks down on.
  */
 export function fitView(view: View, frame: Frame, focus: LonLat): FittedView {
   const extent: [[number, number], [number, number]] = [[frame.x, frame.y], [frame.x + frame.width, frame.y + frame.height]];
@@ -72,15 +80,30 @@ export function fitView(view: View, frame: Frame, focus: LonLat): FittedView {
     case 'equirectangular':
       return { projection: geoEquirectangular().rotate([-centralMeridian, 0]).fitExtent(extent, SPHERE), outline: SPHERE, world: true };
     case 'globe': {
-      const projection = geoOrthographic().rotate([-focus[0], -focus[1]]).fitExtent(extent, SPHERE);
+      // The disc fills the frame's width up to 1.8 times its height; what would fall outside is cut at the frame.
+      const diameter = Math.min(frame.width, frame.height * 1.8);
+      const projection = geoOrthographic().rotate([-focus[0], -focus[1]]).scale(diameter / 2).translate([frame.x + frame.width / 2, frame.y + frame.height / 2]);
+      if (diameter > frame.height) projection.clipExtent(extent);
       return { projection, outline: SPHERE, world: true };
     }
     case 'region': {
       const centre = 'bbox' in view ? bboxCentre(view.bbox) : view.centre;
-      const target = 'bbox' in view ? bboxOutline(view.bbox) : geoCircle().center([centre[0], centre[1]]).radius(view.spanDeg / 2)();
-      const projection = geoAzimuthalEqualArea().rotate([-centre[0], -centre[1]]).clipAngle(150).fitExtent(extent, target);
-      projection.clipExtent(extent);
-      return { projection, outline: target, world: false };
+      const projection = geoAzimuthalEqualArea().rotate([-centre[0], -centre[1]]).clipAngle(150);
+      if ('bbox' in view) {
+        // The box fills the frame in its longer direction; the page lays the frame out to the box's shape.
+        const target = bboxOutline(view.bbox);
+        projection.fitExtent(extent, target).clipExtent(extent);
+        return { projection, outline: target, world: false };
+      }
+      // A span is the width across the frame, edge to edge through the centre: a point at
+      // angular distance c from the centre lies 2·sin(c/2) radii from it (Lambert azimuthal
+      // equal-area; Snyder, Map Projections — A Working Manual, eq. 24-1). The height follows the frame's shape.
+      const halfSpanRad = (view.spanDeg / 2) * (Math.PI / 180);
+      projection
+        .scale(frame.width / 2 / (2 * Math.sin(halfSpanRad / 2)))
+        .translate([frame.x + frame.width / 2, frame.y + frame.height / 2])
+        .clipExtent(extent);
+      return { projection, outline: geoCircle().center([centre[0], centre[1]]).radius(view.spanDeg / 2)(), world: false };
     }
   }
 }

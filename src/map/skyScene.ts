@@ -9,7 +9,7 @@ import type { ContactName } from '../eclipse/contacts.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../visibility/local.ts';
-import { phaseAt, skyClass } from '../visibility/local.ts';
+import { compassPoint, phaseAt, skyClass } from '../visibility/local.ts';
 import { flowRows, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
 import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
@@ -32,6 +32,10 @@ export interface SkyScene {
   readonly svg: string;
   readonly title: string;
   readonly description: string;
+  /** The events' dots, the labels' plates and the compass points along the path (page pixels): for tests. */
+  readonly dots: readonly Box[];
+  readonly labelPlates: readonly Box[];
+  readonly compassMarks: readonly { readonly text: string; readonly utDays: number; readonly plate: Box }[];
 }
 
 const SKY_ORDER: readonly SkyClass[] = ['day', 'civil', 'nautical', 'astronomical', 'night'];
@@ -94,7 +98,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays) : clock.time(utDays));
   const smallPrint = [
-    `Local time: ${zoneName}, 24-hour clock. Altitude of the Moon's centre with standard refraction, above a sea-level horizon.`,
+    `Local time: ${zoneName}, 24-hour clock. Altitude of the Moon's centre with standard refraction, above a sea-level horizon; letters under the path: where to look (compass point, e.g. ESE = east-southeast).`,
     `Shadow: ${eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source}).`,
     'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',
     `${input.credits} Type: ${FONT_CREDIT}. Made with ${input.generator}.`,
@@ -178,7 +182,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     if (segment.length > 1 && segmentPhase) {
       // Below the horizon the path fades: the Moon is there, but no one sees it.
       const dash = segmentUp ? '' : ' opacity="0.4"';
-      out.push(`<path d="M${segment.join('L')}" fill="none" stroke="${theme.halo}" stroke-opacity="0.6" stroke-width="${n2((widths[segmentPhase] + 2.2) * unit)}" stroke-linecap="round" stroke-linejoin="round"${dash}/>`);
+      out.push(`<path d="M${segment.join('L')}" fill="none" stroke="${theme.pathCasing}" stroke-opacity="0.8" stroke-width="${n2((widths[segmentPhase] + 2.6) * unit)}" stroke-linecap="round" stroke-linejoin="round"${dash}/>`);
       out.push(`<path d="M${segment.join('L')}" fill="none" stroke="${theme.path[segmentPhase]}" stroke-width="${n2(widths[segmentPhase] * unit)}" stroke-linecap="round" stroke-linejoin="round"${dash}/>`);
     }
   };
@@ -200,9 +204,28 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   // Contacts, greatest, moonrise and moonset on the path.
   // Each label takes the first spot, above or below its point, where its plate covers no earlier one.
   const labelStyle = { sizePx: layout.labelStyle.sizePx, weight: 'semibold' as const };
-  const taken: Box[] = [];
-  for (const event of events) {
-    if (event.moment.utDays < from || event.moment.utDays > to || event.moonAltitudeDeg < altBottom || event.moonAltitudeDeg > altTop) continue;
+  const shown = events.filter((event) => !(event.moment.utDays < from || event.moment.utDays > to || event.moonAltitudeDeg < altBottom || event.moonAltitudeDeg > altTop));
+  // Every dot is reserved before any label is placed, so that no label covers another event's dot.
+  const dot = (px: number, py: number): Box => ({ left: px - 6 * unit, top: py - 6 * unit, right: px + 6 * unit, bottom: py + 6 * unit });
+  const dots: Box[] = shown.map((event) => dot(x(event.moment.utDays), y(event.moonAltitudeDeg)));
+  const taken: Box[] = [...dots];
+  const labelPlates: Box[] = [];
+  const compassMarks: { text: string; utDays: number; plate: Box }[] = [];
+  // Where to look: the Moon's compass point along its path, every hour while it is up.
+  const compassStyle = { sizePx: layout.legendStyle.sizePx * 0.85, weight: 'regular' as const };
+  const hourly = Array.from({ length: Math.floor(to * 24) - Math.ceil(from * 24) + 1 }, (_, i) => (Math.ceil(from * 24) + i) / 24)
+    .map((t) => track.reduce((a, b) => (Math.abs(b.moment.utDays - t) < Math.abs(a.moment.utDays - t) ? b : a)));
+  for (const sample of hourly) {
+    if (sample.moonAltitudeDeg < 2) continue;
+    const cx = x(sample.moment.utDays);
+    const cy = y(sample.moonAltitudeDeg) + 16 * unit + compassStyle.sizePx * 0.5;
+    const box = plateBox(compassPoint(sample.moonAzimuthDeg), cx, cy, compassStyle, unit);
+    if (cy > plot.bottom - 4 * unit || taken.some((b) => overlaps(b, box))) continue;
+    taken.push(box);
+    compassMarks.push({ text: compassPoint(sample.moonAzimuthDeg), utDays: sample.moment.utDays, plate: box });
+    out.push(labelElement(compassPoint(sample.moonAzimuthDeg), cx, cy, compassStyle, theme, unit));
+  }
+  for (const event of shown) {
     const px = x(event.moment.utDays);
     const py = y(event.moonAltitudeDeg);
     const name = event.event === 'greatest' ? 'Greatest' : event.event === 'moonrise' ? 'Moonrise' : event.event === 'moonset' ? 'Moonset' : (event.event as ContactName);
@@ -213,6 +236,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
       .map((dy) => Math.max(plot.top + labelStyle.sizePx, Math.min(plot.bottom - 4 * unit, py + dy)));
     const ly = spots.find((sy) => !taken.some((b) => overlaps(b, plateBox(text, px, sy, labelStyle, unit)))) ?? spots[0]!;
     taken.push(plateBox(text, px, ly, labelStyle, unit));
+    labelPlates.push(plateBox(text, px, ly, labelStyle, unit));
     out.push(labelElement(text, px, ly, labelStyle, theme, unit));
   }
 
@@ -224,7 +248,8 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     const ly = legendTop + r * legendRowHeight;
     for (const item of row) {
       out.push(item.line
-        ? `<path d="M${n2(item.x)},${n2(ly + swatch / 2)}h${n2(swatch)}" stroke="${item.fill}" stroke-width="${n2(4 * unit)}" stroke-linecap="round"/>`
+        ? `<path d="M${n2(item.x)},${n2(ly + swatch / 2)}h${n2(swatch)}" stroke="${theme.pathCasing}" stroke-opacity="0.8" stroke-width="${n2(6.6 * unit)}" stroke-linecap="round"/>`
+          + `<path d="M${n2(item.x)},${n2(ly + swatch / 2)}h${n2(swatch)}" stroke="${item.fill}" stroke-width="${n2(4 * unit)}" stroke-linecap="round"/>`
         : `<rect x="${n2(item.x)}" y="${n2(ly + swatch * 0.1)}" width="${n2(swatch)}" height="${n2(swatch * 0.8)}" fill="${item.fill}" stroke="${theme.textMuted}" stroke-width="${n2(0.5 * unit)}"/>`);
       out.push(textElement(item.label, item.x + swatch + 6 * unit, ly + swatch * 0.8, layout.legendStyle, theme.text));
     }
@@ -233,5 +258,5 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     out.push(textElement(line, margin, H - margin - smallHeight + layout.smallStyle.sizePx * (1 + i * 1.4) - layout.smallStyle.sizePx * 0.4, layout.smallStyle, theme.textMuted));
   });
   out.push('</svg>');
-  return { svg: out.join('\n'), title, description: `${input.summary} ${smallPrint}` };
+  return { svg: out.join('\n'), title, description: `${input.summary} ${smallPrint}`, dots, labelPlates, compassMarks };
 }

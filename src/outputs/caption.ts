@@ -114,7 +114,7 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const at = eclipse.greatest.utDays;
   const c = eclipse.contacts;
   // Each time in the zone in force at its own instant (a clock change inside the eclipse reads true).
-  const range = (a: number, b: number) => clock.range(a, b);
+  const range = (a: number, b: number) => clock.range(a, b, at);
   const facts = [`${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(at)}.`, `Greatest eclipse at ${clock.stamp(at)}`];
   // Figures rounded once, from the full value, as on the map and in the list.
   const figures = printedFigures(eclipse);

@@ -3,6 +3,7 @@ import { stringify } from 'csv-stringify/sync';
 import { CONTACT_ORDER } from '../eclipse/contacts.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
+import { counted } from './counted.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
 export const CATALOGUE_FORMATS: readonly CatalogueFormat[] = ['table', 'json', 'csv'];
@@ -59,7 +60,7 @@ export function catalogueTable(doc: CatalogueDocument): string {
   const deltaTSpan = deltaTs.length === 0 ? '' : Math.min(...deltaTs) === Math.max(...deltaTs)
     ? `${deltaTs[0]!.toFixed(1)} s`
     : `${Math.min(...deltaTs).toFixed(1)}–${Math.max(...deltaTs).toFixed(1)} s`;
-  const title = `${doc.eclipses.length} lunar eclipses from ${doc.range.from.slice(0, 10)} up to (not including) ${doc.range.to.slice(0, 10)}`;
+  const title = `${counted(doc.eclipses.length, 'lunar eclipse')} from ${doc.range.from.slice(0, 10)} up to (not including) ${doc.range.to.slice(0, 10)}`;
   const julian = doc.eclipses.some((e) => julianDateOfIsoDate(e.id)) ? ' Dates: proleptic Gregorian calendar; before 1582 October 15 the Julian date follows.' : '';
   const notes = [
     `Times UTC, rounded to the minute. Shadow: ${doc.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention.${julian}`,

@@ -201,7 +201,18 @@ const PHASES: readonly Phase[] = [
   { key: 'total', title: 'Totality', start: 'U2', end: 'U3' },
 ];
 
-/** One event per phase and stretch of it that can be seen from the place, cut to the time the Moon is up. */
+/**
+ * DTSTAMP (RFC 5545 §3.8.7.2) is when the calendar was made. To keep files
+ * byte-stable we write one fixed stamp, 2000-01-01 00:00 UTC, for every file:
+ * never the eclipse's time, never in the future. Documented in the README.
+ */
+export const ICS_STAMP = '20000101T000000Z';
+
+/**
+ * One event per phase and stretch of it that can be seen from the place, cut
+ * to the time the Moon is up; for an eclipse not seen at all, one informative event over the
+ * whole eclipse that says so (a calendar needs at least one component, RFC 5545 §3.6).
+ */
 export function localIcs(report: LocalReport, generator: string): string {
   const { local, place } = report;
   const events = local.events;
@@ -224,8 +235,7 @@ export function localIcs(report: LocalReport, generator: string): string {
       lines.push(
         'BEGIN:VEVENT',
         `UID:${uid}`,
-        // A stable stamp keeps the file identical from run to run: the instant of greatest eclipse.
-        `DTSTAMP:${icsTime(local.eclipse.greatest)}`,
+        `DTSTAMP:${ICS_STAMP}`,
         `DTSTART:${icsTime(from)}`,
         `DTEND:${icsTime(to)}`,
         `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
@@ -236,6 +246,23 @@ export function localIcs(report: LocalReport, generator: string): string {
         'END:VEVENT',
       );
     });
+  }
+  if (!lines.includes('BEGIN:VEVENT')) {
+    const p1 = find('P1')!;
+    const p4 = find('P4')!;
+    lines.push(
+      'BEGIN:VEVENT',
+      `UID:${local.eclipse.id}-not-seen-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`,
+      `DTSTAMP:${ICS_STAMP}`,
+      `DTSTART:${icsTime(p1.moment)}`,
+      `DTEND:${icsTime(p4.moment)}`,
+      `SUMMARY:${icsText(`Lunar eclipse, not visible from ${place.name}`)}`,
+      `LOCATION:${icsText(place.name)}`,
+      `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
+      `DESCRIPTION:${icsText(`${report.summary} This entry only marks the date; there is nothing to see from here.`)}`,
+      'TRANSP:TRANSPARENT',
+      'END:VEVENT',
+    );
   }
   lines.push('END:VCALENDAR');
   return `${lines.map(fold).join('\r\n')}\r\n`;

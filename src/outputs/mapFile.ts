@@ -4,7 +4,8 @@
  * same bytes.
  */
 import type { LunarEclipse } from '../eclipse/types.ts';
-import { civilClock } from '../ephemeris/civilTime.ts';
+import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
+import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
 import { rasteriseSet, RASTER_FORMATS, type RasterFormat } from '../raster/raster.ts';
 import { localCircumstances } from '../visibility/local.ts';
@@ -23,7 +24,7 @@ export interface MapRequest {
   readonly dpi: number;
   readonly format: MapFormat;
   readonly generator: string;
-  /** Places to mark, each labelled in its own time zone. */
+  /** Places to mark, labelled on the map's clock or (style.markClock 'town') each in its own zone. */
   readonly marks?: readonly PlaceLabel[];
 }
 
@@ -34,11 +35,20 @@ export interface MapFile {
   readonly caption?: Caption;
 }
 
-/** "Adelaide · greatest 17:29 ACDT", "Sydney · rises 19:14 AEDT", "Cairo · not seen". */
-export function markLabel(eclipse: LunarEclipse, place: PlaceLabel): string {
+/**
+ * "Adelaide · greatest 17:29 ACDT", "Sydney · rises 19:14 AEDT", "Cairo · not seen"; given the
+ * map's clock, on that clock with no zone name (the small print names it) and a day mark off the title's date.
+ */
+export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: CivilClock): string {
   const clock = civilClock(place.tz);
   const local = localCircumstances(eclipse, place);
-  const when = (utDays: number) => clock.stamp(utDays);
+  // One clock per map: the map's zone is named in its header, so a mark gives the time and, off the title's day, a day mark;
+  // if that clock changes during the eclipse, each time names its own zone. A town's own clock always names its zone.
+  const span = [eclipse.contacts.P1!.utDays, eclipse.contacts.P4!.utDays] as const;
+  const when = (utDays: number) =>
+    mapClock === undefined ? clock.stamp(utDays)
+      : mapClock.offsetChanges(...span).length > 0 ? mapClock.stamp(utDays, eclipse.greatest.utDays)
+        : timeOnDay(mapClock, utDays, eclipse.greatest.utDays);
   const greatest = local.events.find((e) => e.event === 'greatest')!;
   const rise = local.events.find((e) => e.event === 'moonrise');
   const set = local.events.find((e) => e.event === 'moonset');
@@ -66,7 +76,7 @@ export async function renderMapFiles(
   thumbnailWidthPx?: number,
 ): Promise<{ files: Map<MapFormat, Uint8Array>; scene: Scene; caption: Caption; thumbnail?: Uint8Array }> {
   const visibility = visibilityOf(request.eclipse);
-  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p) }));
+  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p, request.style.markClock === 'town' ? undefined : request.style.clock) }));
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
   const rasters = await rasteriseSet(

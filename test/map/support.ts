@@ -24,6 +24,7 @@ export interface RenderOptions {
   title?: string;
   tz?: string;
   dpi?: number;
+  areaNames?: boolean;
 }
 
 export async function render(options: RenderOptions = {}) {
@@ -35,6 +36,7 @@ export async function render(options: RenderOptions = {}) {
       borders: options.borders ?? 'countries',
       clock: civilClock(options.tz ?? 'UTC'),
       ...(options.title !== undefined ? { title: options.title } : {}),
+      ...(options.areaNames !== undefined ? { areaNames: options.areaNames } : {}),
     },
     size: { widthPx: options.width ?? 1200, heightPx: options.height ?? 675 },
     dpi: options.dpi ?? 72,

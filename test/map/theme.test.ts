@@ -28,17 +28,22 @@ function lightness(hex: string, matrix: Matrix): number {
   return y > 216 / 24389 ? 116 * Math.cbrt(y) - 16 : (24389 / 27) * y;
 }
 
-/** A zone's colour where land is drawn over it (what most readers look at). */
-function overLand(theme: Theme, zoneHex: string): string {
+/** `top` painted over `bottom` at an opacity, in sRGB values as SVG renderers composite (SVG 1.1 §14.2, "source-over"). */
+function over(bottomHex: string, topHex: string, opacity: number): string {
   const mix = (i: number) => {
-    const z = parseInt(zoneHex.slice(i, i + 2), 16);
-    const l = parseInt(theme.land.slice(i, i + 2), 16);
-    return Math.round(z * (1 - theme.landOpacity) + l * theme.landOpacity).toString(16).padStart(2, '0');
+    const b = parseInt(bottomHex.slice(i, i + 2), 16);
+    const t = parseInt(topHex.slice(i, i + 2), 16);
+    return Math.round(b * (1 - opacity) + t * opacity).toString(16).padStart(2, '0');
   };
   return `#${mix(1)}${mix(3)}${mix(5)}`;
 }
 
+/** A zone's colour where land is drawn over it (what most readers look at). */
+const overLand = (theme: Theme, zoneHex: string) => over(zoneHex, theme.land, theme.landOpacity);
+
 const MIN_LIGHTNESS_STEP = 8;
+/** Land and sea inside one zone: a step readers see at a glance (from memory: about 5 L* reads as a distinct tone at map scale). */
+const MIN_LAND_SEA_STEP = 5;
 
 for (const name of THEME_NAMES) {
   const theme = THEMES[name];
@@ -58,6 +63,27 @@ for (const name of THEME_NAMES) {
       }
     });
   }
+  test(`${name} theme: inside every zone land and sea differ by ≥ ${MIN_LAND_SEA_STEP} in L*, for normal, protan, deutan and tritan vision`, () => {
+    for (const [vision, matrix] of Object.entries(SIMULATIONS)) {
+      for (const zone of ZONE_ORDER) {
+        const step = Math.abs(lightness(theme.zones[zone], matrix) - lightness(overLand(theme, theme.zones[zone]), matrix));
+        assert.ok(step >= MIN_LAND_SEA_STEP, `${vision}, ${zone}: land vs sea ΔL* ${step.toFixed(1)}`);
+      }
+    }
+  });
+  test(`${name} theme: in every zone the coastline stands out more than the graticule (ΔL* against what lies under each)`, () => {
+    for (const zone of ZONE_ORDER) {
+      const sea = theme.zones[zone];
+      const land = overLand(theme, sea);
+      const standsOut = (ink: string, opacity: number, ground: string) => Math.abs(lightness(over(ground, ink, opacity), SIMULATIONS.normal!) - lightness(ground, SIMULATIONS.normal!));
+      // A coastline runs between land and sea: it must stand out from at least one side well.
+      const coast = Math.max(standsOut(theme.coastline, theme.coastlineOpacity, sea), standsOut(theme.coastline, theme.coastlineOpacity, land));
+      // The graticule crosses both (under the land tint on land).
+      const graticule = Math.max(standsOut(theme.graticule, theme.graticuleOpacity, sea), standsOut(over(theme.graticule, theme.land, theme.landOpacity), theme.graticuleOpacity, land));
+      assert.ok(coast >= 10, `${zone}: coastline ΔL* ${coast.toFixed(1)}`);
+      assert.ok(coast > graticule + 5, `${zone}: coastline ΔL* ${coast.toFixed(1)} vs graticule ${graticule.toFixed(1)}`);
+    }
+  });
   test(`${name} theme: text stands out from the paper (WCAG 2.x contrast ≥ 4.5)`, () => {
     const luminance = (hex: string) => {
       const [r, g, b] = hexToLinear(hex) as [number, number, number];

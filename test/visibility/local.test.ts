@@ -178,3 +178,30 @@ test('the .ics parses with ical.js (RFC 5545) and its events carry the right UTC
   for (const ev of events) assert.equal(ev.endDate.toJSDate().toISOString(), iso(find('moonset')));
   assert.equal(events[0]!.location, place.name);
 });
+
+test('an eclipse not seen from the place still makes a valid calendar: one informative event over the eclipse that says so (RFC 5545 §3.6: at least one component); DTSTAMP is the fixed documented stamp, never the eclipse\'s time nor in the future (§3.8.7.2)', () => {
+  const e = one('2026-03-03');
+  // Dakar is some 150° from the Moon's sub-point at greatest: the Moon is down throughout (Meeus ch. 15).
+  const place = { name: 'Dakar', latDeg: 14.6937, lonDeg: -17.4441, tz: 'Africa/Dakar' };
+  const clock = civilClock(place.tz);
+  const local = localCircumstances(e, place);
+  assert.ok(local.events.every((ev) => !ev.moonUp), 'premise: nothing seen');
+  const report: LocalReport = { local, place, clock, summary: localSummary(local, clock, place.name) };
+  const text = localIcs(report, 'test');
+  const calendar = new ICAL.Component(ICAL.parse(text));
+  const events = calendar.getAllSubcomponents('vevent');
+  assert.equal(events.length, 1);
+  const event = new ICAL.Event(events[0]!);
+  assert.match(event.summary, /not visible from Dakar/);
+  assert.match(event.description, /cannot be seen/);
+  for (const vevent of events) {
+    const stamp = vevent.getFirstPropertyValue('dtstamp') as unknown as { toJSDate(): Date };
+    assert.ok(stamp.toJSDate().getTime() < Date.now());
+    assert.notEqual(stamp.toJSDate().toISOString().slice(0, 16), new Date(Date.UTC(2000, 0, 1, 12) + e.greatest.utDays * 86_400_000).toISOString().slice(0, 16));
+  }
+  // And a place that sees it: every event carries the same fixed stamp.
+  const seen = { name: 'Honolulu', latDeg: 21.3069, lonDeg: -157.8583, tz: 'Pacific/Honolulu' };
+  const seenLocal = localCircumstances(e, seen);
+  const seenText = localIcs({ local: seenLocal, place: seen, clock: civilClock(seen.tz), summary: 'x' }, 'test');
+  assert.deepEqual([...new Set([...seenText.matchAll(/^DTSTAMP:(.*)$/gm)].map((m) => m[1]!.trim()))], ['20000101T000000Z']);
+});

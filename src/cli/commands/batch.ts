@@ -17,6 +17,7 @@ import { mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.t
 import type { CommandContext } from '../context.ts';
 import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import { toolVersion } from '../version.ts';
+import { counted } from '../../outputs/counted.ts';
 
 interface BatchCommandOptions {
   from?: string;
@@ -80,7 +81,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
       return files.map((n) => readManifestOrFail(join(folder, n)));
     });
     const merged = await mergeManifests(outDir, manifests, `umbracast ${toolVersion()}`);
-    context.stdout(`umbracast batch: merged ${manifests.length} manifests, ${merged.eclipses.length} eclipses → ${join(outDir, MANIFEST_NAME)}\n`);
+    context.stdout(`umbracast batch: merged ${counted(manifests.length, 'manifest')}, ${counted(merged.eclipses.length, 'eclipse')} → ${join(outDir, MANIFEST_NAME)}\n`);
     return;
   }
   const range = parseRange(options.from, options.to, context.now());
@@ -99,7 +100,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
     const summary = await runBatch({ ...range, kinds, style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
     progress.stop();
     const size = `${(summary.bytes / 1e6).toFixed(1)} MB`;
-    context.stdout(`umbracast batch: ${summary.planned} eclipses — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${summary.files} files, ${size}, ${summary.seconds.toFixed(1)} s → ${outDir}\n`);
+    context.stdout(`umbracast batch: ${counted(summary.planned, 'eclipse')} — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${counted(summary.files, 'file')}, ${size}, ${summary.seconds.toFixed(1)} s in all → ${outDir}\n`);
     if (summary.interrupted) throw new BatchInterrupted();
     if (summary.failed.length > 0) {
       throw new Error(`${summary.failed.length} eclipse(s) failed: ${summary.failed.map((f) => `${f.id} (${f.message})`).join('; ')}; rerun to finish them`);
@@ -113,7 +114,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
 
 const OPTION_FIELDS: Record<string, string> = {
   '--size': 'size', '--preset': 'preset', '--width-mm': 'widthMm', '--dpi': 'dpi', '--bbox': 'bbox', '--centre': 'centre',
-  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--delta-t': 'deltaT', '--projection': 'projection',
+  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--mark-clock': 'markClock', '--area-names': 'areaNames', '--delta-t': 'deltaT', '--projection': 'projection',
 };
 
 /**
@@ -176,14 +177,14 @@ function progressReporter(context: CommandContext): { report: (event: ProgressEv
             bar = new cliProgress.SingleBar({ format: 'umbracast batch {bar} {value}/{total} eclipses | {current} | {eta_formatted} left', stream: process.stderr, hideCursor: true }, cliProgress.Presets.shades_classic);
             bar.start(total, done, { current: 'starting' });
           } else {
-            context.stderr(`umbracast batch: ${total} eclipses, ${event.upToDate} already up to date\n`);
+            context.stderr(`umbracast batch: ${counted(total, 'eclipse')}, ${event.upToDate} already up to date\n`);
           }
           break;
         case 'done':
         case 'failed':
           done++;
           if (bar) bar.update(done, { current: `${event.id} ${event.kind}` });
-          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${event.files} files, ${event.seconds.toFixed(1)} s)` : `FAILED: ${printable(event.message)}`}\n`);
+          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${counted(event.files, 'file')}; ${event.seconds.toFixed(1)} s since the batch began)` : `FAILED: ${printable(event.message)}`}\n`);
           break;
         case 'notice':
           if (!bar) context.stderr(`umbracast batch: ${printable(event.message)}\n`);

@@ -4,8 +4,10 @@ import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
 import { BORDER_STYLES } from '../../map/basemap.ts';
-import { PROJECTION_NAMES } from '../../map/projection.ts';
+import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
 import { THEME_NAMES } from '../../map/theme.ts';
+import { MARK_CLOCKS } from '../../map/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../../map/areaNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
 import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
@@ -28,19 +30,21 @@ export function registerMap(program: Command, context: CommandContext): void {
     .command('map')
     .description('render one eclipse as a visibility map (PNG, SVG, WebP, JPEG or GeoJSON)')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`)
-    .option('--projection <name>', `${PROJECTION_NAMES.join(', ')}`, 'equal-earth')
-    .option('--bbox <W,S,E,N>', 'regional view of this box, degrees (implies --projection region)')
-    .option('--centre <LAT,LON>', 'regional view around this point (with --span; implies --projection region)')
-    .option('--span <degrees>', 'angular width of a --centre view', '60')
+    .option('--projection <name>', `${PROJECTION_NAMES.join(', ')} (a globe looks at where most people see the Moon rise or set during the eclipse, unless --centre)`, 'equal-earth')
+    .option('--bbox <W,S,E,N>', 'regional view of exactly this box, degrees; the map takes the box\'s shape, with paper beside or above it (implies --projection region)')
+    .option('--centre <LAT,LON>', 'regional view around this point (with --span; implies --projection region), or with --projection globe the point the globe looks at')
+    .option('--span <degrees>', 'width of a --centre view, edge to edge through the centre; the height follows the picture\'s shape', '60')
     .option('--tz <zone>', 'show times in this IANA time zone', 'UTC')
     .option('--borders <style>', `${BORDER_STYLES.join(' or ')}`, 'countries')
     .option('--title <text>', 'replace the generated title')
     .option('--theme <name>', `${THEME_NAMES.join(', ')}`, 'light');
   withSizeOptions(command, `${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx}`);
   withEclipseOptions(command
-    .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png)')
+    .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png for the world map, the view added for others: out/<id>-<kind>-globe.png, out/<id>-<kind>-region-20w30n45e72n.png)')
     .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`))
-    .option('--mark <place>', 'mark a place with its local time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
+    .option('--mark <place>', 'mark a place with its time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
+    .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
+    .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
     .action(async (whenText: string | undefined, options: MapOptions, self: Command) => {
       if (options.style !== undefined) {
@@ -91,11 +95,29 @@ export function captionPathFor(path: string): string {
   return path.slice(0, path.length - extname(path).length) + '.txt';
 }
 
+/**
+ * The default file name's view part, so that views of one eclipse do not overwrite each other:
+ * "" for the default world map, "-globe", "-equirectangular", "-region-20w30n45e72n", "-region-33.9s151.2e-span70".
+ */
+export function viewStem(view: View): string {
+  const deg = (value: number, positive: string, negative: string) => `${Number(Math.abs(value).toFixed(2))}${value < 0 ? negative : positive}`;
+  if (view.projection === 'equal-earth') return '';
+  if (view.projection === 'region') {
+    if ('bbox' in view) {
+      const [w, s, e, n] = view.bbox;
+      return `-region-${deg(w, 'e', 'w')}${deg(s, 'n', 's')}${deg(e, 'e', 'w')}${deg(n, 'n', 's')}`;
+    }
+    return `-region-${deg(view.centre[1], 'n', 's')}${deg(view.centre[0], 'e', 'w')}-span${Number(view.spanDeg.toFixed(2))}`;
+  }
+  if (view.projection === 'globe' && view.centre) return `-globe-${deg(view.centre[1], 'n', 's')}${deg(view.centre[0], 'e', 'w')}`;
+  return `-${view.projection}`;
+}
+
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
 export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
   const settings = mapSettings(options);
   const eclipse = chooseEclipse(whenText, options, context.now());
-  const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}`, MAP_FORMATS);
+  const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}${viewStem(settings.style.view)}`, MAP_FORMATS);
   // The drawing code (fonts, world data, sharp) loads when a map is drawn, not with the command line.
   const [{ renderMapFile }, { captionText }] = await Promise.all([import('../../outputs/mapFile.ts'), import('../../outputs/caption.ts')]);
   const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });

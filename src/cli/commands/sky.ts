@@ -8,7 +8,7 @@ import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type 
 import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
-import { parseOutput, withSizeOptions } from './map.ts';
+import { captionPathFor, parseOutput, withSizeOptions } from './map.ts';
 import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../mapSettings.ts';
 
 interface SkyOptions extends SizeOptions, PlaceChoice, EclipseChoice {
@@ -50,6 +50,8 @@ export function registerSky(program: Command, context: CommandContext): void {
         ...(options.title !== undefined ? { title: options.title } : {}),
       });
       await writeFileAtomic(path, file.bytes);
+      // Every picture gets its caption beside it.
+      await writeFileAtomic(captionPathFor(path), file.caption);
       context.stdout(`${path}\n`);
     });
 }

@@ -324,10 +324,10 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   const { eclipse, events } = local;
   const c = eclipse.contacts;
   // Every time carries the zone in force at its own instant, so a clock change inside the eclipse reads true.
-  // Times on another day than the eclipse's first contact, in this zone, say so ("01:13 +1 day NZDT").
-  const reference = events[0]!.moment.utDays;
-  const t = (m: Moment) => clock.stamp(m.utDays, reference);
-  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays, reference);
+  // A time on another day, in this zone, than the first time the summary gives says so ("01:13 +1 day NZDT").
+  let reference: number | undefined;
+  const t = (m: Moment) => clock.stamp(m.utDays, (reference ??= m.utDays));
+  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays, (reference ??= a.utDays));
   // At a pole every direction is south (or north): give the height only.
   const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
   const where = (e: LocalEvent) =>

@@ -118,7 +118,8 @@ const changing = (zone: string) => eclipses.filter((e) => intlOffset(zone, e.con
 /** Every "HH:MM ZONE" and "HH:MM–HH:MM ZONE" printed in a text, as (time, zone) pairs. */
 function printedStamps(text: string): string[] {
   const stamps: string[] = [];
-  for (const m of text.matchAll(/(\d\d:\d\d)(?: ([A-Z]{3,4}))?–(\d\d:\d\d) ([A-Z]{3,4})|(\d\d:\d\d) ([A-Z]{3,4})\b/g)) {
+  // A day mark ("+1 day") may stand between a time and its zone; a range's dash may be spaced.
+  for (const m of text.matchAll(/(\d\d:\d\d)(?: [+−]\d+ days?)?(?: ([A-Z]{3,4}))?(?:–| – )(\d\d:\d\d)(?: [+−]\d+ days?)? ([A-Z]{3,4})|(\d\d:\d\d)(?: [+−]\d+ days?)? ([A-Z]{3,4})\b/g)) {
     if (m[5]) stamps.push(`${m[5]} ${m[6]}`);
     else stamps.push(`${m[1]} ${m[2] ?? m[4]}`, `${m[3]} ${m[4]}`);
   }
@@ -127,7 +128,9 @@ function printedStamps(text: string): string[] {
 
 /** Bare clock times, not followed by a zone and not opening a range that ends in one (offsets, "UTC+13:00", are not times). */
 function bareTimes(text: string): string[] {
-  return [...text.matchAll(/(?<!UTC[+−-])\d\d:\d\d(?! [A-Z]{3,4}\b)(?!–\d\d:\d\d [A-Z]{3,4}\b)(?! [A-Z]{3,4}–)/g)].map((m) => m[0]);
+  const mark = '(?: [+−]\\d+ days?)?';
+  const pattern = new RegExp(`(?<!UTC[+−-])\\d\\d:\\d\\d(?!${mark} [A-Z]{3,4}\\b)(?!${mark}(?:–| – )\\d\\d:\\d\\d${mark} [A-Z]{3,4}\\b)(?!${mark} [A-Z]{3,4}(?:–| – ))`, 'g');
+  return [...text.matchAll(pattern)].map((m) => m[0]);
 }
 
 test('the catalogue 2008–2060 holds clock changes inside eclipses for Auckland, Adelaide (a half-hour zone), Lord Howe (a half-hour change) and Berlin — among them New Zealand\'s of 2015-04-04 and a European one in 2050 (Intl)', () => {

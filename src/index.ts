@@ -14,7 +14,7 @@ export { catalogueDocument, eclipseRecord, CATALOGUE_SCHEMA, type CatalogueDocum
 export { catalogueCsv, catalogueJson, catalogueTable, CATALOGUE_FORMATS, type CatalogueFormat } from './outputs/catalogueFormats.ts';
 export { civilClock, type CivilClock, type OffsetChange } from './ephemeris/civilTime.ts';
 export { horizontal, type Observer, type Horizontal } from './ephemeris/topocentric.ts';
-export { findPlace, type Place } from './places/gazetteer.ts';
+export { findPlace, resolvePlace, type MatchKind, type Place, type PlaceMatch } from './places/gazetteer.ts';
 export { timeZoneAt, timeZoneOfPlace, zonesOfCountry } from './places/timeZone.ts';
 export { visibilityOf, visibilityEvaluator, type Visibility, type VisibilityEvaluator, type ZoneName, type StageName } from './visibility/visibility.ts';
 export { moonUpCap, type MoonUpCap } from './visibility/moonUp.ts';

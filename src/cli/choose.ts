@@ -5,7 +5,7 @@ import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
 import type { LunarEclipse } from '../eclipse/types.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
-import { findPlace } from '../places/gazetteer.ts';
+import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
 import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
 import type { PlaceLabel } from '../outputs/localFormats.ts';
 import { DELTA_T_LIMITS } from './declare.ts';
@@ -33,15 +33,37 @@ export interface PlaceChoice {
   tz?: string;
 }
 
-/** --place NAME or --at LAT,LON (one of them), and the time zone: --tz, else the zone at that point. */
-export function choosePlace(options: PlaceChoice, required = true): { place: PlaceLabel; clock: CivilClock } | undefined {
+/**
+ * The line that says which place a name was taken for, when GeoNames spells
+ * it otherwise (an exonym, a former name, accents dropped): for stderr, so that
+ * data on stdout stays clean. Nothing when the name matched as written.
+ */
+export function placeNotice(option: string, match: PlaceMatch): string | undefined {
+  if (match.matchedBy === 'exact') return undefined;
+  return `umbracast: ${option} ${JSON.stringify(match.query)} → ${describePlace(match.place)}`;
+}
+
+/** The notices for names resolved elsewhere (marks on a map), in order. */
+export function placeNotices(option: string, names: readonly string[]): string[] {
+  return names.flatMap((name) => placeNotice(option, resolvePlace(name, option)) ?? []);
+}
+
+/**
+ * --place NAME or --at LAT,LON (one of them), and the time zone: --tz, else
+ * the zone at that point. `placeOption` names where the name came from
+ * (--place, --mark, a style file's field), for errors and the notice.
+ */
+export function choosePlace(options: PlaceChoice, required = true, placeOption = '--place'): { place: PlaceLabel; clock: CivilClock; notice?: string } | undefined {
   if (options.place !== undefined && options.at !== undefined) throw new InputError('--at', 'either --place or --at, not both', options.at);
   let place: Omit<PlaceLabel, 'tz'>;
   let country: string | undefined;
+  let notice: string | undefined;
   if (options.place !== undefined) {
-    const found = findPlace(options.place, '--place');
+    const match = resolvePlace(options.place, placeOption);
+    const found = match.place;
     place = { name: found.name, latDeg: found.latDeg, lonDeg: found.lonDeg };
     country = found.country;
+    notice = placeNotice(placeOption, match);
   } else if (options.at !== undefined) {
     const [lonDeg, latDeg] = parseLatLon('--at', options.at);
     place = { name: `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? 'N' : 'S'} ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? 'E' : 'W'}`, latDeg, lonDeg };
@@ -52,5 +74,5 @@ export function choosePlace(options: PlaceChoice, required = true): { place: Pla
   const tz = options.tz !== undefined ? options.tz.trim()
     : country !== undefined ? timeZoneOfPlace({ ...place, country }) : timeZoneAt(place.latDeg, place.lonDeg);
   const clock = civilClock(tz, '--tz');
-  return { place: { ...place, tz: clock.zone }, clock };
+  return { place: { ...place, tz: clock.zone }, clock, ...(notice !== undefined ? { notice } : {}) };
 }

@@ -101,7 +101,7 @@ export function mapSettings(options: MapOptions): MapSettings {
   const clock = civilClock(options.tz.trim(), '--tz');
   const title = checkTitle(options.title);
   if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
-  const marks = options.mark.map((name) => choosePlace({ place: name })!.place);
+  const marks = options.mark.map((name) => choosePlace({ place: name }, true, '--mark')!.place);
   const markClock = parseChoice('--mark-clock', options.markClock ?? 'map', MARK_CLOCKS);
   // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
   const namesChoice = parseChoice('--area-names', options.areaNames ?? 'auto', AREA_NAMES_CHOICES);

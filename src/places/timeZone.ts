@@ -90,7 +90,11 @@ function offsetPoint(latDeg: number, lonDeg: number, distanceKm: number, bearing
 /**
  * The zone of a named place: the zone at its point if its country uses it;
  * else the first zone of its country found on rings around it (nearest
- * first); else, if the country uses one zone only, that one; else the point's.
+ * first); else, if the point fell in the sea (a nautical Etc/GMT zone) and
+ * the country uses one zone only, that one; else the point's own zone — a
+ * place far from its country's zones is an outlying territory or base that
+ * keeps the clock of the land it stands on (Akrotiri, a British base on
+ * Cyprus, keeps Cyprus's time).
  */
 const countryZones = new Map<string, Set<string>>();
 
@@ -106,5 +110,5 @@ export function timeZoneOfPlace(place: { latDeg: number; lonDeg: number; country
       if (own.has(canonicalZone(zone))) return zone;
     }
   }
-  return own.size === 1 ? [...own][0]! : atPoint;
+  return own.size === 1 && atPoint.startsWith('Etc/') ? [...own][0]! : atPoint;
 }

@@ -25,7 +25,7 @@ const badInputs: [string, string[], RegExp][] = [
   ['both --place and --at', ['local', '--place', 'Dakar', '--at', '1,2'], /^umbracast: --at: expected either --place or --at, not both, received "1,2"$/],
   ['an unknown format', ['local', '--place', 'Dakar', '--format', 'pdf'], /^umbracast: --format: expected one of table, markdown, csv, ics, json, received "pdf"$/],
   ['sky without a place', ['sky'], /^umbracast: --place: expected a place/],
-  ['a map mark that is no place', ['map', '--mark', 'Atlantis City'], /^umbracast: --place: expected a place name/],
+  ['a map mark that is no place', ['map', '--mark', 'Atlantis City'], /^umbracast: --mark: expected a place name/],
 ];
 
 for (const [label, args, pattern] of badInputs) {

@@ -87,7 +87,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
   const range = parseRange(options.from, options.to, context.now());
   const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
   const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
-  checkStyleSettings(style, options.style ?? 'the default style');
+  for (const notice of checkStyleSettings(style, options.style ?? 'the default style')) context.stderr(`${printable(notice)}\n`);
   const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });
   if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker processes from 1 to ${MAX_JOBS}`, options.jobs);
   const shard = options.shard === undefined ? null : parseShard(options.shard);
@@ -120,23 +120,25 @@ const OPTION_FIELDS: Record<string, string> = {
 /**
  * Check a style as its maps will read it — sizes, views, zones, every place
  * named — before any worker starts, so that a bad value is one usage error
- * naming the style's field, not a failure repeated for every eclipse.
+ * naming the style's field, not a failure repeated for every eclipse. Returns
+ * the lines saying which place each name not matched as written was taken for.
  */
-export function checkStyleSettings(style: HouseStyle, file: string): void {
+export function checkStyleSettings(style: HouseStyle, file: string): string[] {
   const field = (error: unknown, name: string) =>
     error instanceof InputError ? new InputError(`${file}: ${name}`, error.expected, error.received, true) : error;
+  const notices: string[] = [];
+  const named = (names: readonly string[], key: string) =>
+    names.forEach((name, i) => {
+      const notice = choosePlace({ place: name }, true, `${file}: ${key}[${i}]`)!.notice;
+      if (notice) notices.push(notice);
+    });
+  named(style.marks, 'marks');
+  named(style.places, 'places');
   try {
     mapSettings(optionsFromStyle(style) as MapOptions);
   } catch (error) {
     throw field(error, error instanceof InputError ? (OPTION_FIELDS[error.parameter] ?? (error.parameter === '--place' ? 'marks' : error.parameter)) : '');
   }
-  style.places.forEach((name, i) => {
-    try {
-      choosePlace({ place: name });
-    } catch (error) {
-      throw field(error, `places[${i}]`);
-    }
-  });
   // Each place gets file names of its own (two Springfields are told apart by country and region), short enough to write.
   let places: ReturnType<typeof stylePlaces>;
   try {
@@ -151,6 +153,7 @@ export function checkStyleSettings(style: HouseStyle, file: string): void {
       throw new InputError(`${file}: places[${i}]`, `a place whose file names fit in ${MAX_FILE_NAME_BYTES} bytes with the naming template`, `${describeReceived(style.places[i])} (${longest} bytes)`, true);
     }
   });
+  return notices;
 }
 
 /** Interrupted by Ctrl-C or SIGTERM: what finished is on disk and in the manifest. */

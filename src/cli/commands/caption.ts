@@ -24,6 +24,7 @@ export function registerCaption(program: Command, context: CommandContext): void
       // The place's own summary uses the caption's zone, so that one text reads in one time.
       const chosen = choosePlace({ ...options, tz: options.tz }, false);
       const eclipse = chooseEclipse(whenText, options, context.now());
+      if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
       // The geometry (world data, the visibility model) loads when a caption is written.
       const [{ eclipseCaption, captionText }, { visibilityOf }, { localReport }] = await Promise.all([
         import('../../outputs/caption.ts'),

@@ -21,6 +21,7 @@ export function registerLocal(program: Command, context: CommandContext): void {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
       const chosen = choosePlace(options)!;
       const eclipse = chooseEclipse(whenText, options, context.now());
+      if (chosen.notice) context.stderr(`${chosen.notice}\n`);
       context.stdout(renderLocal(eclipse, chosen, format));
     });
 }

@@ -13,7 +13,7 @@ import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
-import { chooseEclipse, withEclipseOptions } from '../choose.ts';
+import { chooseEclipse, placeNotices, withEclipseOptions } from '../choose.ts';
 import { DEFAULT_SIZE, mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.ts';
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
@@ -118,6 +118,7 @@ export async function runMap(whenText: string | undefined, options: MapOptions, 
   const settings = mapSettings(options);
   const eclipse = chooseEclipse(whenText, options, context.now());
   const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}${viewStem(settings.style.view)}`, MAP_FORMATS);
+  for (const notice of placeNotices('--mark', options.mark)) context.stderr(`${notice}\n`);
   // The drawing code (fonts, world data, sharp) loads when a map is drawn, not with the command line.
   const [{ renderMapFile }, { captionText }] = await Promise.all([import('../../outputs/mapFile.ts'), import('../../outputs/caption.ts')]);
   const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });

@@ -38,6 +38,7 @@ export function registerSky(program: Command, context: CommandContext): void {
       const eclipse = chooseEclipse(whenText, options, context.now());
       const slug = placeSlug(chosen.place.name);
       const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-sky-${slug}`, SKY_FORMATS);
+      if (chosen.notice) context.stderr(`${chosen.notice}\n`);
       // The drawing code loads when a figure is drawn, not with the command line.
       const [{ renderSkyFile }, { localReport }] = await Promise.all([import('../../outputs/skyFile.ts'), import('../../outputs/localFormats.ts')]);
       const file = await renderSkyFile({

@@ -30,7 +30,7 @@ import { contactSheet, pngSize, sheetTitle } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
 import { fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
-import { sha256, type TaskInput, type WrittenFile } from './written.ts';
+import { sha256, type TaskInput, type TaskResult, type WrittenFile } from './written.ts';
 
 export interface Shard {
   readonly index: number;
@@ -55,7 +55,7 @@ export interface BatchOptions {
 export type ProgressEvent =
   | { readonly type: 'planned'; readonly total: number; readonly upToDate: number }
   | { readonly type: 'started'; readonly id: string; readonly kind: string }
-  /** `seconds`: since the batch began (eclipses run side by side, so there is no per-eclipse clock worth printing). */
+  /** `seconds`: the eclipse's own time in its worker, from the task's start (not from when it was queued). */
   | { readonly type: 'done'; readonly id: string; readonly kind: string; readonly files: number; readonly seconds: number }
   | { readonly type: 'skipped'; readonly id: string; readonly kind: string }
   | { readonly type: 'failed'; readonly id: string; readonly kind: string; readonly message: string }
@@ -205,6 +205,9 @@ export async function writeIndexes(outDir: string, manifest: Manifest, title: st
   for (const [name, text] of indexFiles(outDir, manifest, title)) await writeFileAtomic(join(outDir, name), text);
 }
 
+/** Relative drawing cost of an eclipse by kind: totals draw the most (totality's zones and minute lines), penumbrals the least. */
+const KIND_COST: Record<LunarEclipse['kind'], number> = { total: 3, partial: 2, penumbral: 1 };
+
 export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
   const started = performance.now();
   const { outDir, style } = options;
@@ -283,16 +286,17 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
       options.signal?.addEventListener('abort', onAbort, { once: true });
       try {
         await Promise.all(
-          todo.map(async ({ eclipse, record, key }) => {
+          // Longest first, so that the last task to finish is a short one: totals draw the most lines, penumbrals the fewest.
+          [...todo].sort((a, b) => KIND_COST[b.eclipse.kind] - KIND_COST[a.eclipse.kind]).map(async ({ eclipse, record, key }) => {
             try {
               const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
-              const files = (await pool.run(input, { signal: abort.signal })) as WrittenFile[];
+              const { files, seconds } = (await pool.run(input, { signal: abort.signal })) as TaskResult;
               if (interrupted) return;
               const entry: ManifestEntry = { id: eclipse.id, kind: eclipse.kind, key, record, files };
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
               rendered++;
               await saveManifest();
-              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds: (performance.now() - started) / 1000 });
+              options.onProgress?.({ type: 'done', id: eclipse.id, kind: eclipse.kind, files: files.length, seconds });
             } catch (error) {
               if (interrupted) return;
               // Errors from a worker process arrive as plain objects: take their message.

@@ -14,7 +14,7 @@ import { choosePlace } from '../cli/choose.ts';
 import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/mapSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
 import { SKY_FIGURE_PX } from './resources.ts';
-import { sha256, type FileRole, type TaskInput, type WrittenFile } from './written.ts';
+import { sha256, type FileRole, type TaskInput, type WrittenFile, type TaskResult } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
 
@@ -23,7 +23,8 @@ sharp.cache(false);
 sharp.concurrency(1);
 const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
 
-export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
+export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
+  const started = performance.now();
   const { eclipse, style, outDir, generator } = input;
   const stem = fileStem(style.naming, eclipse);
   const settings = mapSettings(optionsFromStyle(style) as MapOptions);
@@ -58,7 +59,7 @@ export async function renderEclipse(input: TaskInput): Promise<WrittenFile[]> {
       await write(`${stem}-${slug}-sky.txt`, 'caption', sky.caption);
     }
   }
-  return written;
+  return { files: written, seconds: (performance.now() - started) / 1000 };
 }
 
 export default renderEclipse;

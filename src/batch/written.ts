@@ -19,6 +19,12 @@ export interface WrittenFile {
   readonly sha256: string;
 }
 
+/** What a task reports: its files, and how long it took in its worker (seconds, from its own start). */
+export interface TaskResult {
+  readonly files: WrittenFile[];
+  readonly seconds: number;
+}
+
 export function sha256(bytes: Uint8Array | string): string {
   return createHash('sha256').update(bytes).digest('hex');
 }

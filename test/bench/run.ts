@@ -70,7 +70,7 @@ function ratio(medians: Record<string, number>, job: string, baseline: string): 
   const perRound = wall[job]!.map((t, i) => t / wall[baseline]![i]!).sort((a, b) => a - b);
   const at = (p: number) => perRound[Math.round((perRound.length - 1) * p)]!.toFixed(2);
   // Jobs that run in child processes use next to no CPU of this one: then there is no CPU ratio to give.
-  const cpuRatio = median(cpu[baseline]!) >= 5 ? `; CPU ${(median(cpu[job]!) / median(cpu[baseline]!)).toFixed(2)}` : '';
+  const cpuRatio = median(cpu[baseline]!) >= 0.2 * medians[baseline]! ? `; CPU ${(median(cpu[job]!) / median(cpu[baseline]!)).toFixed(2)}` : '';
   return `${(medians[job]! / medians[baseline]!).toFixed(2)} (rounds ${at(0.1)}–${at(0.9)}${cpuRatio})`;
 }
 

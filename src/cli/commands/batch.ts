@@ -187,7 +187,7 @@ function progressReporter(context: CommandContext): { report: (event: ProgressEv
         case 'failed':
           done++;
           if (bar) bar.update(done, { current: `${event.id} ${event.kind}` });
-          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${counted(event.files, 'file')}; ${event.seconds.toFixed(1)} s since the batch began)` : `FAILED: ${printable(event.message)}`}\n`);
+          else context.stderr(`umbracast batch: [${done}/${total}] ${event.id} ${event.kind} ${event.type === 'done' ? `done (${counted(event.files, 'file')} in ${event.seconds.toFixed(1)} s)` : `FAILED: ${printable(event.message)}`}\n`);
           break;
         case 'notice':
           if (!bar) context.stderr(`umbracast batch: ${printable(event.message)}\n`);

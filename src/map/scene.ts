@@ -613,7 +613,17 @@ export function composeScene(input: SceneInput): Scene {
       ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map(onPage)),
       ...lines.map((l) => l.line.map(onPage)),
     ], frame, 6 * unit);
-    const inFrame = (b: Box) => b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height;
+    // On the map itself, not on the paper around a globe or a world's oval: each corner of the plate must
+    // come back to itself through the projection's inverse (off the sphere's outline it does not).
+    const onSphere = ([x, y]: [number, number]) => {
+      const lonLat = projection.invert?.([x, y]);
+      if (!lonLat || !Number.isFinite(lonLat[0]) || !Number.isFinite(lonLat[1]) || Math.abs(lonLat[1]) > 90) return false;
+      const back = projection(lonLat);
+      return back !== null && Math.hypot(back[0] - x, back[1] - y) < 1;
+    };
+    const inFrame = (b: Box) =>
+      b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height &&
+      ([[b.left, b.top], [b.right, b.top], [b.left, b.bottom], [b.right, b.bottom]] as [number, number][]).every(onSphere);
     for (const area of AREA_NAMES) {
       const spots = area.anchors.flatMap((anchor) => {
         const p = onPage([anchor[0], anchor[1]]);

@@ -160,4 +160,18 @@ test('continent and ocean names: on world views by default, off on cards and reg
     const { scene: off } = await render({ date, width, height, format: 'svg' });
     assert.equal(off!.areaNames.length, 0);
   }
+  // On a globe and on a world's oval, a name stands on the map, not half on the paper around it: every corner
+  // of its plate comes back to itself through the projection (d3-geo's inverse; off the sphere it does not).
+  for (const view of [{ projection: 'globe' as const }, { projection: 'equal-earth' as const }]) {
+    for (const date of ['2026-08-28', '2026-03-03']) {
+      const { scene } = await render({ date, width: 2400, height: 1350, format: 'svg', areaNames: true, view });
+      for (const { name, plate } of scene!.areaNames) {
+        for (const corner of [[plate.left, plate.top], [plate.right, plate.top], [plate.left, plate.bottom], [plate.right, plate.bottom]] as [number, number][]) {
+          const lonLat = scene!.unproject(corner);
+          const back = lonLat && Number.isFinite(lonLat[0]) && Number.isFinite(lonLat[1]) ? scene!.project(lonLat) : null;
+          assert.ok(back && Math.hypot(back[0] - corner[0], back[1] - corner[1]) < 1, `${view.projection} ${date}: ${name} reaches off the map at ${corner.map((v) => v.toFixed(0))}`);
+        }
+      }
+    }
+  }
 });

@@ -12,6 +12,7 @@ import { momentFromUT, type Moment } from '../ephemeris/time.ts';
 import { horizontal, type Observer } from '../ephemeris/topocentric.ts';
 import { capTest, moonUpCap, moonUpMargin, normalAt } from './moonUp.ts';
 import type { StageName } from './visibility.ts';
+import { bisectSignChange } from '../ephemeris/roots.ts';
 
 export type SkyClass = 'day' | 'civil' | 'nautical' | 'astronomical' | 'night';
 export type LocalEventName = StageName | 'moonrise' | 'moonset';
@@ -84,19 +85,7 @@ export function moonRisesAndSets(observer: Observer, from: Moment, to: Moment): 
   const steps = Math.max(2, Math.ceil((to.utDays - from.utDays) / SCAN_STEP_DAYS));
   const times = Array.from({ length: steps + 1 }, (_, k) => from.utDays + ((to.utDays - from.utDays) * k) / steps);
   const values = times.map(margin);
-  const bisect = (lo: number, hi: number, flo: number): number => {
-    while (hi - lo > ROOT_TOLERANCE_DAYS) {
-      const mid = (lo + hi) / 2;
-      const fm = margin(mid);
-      if (fm > 0 === flo > 0) {
-        lo = mid;
-        flo = fm;
-      } else {
-        hi = mid;
-      }
-    }
-    return (lo + hi) / 2;
-  };
+  const bisect = (lo: number, hi: number, flo: number): number => bisectSignChange(margin, lo, hi, flo, ROOT_TOLERANCE_DAYS);
   /** The extreme of the margin in [lo, hi]: its time and value (sign +1 for a highest point, −1 for a lowest). */
   const extreme = (lo: number, hi: number, sign: number): [number, number] => {
     let a = hi - GOLDEN * (hi - lo);

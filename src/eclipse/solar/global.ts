@@ -22,6 +22,7 @@ import { localContactTT, localMaximumTT, localShadow, magnitudeOf, umbralContact
 import { outlinePointsAt, umbraRadius } from './outline.ts';
 import { geocentricPlace, nearestOutlinePoint, rho1, surfacePoint, surfacePointReduced } from './surface.ts';
 import type { SolarContactName, SolarEclipse, SolarEclipseKind } from './types.ts';
+import { bisectSignChange } from '../../ephemeris/roots.ts';
 
 /**
  * The solar saros numbering is anchored on the total eclipse of 2024-04-08,
@@ -58,22 +59,10 @@ export function axisOffEarth(e: BesselianElements): number {
 
 /** Bisection for a sign change of f between two instants; undefined if the ends agree. */
 export function crossingTT(fit: BesselianFit, f: (e: BesselianElements) => number, fromTT: number, toTT: number): number | undefined {
-  let a = fromTT;
-  let b = toTT;
-  let fa = f(besselianAt(fit, a));
-  const fb = f(besselianAt(fit, b));
-  if (fa > 0 === fb > 0) return undefined;
-  while (b - a > TIME_TOLERANCE_DAYS) {
-    const mid = (a + b) / 2;
-    const fm = f(besselianAt(fit, mid));
-    if (fm > 0 === fa > 0) {
-      a = mid;
-      fa = fm;
-    } else {
-      b = mid;
-    }
-  }
-  return (a + b) / 2;
+  const at = (tt: number) => f(besselianAt(fit, tt));
+  const fa = at(fromTT);
+  if (fa > 0 === at(toTT) > 0) return undefined;
+  return bisectSignChange(at, fromTT, toTT, fa, TIME_TOLERANCE_DAYS);
 }
 
 /** Contact conditions: positive outside, negative inside. */

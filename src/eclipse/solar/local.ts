@@ -27,6 +27,7 @@ import {
 import { outlinePointsAt, umbraRadius } from './outline.ts';
 import { geocentricPlace, surfacePoint, type GeocentricPlace } from './surface.ts';
 import type { SolarEclipse } from './types.ts';
+import { bisectSignChange } from '../../ephemeris/roots.ts';
 
 export type SolarLocalEventName = 'C1' | 'C2' | 'maximum' | 'C3' | 'C4' | 'sunrise' | 'sunset';
 /** What a place sees, with the Sun up: the central phase (total or annular), only the partial phases, or nothing. */
@@ -119,20 +120,7 @@ function risesAndSets(margin: (tt: number) => number, fromTT: number, toTT: numb
     const b = fromTT + ((toTT - fromTT) * k) / steps;
     const fb = margin(b);
     if (fa > 0 !== fb > 0) {
-      let lo = a;
-      let hi = b;
-      let flo = fa;
-      while (hi - lo > ROOT_TOLERANCE_DAYS) {
-        const mid = (lo + hi) / 2;
-        const fm = margin(mid);
-        if (fm > 0 === flo > 0) {
-          lo = mid;
-          flo = fm;
-        } else {
-          hi = mid;
-        }
-      }
-      found.push({ event: fb > 0 ? 'sunrise' : 'sunset', ttDays: (lo + hi) / 2 });
+      found.push({ event: fb > 0 ? 'sunrise' : 'sunset', ttDays: bisectSignChange(margin, a, b, fa, ROOT_TOLERANCE_DAYS) });
     }
     a = b;
     fa = fb;

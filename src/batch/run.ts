@@ -272,8 +272,10 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
         maxThreads: workers,
         // One lane per core: each worker keeps V8 to its own thread (--single-threaded), so that N
         // workers on N cores do not fight over them; a bounded heap makes it collect its large SVG
-        // strings early; one malloc arena keeps glibc from holding freed native memory per thread.
-        execArgv: ['--single-threaded', `--max-old-space-size=${WORKER_HEAP_MB}`, '--max-semi-space-size=8'],
+        // strings early; one malloc arena keeps glibc from holding freed native memory per thread. A 4 MB
+        // semi-space (young generation) instead of 8 MB: measured on the decade batch with two workers,
+        // peak PSS 458 → 372 MB for about 3 % more time, since resvg now holds each picture twice.
+        execArgv: ['--single-threaded', `--max-old-space-size=${WORKER_HEAP_MB}`, '--max-semi-space-size=4'],
         env: { ...(process.env as Record<string, string>), MALLOC_ARENA_MAX: '1' },
       });
       const abort = new AbortController();

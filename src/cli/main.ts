@@ -6,6 +6,7 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.ts';
 import type { CommandContext } from './context.ts';
+import { printable } from '../batch/printable.ts';
 import { toolVersion } from './version.ts';
 
 export const EXIT_OK = 0;
@@ -66,6 +67,8 @@ const defaultContext: CommandContext = {
   isTerminal: () => Boolean(process.stderr.isTTY),
 };
 
+// Every error is one line, whatever arrived: what came from outside (an option's value, a path, a
+// place name) is shown with its line breaks, terminal escapes and direction marks escaped.
 /** Run the CLI with arguments (without node and script); resolves to the exit code. */
 export async function main(args: readonly string[], context: CommandContext = defaultContext): Promise<number> {
   const program = await buildProgram(context, args);
@@ -79,11 +82,11 @@ export async function main(args: readonly string[], context: CommandContext = de
   } catch (error) {
     if (error instanceof CommanderError) {
       if (error.exitCode === 0) return EXIT_OK; // --help, --version
-      context.stderr(`umbracast: ${error.message.replace(/^error: /, '').split('\n')[0]}\n`);
+      context.stderr(`umbracast: ${printable(error.message.replace(/^error: /, '').split('\n')[0]!)}\n`);
       return EXIT_USAGE;
     }
     if (error instanceof InputError) {
-      context.stderr(`umbracast: ${error.message}\n`);
+      context.stderr(`umbracast: ${printable(error.message)}\n`);
       return EXIT_USAGE;
     }
     if (error instanceof Error && error.name === 'BatchInterrupted') {
@@ -91,7 +94,7 @@ export async function main(args: readonly string[], context: CommandContext = de
       return EXIT_INTERRUPTED;
     }
     const message = error instanceof Error ? error.message : String(error);
-    context.stderr(`umbracast: failed: ${message.split('\n')[0]}\n`);
+    context.stderr(`umbracast: failed: ${printable(message.split('\n')[0]!)}\n`);
     return EXIT_FAILURE;
   }
 }

@@ -222,3 +222,15 @@ test('attack 15: a NUL byte in --out, --style or --merge (no file system path ho
   for (const [args, pattern] of cases) assertOneLine(await run(['batch', ...TWO_ECLIPSES, ...args]), pattern);
   assert.deepEqual(readdirSync(dir), ['style.yaml']);
 });
+
+test('every command\'s error is one line with what came from outside escaped: line breaks, terminal escapes and direction marks in a place, a path or an option (ECMA-48 escapes; Unicode UAX #9 bidi controls)', async () => {
+  const { main } = await import('../../src/cli/main.ts');
+  const hostile = 'Spring\nfield\u001b[31m\u202e';
+  for (const args of [['local', '--place', hostile], ['map', '-o', `/no/such/${hostile}/map.png`], ['list', '--from', hostile], ['map', `--${hostile}`]]) {
+    let stderr = '';
+    const code = await main(args, { stdout: () => undefined, stderr: (t) => (stderr += t), now: () => new Date('2026-01-10T00:00:00Z') });
+    assert.equal(code, 2, `${args[0]}: ${stderr}`);
+    assert.equal(stderr.split('\n').length, 2, `${args[0]}: one line, got ${JSON.stringify(stderr)}`);
+    assert.ok(!/[\u0000-\u0009\u000b-\u001f\u202e]/.test(stderr), `${args[0]}: raw control or direction mark in ${JSON.stringify(stderr)}`);
+  }
+});

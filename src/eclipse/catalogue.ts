@@ -60,24 +60,30 @@ export function checkRange(from: Date, to: Date): void {
   }
 }
 
+/**
+ * The eclipses of a kind whose greatest (UT) falls in [from, to), in time order: `atLunation`
+ * gives the eclipse of lunation k (Meeus numbering), if there is one. The caller has checked the range.
+ */
+export function eclipsesInRange<E extends { readonly greatest: Moment }>(from: Date, to: Date, atLunation: (k: number) => E | undefined): E[] {
+  const fromUT = utDaysFromDate(from);
+  const toUT = utDaysFromDate(to);
+  // TT runs ahead of UT by ΔT (under an hour here); a day of margin covers it.
+  const firstK = lunationIndexNear(fromUT - 1) - 1;
+  const lastK = lunationIndexNear(toUT + 1) + 1;
+  const eclipses: E[] = [];
+  for (let k = firstK; k <= lastK; k++) {
+    const eclipse = atLunation(k);
+    if (eclipse && eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);
+  }
+  return eclipses;
+}
+
 /** Every lunar eclipse whose greatest (UT) falls in [from, to), in time order. */
 export function findLunarEclipses(options: CatalogueOptions): LunarEclipse[] {
   checkRange(options.from, options.to);
   const convention = shadowConvention(options.convention ?? 'danjon');
   const deltaTModel = options.deltaT ?? standardDeltaTModel();
-  const fromUT = utDaysFromDate(options.from);
-  const toUT = utDaysFromDate(options.to);
-  // TT runs ahead of UT by ΔT (under an hour here); a day of margin covers it.
-  const firstK = lunationIndexNear(fromUT - 1) - 1;
-  const lastK = lunationIndexNear(toUT + 1) + 1;
-  const eclipses: LunarEclipse[] = [];
-  for (let k = firstK; k <= lastK; k++) {
-    if (!mayHoldLunarEclipse(k, convention)) continue;
-    const eclipse = eclipseAtLunation(k, convention, deltaTModel);
-    if (!eclipse) continue;
-    if (eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);
-  }
-  return eclipses;
+  return eclipsesInRange(options.from, options.to, (k) => (mayHoldLunarEclipse(k, convention) ? eclipseAtLunation(k, convention, deltaTModel) : undefined));
 }
 
 /** The eclipse at full moon k + 0.5 (Meeus numbering), if there is one. */

@@ -9,9 +9,9 @@
 import { SearchMoonPhase } from 'astronomy-engine';
 import { ephemerisTime } from '../../ephemeris/bodies.ts';
 import { standardDeltaTModel, type DeltaTModel } from '../../ephemeris/deltaT.ts';
-import { decimalYearFromDays, utDaysFromDate } from '../../ephemeris/time.ts';
-import { checkRange, SUPPORTED_RANGE } from '../catalogue.ts';
-import { lunationIndexNear, meanArgumentOfLatitude, meanFullMoonTTDays } from '../lunations.ts';
+import { decimalYearFromDays } from '../../ephemeris/time.ts';
+import { checkRange, eclipsesInRange, SUPPORTED_RANGE } from '../catalogue.ts';
+import { meanArgumentOfLatitude, meanFullMoonTTDays } from '../lunations.ts';
 import { fitAxisOnly, fitBesselian, sampleAxis, type AxisSamples } from './besselian.ts';
 import { describeSolarEclipse, greatestTT, penumbraAtWindowEdge, penumbraTouchesEarth } from './global.ts';
 import type { SolarEclipse } from './types.ts';
@@ -50,17 +50,7 @@ export function mayHoldSolarEclipse(k: number): boolean {
 export function findSolarEclipses(options: SolarCatalogueOptions): SolarEclipse[] {
   checkRange(options.from, options.to);
   const deltaTModel = options.deltaT ?? standardDeltaTModel();
-  const fromUT = utDaysFromDate(options.from);
-  const toUT = utDaysFromDate(options.to);
-  const firstK = lunationIndexNear(fromUT - 1) - 1;
-  const lastK = lunationIndexNear(toUT + 1) + 1;
-  const eclipses: SolarEclipse[] = [];
-  for (let k = firstK; k <= lastK; k++) {
-    if (!mayHoldSolarEclipse(k)) continue;
-    const eclipse = solarEclipseAtLunation(k, deltaTModel);
-    if (eclipse && eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);
-  }
-  return eclipses;
+  return eclipsesInRange(options.from, options.to, (k) => (mayHoldSolarEclipse(k) ? solarEclipseAtLunation(k, deltaTModel) : undefined));
 }
 
 /** The solar eclipse at new moon k (Meeus numbering), if there is one. */

@@ -4,7 +4,7 @@
  * remote fonts or styles; relative links only, to files inside the folder.
  */
 import { civilClock, durationWords } from '../ephemeris/civilTime.ts';
-import { escapeXml } from '../map/xml.ts';
+import { escapeXml } from '../figures/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
 import type { Manifest } from './manifest.ts';

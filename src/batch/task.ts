@@ -4,14 +4,14 @@
  * what it wrote, with sizes and hashes.
  */
 import sharp from 'sharp';
-import { THEMES } from '../map/theme.ts';
+import { THEMES } from '../figures/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
 import { captionText } from '../outputs/caption.ts';
 import { renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
-import { choosePlace } from '../cli/choose.ts';
-import { mapSettings, optionsFromStyle, type MapOptions } from '../cli/mapSettings.ts';
+import { choosePlace } from '../settings/choose.ts';
+import { mapSettings, optionsFromStyle, type MapOptions } from '../settings/mapSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
 import { SKY_FIGURE_PX } from './resources.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile, type TaskResult } from './written.ts';

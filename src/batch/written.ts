@@ -1,6 +1,6 @@
 /** What a batch task is given and what it reports back: plain data, safe to send between processes. */
 import { createHash } from 'node:crypto';
-import type { LunarEclipse } from '../eclipse/types.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { HouseStyle } from './style.ts';
 
 export interface TaskInput {

@@ -3,7 +3,7 @@
  * the lists of names, so that a command's module stays light until it runs.
  */
 import type { Command } from 'commander';
-import { SHADOW_CONVENTIONS } from '../eclipse/conventions.ts';
+import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
 
 /** ΔT beyond ±1 day makes no sense in years 1000–3000. */
 export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };

@@ -3,7 +3,7 @@
  * lists and numbers, one error shape (InputError → one stderr line, exit 2).
  */
 import { InputError } from '../errors.ts';
-import { SUPPORTED_RANGE } from '../eclipse/catalogue.ts';
+import { SUPPORTED_RANGE } from '../eclipses/common/range.ts';
 
 const YEAR_MIN = SUPPORTED_RANGE.from.getUTCFullYear();
 const YEAR_MAX = SUPPORTED_RANGE.to.getUTCFullYear() - 1;

@@ -15,11 +15,9 @@ import { RotateVector, Rotation_EQJ_EQD, Vector } from 'astronomy-engine';
 import { greenwichApparentSiderealDeg } from './earth.ts';
 import { astroTimeOf, type Moment } from './time.ts';
 import type { Vec3 } from './vector.ts';
+import { EARTH_ECCENTRICITY_SQUARED, EARTH_EQUATORIAL_RADIUS_KM, EARTH_FLATTENING } from './constants.ts';
 
 const DEG = Math.PI / 180;
-const WGS84_A_KM = 6378.137;
-const WGS84_F = 1 / 298.257223563;
-const WGS84_E2 = WGS84_F * (2 - WGS84_F);
 
 export interface Observer {
   readonly latDeg: number;
@@ -52,11 +50,11 @@ export function refractionDeg(trueAltitudeDeg: number): number {
 export function observerPositionKm({ latDeg, lonDeg, heightKm = 0 }: Observer): Vec3 {
   const phi = latDeg * DEG;
   const lambda = lonDeg * DEG;
-  const n = WGS84_A_KM / Math.sqrt(1 - WGS84_E2 * Math.sin(phi) ** 2);
+  const n = EARTH_EQUATORIAL_RADIUS_KM / Math.sqrt(1 - EARTH_ECCENTRICITY_SQUARED * Math.sin(phi) ** 2);
   return [
     (n + heightKm) * Math.cos(phi) * Math.cos(lambda),
     (n + heightKm) * Math.cos(phi) * Math.sin(lambda),
-    (n * (1 - WGS84_E2) + heightKm) * Math.sin(phi),
+    (n * (1 - EARTH_ECCENTRICITY_SQUARED) + heightKm) * Math.sin(phi),
   ];
 }
 

@@ -4,12 +4,12 @@
  * while it is on), only its end (the Moon rises while it is on).
  */
 import isoCountries from 'i18n-iso-countries';
-import { printedFigures } from '../eclipse/figures.ts';
-import type { LunarEclipse } from '../eclipse/types.ts';
+import { printedFigures } from '../eclipses/lunar/figures.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
-import { loadBasemap } from '../map/basemap.ts';
-import { continentShares, countryShares, type ContinentShare, type CountryShare } from '../visibility/countries.ts';
-import type { Visibility, ZoneName } from '../visibility/visibility.ts';
+import { loadBasemap } from '../sphere/world.ts';
+import { continentShares, countryShares, type ContinentShare, type CountryShare } from '../visibility/lunar/countries.ts';
+import type { Visibility, ZoneName } from '../visibility/lunar/visibility.ts';
 
 export interface Caption {
   readonly caption: string;

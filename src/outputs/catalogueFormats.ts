@@ -1,6 +1,6 @@
 /** The catalogue as json, csv (both keep seconds) and a table for people (minutes, UTC labelled). */
 import { stringify } from 'csv-stringify/sync';
-import { CONTACT_ORDER } from '../eclipse/contacts.ts';
+import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
 import { counted } from './counted.ts';

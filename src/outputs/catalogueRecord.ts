@@ -6,12 +6,12 @@
  * occur are left out. `printed` gives each figure as people read it, rounded
  * once from the full value, so that scripts typeset what the maps show.
  */
-import type { ContactName } from '../eclipse/contacts.ts';
-import { CONTACT_ORDER } from '../eclipse/contacts.ts';
-import type { ShadowConventionName } from '../eclipse/conventions.ts';
-import type { EclipseKind, LunarEclipse } from '../eclipse/types.ts';
+import type { ContactName } from '../eclipses/lunar/contacts.ts';
+import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
+import type { ShadowConventionName } from '../eclipses/lunar/conventions.ts';
+import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { DeltaTSource } from '../ephemeris/deltaT.ts';
-import { printedFigures, type PrintedFigures } from '../eclipse/figures.ts';
+import { printedFigures, type PrintedFigures } from '../eclipses/lunar/figures.ts';
 import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import { isoSeconds } from '../ephemeris/time.ts';
 

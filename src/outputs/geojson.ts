@@ -7,10 +7,11 @@
 import type { Feature, FeatureCollection, MultiPolygon } from 'geojson';
 import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import { isoSeconds } from '../ephemeris/time.ts';
-import { capTest, moonUpMargin, type CapTest, type Normal } from '../visibility/moonUp.ts';
-import { placeGrid, sampleGrid, traceRegion, type PlaceGrid, type PlanarMultiPolygon } from '../visibility/regions.ts';
-import { tileRegions } from '../visibility/tiling.ts';
-import { fieldSpanOf, spanTests, zoneFromMargins, ZONE_ORDER, type Visibility } from '../visibility/visibility.ts';
+import { capTest, moonUpMargin, type CapTest } from '../visibility/lunar/moonUp.ts';
+import type { Normal } from '../sphere/normal.ts';
+import { placeGrid, sampleGrid, traceRegion, type PlaceGrid, type PlanarMultiPolygon } from '../sphere/regions.ts';
+import { tileRegions } from '../sphere/tiling.ts';
+import { fieldSpanOf, spanTests, zoneFromMargins, ZONE_ORDER, type Visibility } from '../visibility/lunar/visibility.ts';
 
 export const VISIBILITY_SCHEMA = 'umbracast.visibility/1';
 /** Grid step for tracing, degrees: edges land within GEOJSON_EDGE_TOLERANCE_DEG of the exact circles. */

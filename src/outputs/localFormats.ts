@@ -3,12 +3,12 @@
  * and the `umbracast.local/1` JSON contract.
  */
 import { stringify } from 'csv-stringify/sync';
-import { fixed } from '../eclipse/figures.ts';
+import { fixed } from '../eclipses/lunar/figures.ts';
 import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
-import type { LunarEclipse } from '../eclipse/types.ts';
-import { localCircumstances, localSummary, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../visibility/local.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
+import { localCircumstances, localSummary, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../local/lunar.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';

@@ -3,13 +3,13 @@
  * its caption. Everything here is a function of its inputs: same request,
  * same bytes.
  */
-import type { LunarEclipse } from '../eclipse/types.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../map/scene.ts';
+import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../figures/map.ts';
 import { rasteriseSet, RASTER_FORMATS, type RasterFormat } from '../raster/raster.ts';
-import { localCircumstances } from '../visibility/local.ts';
-import { visibilityOf } from '../visibility/visibility.ts';
+import { localCircumstances } from '../local/lunar.ts';
+import { visibilityOf } from '../visibility/lunar/visibility.ts';
 import { eclipseCaption, type Caption } from './caption.ts';
 import { visibilityGeoJson } from './geojson.ts';
 import type { PlaceLabel } from './localFormats.ts';

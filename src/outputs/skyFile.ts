@@ -1,12 +1,12 @@
 /** One eclipse, one place → the "view from here" figure as PNG, SVG, WebP or JPEG. */
-import type { LunarEclipse } from '../eclipse/types.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { momentFromUT } from '../ephemeris/time.ts';
-import type { PageSize } from '../map/draw.ts';
-import { composeSkyScene } from '../map/skyScene.ts';
-import type { Theme } from '../map/theme.ts';
+import type { PageSize } from '../figures/draw.ts';
+import { composeSkyScene } from '../figures/sky.ts';
+import type { Theme } from '../figures/theme.ts';
 import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
 import { rasterise } from '../raster/raster.ts';
-import { altitudeTrack } from '../visibility/local.ts';
+import { altitudeTrack } from '../local/lunar.ts';
 import type { SkyFormat } from './formatNames.ts';
 import type { LocalReport } from './localFormats.ts';
 

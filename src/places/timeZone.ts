@@ -21,6 +21,7 @@
  * own country table without reading the same data twice.
  */
 import { createRequire } from 'node:module';
+import { EARTH_MEAN_RADIUS_KM } from '../ephemeris/constants.ts';
 
 const require = createRequire(import.meta.url);
 let finder: ((latDeg: number, lonDeg: number) => string[]) | undefined;
@@ -72,14 +73,13 @@ export function zonesOfCountry(countryCode: string): string[] {
   }
 }
 
-const EARTH_RADIUS_KM = 6371;
 /** Rings searched around a border place for a zone of its own country: out to 60 km, 16 bearings each. */
 const SEARCH_RADII_KM = [2, 5, 10, 20, 40, 60];
 
 /** The point at a distance and bearing on a sphere (great circle). */
 function offsetPoint(latDeg: number, lonDeg: number, distanceKm: number, bearingDeg: number): [number, number] {
   const rad = Math.PI / 180;
-  const d = distanceKm / EARTH_RADIUS_KM;
+  const d = distanceKm / EARTH_MEAN_RADIUS_KM;
   const phi = latDeg * rad;
   const theta = bearingDeg * rad;
   const phi2 = Math.asin(Math.sin(phi) * Math.cos(d) + Math.cos(phi) * Math.sin(d) * Math.cos(theta));

@@ -6,7 +6,7 @@
  */
 import { createRequire } from 'node:module';
 import sharp, { type Sharp } from 'sharp';
-import { escapeXml } from '../map/xml.ts';
+import { escapeXml } from '../figures/xml.ts';
 
 export type RasterFormat = 'png' | 'webp' | 'jpg';
 export const RASTER_FORMATS: readonly RasterFormat[] = ['png', 'webp', 'jpg'];

@@ -9,7 +9,7 @@ import { XMLValidator } from 'fast-xml-parser';
 import ICAL from 'ical.js';
 import sharp from 'sharp';
 import { main } from '../../src/cli/main.ts';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import { sha256 } from '../../src/batch/written.ts';
 
 const BIN = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;

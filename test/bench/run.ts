@@ -6,23 +6,24 @@
  */
 import { NextGlobalSolarEclipse, NextLunarEclipse, SearchGlobalSolarEclipse, SearchLunarEclipse } from 'astronomy-engine';
 import { geoEqualEarth, geoPath } from 'd3-geo';
-import { findLunarEclipses, SUPPORTED_RANGE } from '../../src/eclipse/catalogue.ts';
-import { findSolarEclipses } from '../../src/eclipse/solar/catalogue.ts';
-import { solarEclipseRecord } from '../../src/eclipse/solar/record.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import { SUPPORTED_RANGE } from '../../src/eclipses/common/range.ts';
+import { findSolarEclipses } from '../../src/eclipses/solar/catalogue.ts';
+import { solarEclipseRecord } from '../../src/eclipses/solar/record.ts';
 import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
-import { loadBasemap, type BasemapDetail } from '../../src/map/basemap.ts';
-import { THEMES } from '../../src/map/theme.ts';
+import { loadBasemap, type BasemapDetail } from '../../src/sphere/world.ts';
+import { THEMES } from '../../src/figures/theme.ts';
 import { catalogueDocument } from '../../src/outputs/catalogueRecord.ts';
 import { renderMapFile, type MapRequest } from '../../src/outputs/mapFile.ts';
 import sharp from 'sharp';
-import { danjon } from '../../src/eclipse/conventions.ts';
-import { lunationIndexNear, mayHoldLunarEclipse } from '../../src/eclipse/lunations.ts';
+import { danjon } from '../../src/eclipses/lunar/conventions.ts';
+import { lunationIndexNear, mayHoldLunarEclipse } from '../../src/eclipses/common/lunations.ts';
 import { utDaysFromDate } from '../../src/ephemeris/time.ts';
-import { BASEMAP_THINNING_PX } from '../../src/map/scene.ts';
-import { thinnedProjection } from '../../src/map/thin.ts';
+import { BASEMAP_THINNING_PX } from '../../src/figures/map.ts';
+import { thinnedProjection } from '../../src/figures/thin.ts';
 import { rasterise } from '../../src/raster/raster.ts';
-import { stage, visibilityOf } from '../../src/visibility/visibility.ts';
+import { stage, visibilityOf } from '../../src/visibility/lunar/visibility.ts';
 
 const ROUNDS = 5;
 /** Maps take a fraction of a second: more rounds steady their median. */

@@ -101,7 +101,7 @@ test('every map gets its caption beside it (.txt) and in its PNG metadata; marks
   const xmp = (await sharp(png).metadata()).xmp!.toString('utf8');
   assert.match(xmp, /It cannot be seen from Africa and Europe/);
   const { markLabel } = await import('../../src/outputs/mapFile.ts');
-  const { eclipseOn } = await import('../map/support.ts');
+  const { eclipseOn } = await import('../figures/support.ts');
   assert.equal(markLabel(eclipseOn('2026-03-03'), { name: 'Denver', latDeg: 39.739, lonDeg: -104.985, tz: 'America/Denver' }), 'Denver · greatest 04:34 MST');
   assert.equal(markLabel(eclipseOn('2026-03-03'), { name: 'Cairo', latDeg: 30.06, lonDeg: 31.25, tz: 'Africa/Cairo' }), 'Cairo · not seen');
 });

@@ -7,7 +7,7 @@
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import { DEFAULT_STYLE } from '../../src/batch/style.ts';
-import { placeNotices } from '../../src/cli/choose.ts';
+import { placeNotices } from '../../src/settings/choose.ts';
 import { checkStyleSettings } from '../../src/cli/commands/batch.ts';
 import { main } from '../../src/cli/main.ts';
 import { InputError } from '../../src/errors.ts';

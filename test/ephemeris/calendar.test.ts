@@ -10,19 +10,19 @@ import { test } from 'node:test';
 import julian from 'astronomia/julian';
 import { contactSheet } from '../../src/batch/contactSheet.ts';
 import { MANIFEST_SCHEMA } from '../../src/batch/manifest.ts';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import type { LunarEclipse } from '../../src/eclipse/types.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { calendarFromJulianDay, GREGORIAN_REFORM_JD, julianDateBeforeReform, julianDateOfIsoDate, julianDayFromCalendar } from '../../src/ephemeris/calendar.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
-import { sceneTexts } from '../../src/map/scene.ts';
-import { THEMES } from '../../src/map/theme.ts';
+import { sceneTexts } from '../../src/figures/map.ts';
+import { THEMES } from '../../src/figures/theme.ts';
 import { eclipseCaption } from '../../src/outputs/caption.ts';
 import { catalogueCsv, catalogueJson, catalogueTable } from '../../src/outputs/catalogueFormats.ts';
 import { catalogueDocument, eclipseRecord } from '../../src/outputs/catalogueRecord.ts';
 import { visibilityGeoJson } from '../../src/outputs/geojson.ts';
 import { localCsv, localJson, localMarkdown, localReport, localTable } from '../../src/outputs/localFormats.ts';
 import { renderSkyFile } from '../../src/outputs/skyFile.ts';
-import { visibilityOf } from '../../src/visibility/visibility.ts';
+import { visibilityOf } from '../../src/visibility/lunar/visibility.ts';
 
 const near = (a: number, b: number, tolerance = 1e-6) => Math.abs(a - b) <= tolerance;
 const sameDate = (got: { year: number; month: number; day: number }, want: { year: number; month: number; day: number }, what: string) => {

@@ -6,7 +6,7 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { isoSeconds, utDaysFromDate } from '../../src/ephemeris/time.ts';
 import { localJson, localReport } from '../../src/outputs/localFormats.ts';

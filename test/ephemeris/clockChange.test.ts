@@ -15,20 +15,20 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import { CONTACT_ORDER } from '../../src/eclipse/contacts.ts';
-import type { LunarEclipse } from '../../src/eclipse/types.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import { CONTACT_ORDER } from '../../src/eclipses/lunar/contacts.ts';
+import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { dateFromDays, utDaysFromDate } from '../../src/ephemeris/time.ts';
-import { sceneTexts } from '../../src/map/scene.ts';
-import { localHourTicks } from '../../src/map/skyScene.ts';
-import { THEMES } from '../../src/map/theme.ts';
+import { sceneTexts } from '../../src/figures/map.ts';
+import { localHourTicks } from '../../src/figures/sky.ts';
+import { THEMES } from '../../src/figures/theme.ts';
 import { eclipseCaption } from '../../src/outputs/caption.ts';
 import { localReport, localTable } from '../../src/outputs/localFormats.ts';
 import { markLabel } from '../../src/outputs/mapFile.ts';
 import { renderSkyFile } from '../../src/outputs/skyFile.ts';
 import { findPlace } from '../../src/places/gazetteer.ts';
-import { visibilityOf } from '../../src/visibility/visibility.ts';
+import { visibilityOf } from '../../src/visibility/lunar/visibility.ts';
 
 const HOUR_MS = 3_600_000;
 const sundays = (year: number, month: number) => {

@@ -13,8 +13,8 @@ import { astroTimeOf, momentFromUT } from '../../src/ephemeris/time.ts';
 import { horizontal, refractionDeg, REFRACTION_FLOOR_DEG } from '../../src/ephemeris/topocentric.ts';
 import { localJson, type LocalReport } from '../../src/outputs/localFormats.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import { localCircumstances, localSummary } from '../../src/visibility/local.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import { localCircumstances, localSummary } from '../../src/local/lunar.ts';
 import { useOurDeltaTInAstronomyEngine } from '../visibility/support.ts';
 
 useOurDeltaTInAstronomyEngine();

@@ -13,7 +13,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import { test } from 'node:test';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import { planBatch, pictureLoad } from '../../src/batch/run.ts';
 import { validateStyle } from '../../src/batch/style.ts';
 import { workerCount, workerNeedBytes } from '../../src/batch/resources.ts';

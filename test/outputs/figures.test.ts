@@ -9,15 +9,15 @@ import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import { contactSheet } from '../../src/batch/contactSheet.ts';
 import { MANIFEST_SCHEMA } from '../../src/batch/manifest.ts';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import type { LunarEclipse } from '../../src/eclipse/types.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
-import { sceneTexts } from '../../src/map/scene.ts';
+import { sceneTexts } from '../../src/figures/map.ts';
 import { eclipseCaption } from '../../src/outputs/caption.ts';
 import { catalogueTable } from '../../src/outputs/catalogueFormats.ts';
 import { catalogueDocument, eclipseRecord } from '../../src/outputs/catalogueRecord.ts';
 import { localReport, localTable } from '../../src/outputs/localFormats.ts';
-import { visibilityOf } from '../../src/visibility/visibility.ts';
+import { visibilityOf } from '../../src/visibility/lunar/visibility.ts';
 
 /** Round half away from zero at `places` decimals, on the exact decimal expansion of the double (BigInt arithmetic). */
 function roundOnce(value: number, places: number): string {

@@ -9,13 +9,13 @@ import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import { geoArea, geoBounds, geoContains } from 'd3-geo';
 import type { Feature, Geometry } from 'geojson';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import type { LonLat } from '../../src/ephemeris/earth.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
-import { loadBasemap } from '../../src/map/basemap.ts';
+import { loadBasemap } from '../../src/sphere/world.ts';
 import { countryName, eclipseCaption } from '../../src/outputs/caption.ts';
-import { countrySampling, countryShares, MIN_SAMPLES_PER_COUNTRY, type CountryShare } from '../../src/visibility/countries.ts';
-import { visibilityEvaluator, visibilityOf, type ZoneName } from '../../src/visibility/visibility.ts';
+import { countrySampling, countryShares, MIN_SAMPLES_PER_COUNTRY, type CountryShare } from '../../src/visibility/lunar/countries.ts';
+import { visibilityEvaluator, visibilityOf, type ZoneName } from '../../src/visibility/lunar/visibility.ts';
 import { seededRandom } from './support.ts';
 
 const one = (date: string) => {

@@ -7,9 +7,9 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import { fieldLines, fieldStepMinutes } from '../../src/visibility/fieldLines.ts';
-import { visibilityEvaluator, visibilityOf } from '../../src/visibility/visibility.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import { fieldLines, fieldStepMinutes } from '../../src/visibility/lunar/fieldLines.ts';
+import { visibilityEvaluator, visibilityOf } from '../../src/visibility/lunar/visibility.ts';
 
 for (const date of ['2026-03-03', '2026-08-28', '2027-02-20']) {
   test(`${date}: points on each field line see the line's minutes, within a minute`, () => {

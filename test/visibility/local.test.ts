@@ -10,12 +10,12 @@ import parallax from 'astronomia/parallax';
 import refraction from 'astronomia/refraction';
 import sidereal from 'astronomia/sidereal';
 import ICAL from 'ical.js';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { astroTimeOf, momentFromUT, utDaysFromDate, type Moment } from '../../src/ephemeris/time.ts';
 import { localIcs, localIso, type LocalReport } from '../../src/outputs/localFormats.ts';
-import { localCircumstances, localSummary, moonRisesAndSets } from '../../src/visibility/local.ts';
-import { stage, visibilityEvaluator, visibilityOf, zoneFromMargins } from '../../src/visibility/visibility.ts';
+import { localCircumstances, localSummary, moonRisesAndSets } from '../../src/local/lunar.ts';
+import { stage, visibilityEvaluator, visibilityOf, zoneFromMargins } from '../../src/visibility/lunar/visibility.ts';
 import { distanceToEdgeDeg, randomPlaces, useOurDeltaTInAstronomyEngine } from './support.ts';
 
 useOurDeltaTInAstronomyEngine();

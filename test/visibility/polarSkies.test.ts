@@ -12,12 +12,12 @@ import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import fc from 'fast-check';
 import ICAL from 'ical.js';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import type { LunarEclipse } from '../../src/eclipse/types.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { momentFromUT } from '../../src/ephemeris/time.ts';
 import { localIcs, type LocalReport } from '../../src/outputs/localFormats.ts';
-import { localCircumstances, localSummary, localView, type Coverage, type LocalCircumstances } from '../../src/visibility/local.ts';
+import { localCircumstances, localSummary, localView, type Coverage, type LocalCircumstances } from '../../src/local/lunar.ts';
 import { moonUpTopocentric, useOurDeltaTInAstronomyEngine } from './support.ts';
 
 useOurDeltaTInAstronomyEngine();

@@ -3,8 +3,8 @@ import { Body, Equator, Horizon, Observer, SetDeltaTFunction } from 'astronomy-e
 import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
 import type { LonLat } from '../../src/ephemeris/earth.ts';
 import { astroTimeOf, decimalYearFromDays, type Moment } from '../../src/ephemeris/time.ts';
-import type { MoonUpCap } from '../../src/visibility/moonUp.ts';
-import { MOON_EARTH_RADIUS_RATIO } from '../../src/eclipse/track.ts';
+import type { MoonUpCap } from '../../src/visibility/lunar/moonUp.ts';
+import { MOON_EARTH_RADIUS_RATIO } from '../../src/eclipses/lunar/track.ts';
 
 /** astronomy-engine's internal time steps must share our ΔT for these checks. */
 export function useOurDeltaTInAstronomyEngine(): void {

@@ -7,12 +7,12 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { findLunarEclipses } from '../../src/eclipse/catalogue.ts';
-import type { LunarEclipse } from '../../src/eclipse/types.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { momentFromUT } from '../../src/ephemeris/time.ts';
 import { visibilityGeoJson } from '../../src/outputs/geojson.ts';
-import { regionContains, ringArea } from '../../src/visibility/regions.ts';
-import { fieldSpanOf, stage, visibilityEvaluator, visibilityOf, zoneFromMargins, type ZoneName } from '../../src/visibility/visibility.ts';
+import { regionContains, ringArea } from '../../src/sphere/regions.ts';
+import { fieldSpanOf, stage, visibilityEvaluator, visibilityOf, zoneFromMargins, type ZoneName } from '../../src/visibility/lunar/visibility.ts';
 import { distanceToEdgeDeg, moonUpTopocentric, randomPlaces, useOurDeltaTInAstronomyEngine } from './support.ts';
 
 useOurDeltaTInAstronomyEngine();

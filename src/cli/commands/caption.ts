@@ -1,7 +1,7 @@
 /** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
 import type { Command } from 'commander';
 import { civilClock } from '../../ephemeris/civilTime.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
 import type { CommandContext } from '../context.ts';
 import { WHEN_EXPECTED } from '../options.ts';
 
@@ -28,7 +28,7 @@ export function registerCaption(program: Command, context: CommandContext): void
       // The geometry (world data, the visibility model) loads when a caption is written.
       const [{ eclipseCaption, captionText }, { visibilityOf }, { localReport }] = await Promise.all([
         import('../../outputs/caption.ts'),
-        import('../../visibility/visibility.ts'),
+        import('../../visibility/lunar/visibility.ts'),
         import('../../outputs/localFormats.ts'),
       ]);
       const extra = chosen ? localReport(eclipse, chosen).summary : undefined;

@@ -1,8 +1,8 @@
 /** `umbracast list`: the catalogue for a range, as a table, json or csv. */
 import type { Command } from 'commander';
-import { findLunarEclipses } from '../../eclipse/catalogue.ts';
-import { SHADOW_CONVENTIONS } from '../../eclipse/conventions.ts';
-import { ECLIPSE_KINDS } from '../../eclipse/types.ts';
+import { findLunarEclipses } from '../../eclipses/lunar/catalogue.ts';
+import { SHADOW_CONVENTIONS } from '../../eclipses/lunar/conventions.ts';
+import { ECLIPSE_KINDS } from '../../eclipses/lunar/types.ts';
 import { fixedDeltaTModel, standardDeltaTModel } from '../../ephemeris/deltaT.ts';
 import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';

@@ -1,9 +1,9 @@
 /** `umbracast local [WHEN] --place NAME | --at LAT,LON`: what one town sees, in its own time. */
 import type { Command } from 'commander';
-import type { LunarEclipse } from '../../eclipse/types.ts';
+import type { LunarEclipse } from '../../eclipses/lunar/types.ts';
 import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localReport, localTable } from '../../outputs/localFormats.ts';
 import type { CommandContext } from '../context.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 

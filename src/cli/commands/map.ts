@@ -3,18 +3,18 @@ import { mkdirSync } from 'node:fs';
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../errors.ts';
-import { BORDER_STYLES } from '../../map/basemap.ts';
-import { PROJECTION_NAMES, type View } from '../../map/projection.ts';
-import { THEME_NAMES } from '../../map/theme.ts';
-import { MARK_CLOCKS } from '../../map/markClock.ts';
-import { AREA_NAMES_CHOICES } from '../../map/areaNames.ts';
+import { BORDER_STYLES } from '../../sphere/world.ts';
+import { PROJECTION_NAMES, type View } from '../../figures/projection.ts';
+import { THEME_NAMES } from '../../figures/theme.ts';
+import { MARK_CLOCKS } from '../../figures/markClock.ts';
+import { AREA_NAMES_CHOICES } from '../../figures/areaNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
 import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
-import { chooseEclipse, placeNotices, withEclipseOptions } from '../choose.ts';
-import { DEFAULT_SIZE, mapSettings, optionsFromStyle, type MapOptions } from '../mapSettings.ts';
+import { chooseEclipse, placeNotices, withEclipseOptions } from '../../settings/choose.ts';
+import { DEFAULT_SIZE, mapSettings, optionsFromStyle, type MapOptions } from '../../settings/mapSettings.ts';
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
 export function withSizeOptions(command: Command, defaultSize: string): Command {

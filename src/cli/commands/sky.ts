@@ -1,15 +1,15 @@
 /** `umbracast sky [WHEN] --place NAME`: the view from one place — the Moon's path through the night, the phases, the twilight. */
 import type { Command } from 'commander';
 import { placeSlug } from '../../places/gazetteer.ts';
-import { THEME_NAMES, THEMES } from '../../map/theme.ts';
+import { THEME_NAMES, THEMES } from '../../figures/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
 import { SKY_FORMATS } from '../../outputs/formatNames.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../choose.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoice, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 import { captionPathFor, parseOutput, withSizeOptions } from './map.ts';
-import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../mapSettings.ts';
+import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../../settings/mapSettings.ts';
 
 interface SkyOptions extends SizeOptions, PlaceChoice, EclipseChoice {
   theme: string;

@@ -1,0 +1,125 @@
+/**
+ * Map themes. Zone fills step in lightness (not only in hue), so that the
+ * zones stay apart in greyscale print and for readers with a colour-vision
+ * deficiency; pinned by a simulation in test/figures/theme.test.ts.
+ */
+import type { SkyClass } from '../local/lunar.ts';
+import type { ZoneName } from '../visibility/lunar/visibility.ts';
+
+export type ThemeName = 'light' | 'dark' | 'print';
+export const THEME_NAMES: readonly ThemeName[] = ['light', 'dark', 'print'];
+
+export interface Theme {
+  readonly name: ThemeName;
+  /** Page behind everything. */
+  readonly paper: string;
+  readonly zones: Readonly<Record<ZoneName, string>>;
+  /**
+   * Land is drawn over the zone fills in this colour at `landOpacity`: a
+   * tint that moves every zone the same way in lightness (darker in the
+   * light themes, lighter in the dark one), so that land and sea stay apart
+   * inside every zone and the zones stay apart on land and at sea.
+   */
+  readonly land: string;
+  readonly landOpacity: number;
+  readonly border: string;
+  /** Coastlines are drawn above the graticule, and stand out more than it in every zone (test/figures/theme.test.ts). */
+  readonly coastline: string;
+  readonly coastlineOpacity: number;
+  readonly graticule: string;
+  readonly graticuleOpacity: number;
+  /** Moon-up edges at the start and end of the zone-defining phase. */
+  readonly edgeStrong: string;
+  /** Moon-up edges at the other stages. */
+  readonly edgeLight: string;
+  /** Lines of the continuous field. */
+  readonly field: string;
+  readonly marker: string;
+  readonly text: string;
+  readonly textMuted: string;
+  /** Halo behind map labels. */
+  readonly halo: string;
+  readonly haloOpacity: number;
+  /** The "view from here" figure: the sky's brightness behind the Moon's path. */
+  readonly sky: Readonly<Record<SkyClass, string>>;
+  readonly ground: string;
+  /** Drawn under the Moon's path on every sky: it shows where the path's own colour would not. */
+  readonly pathCasing: string;
+  /** The Moon's path, by phase. */
+  readonly path: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
+}
+
+export const THEMES: Readonly<Record<ThemeName, Theme>> = {
+  light: {
+    name: 'light',
+    paper: '#faf8f3',
+    zones: { 'sees-all': '#2f3f7a', 'sets-during': '#6d78b0', 'rises-during': '#a9c4d6', 'sees-none': '#eef0f2' },
+    land: '#000000',
+    landOpacity: 0.25,
+    border: '#ffffff',
+    coastline: '#7d8696',
+    coastlineOpacity: 0.85,
+    graticule: '#8a93a3',
+    graticuleOpacity: 0.3,
+    edgeStrong: '#10152b',
+    edgeLight: '#3a4259',
+    field: '#b8581c',
+    marker: '#f0b429',
+    text: '#161a26',
+    textMuted: '#4b5263',
+    halo: '#faf8f3',
+    haloOpacity: 0.85,
+    sky: { day: '#e7eef5', civil: '#c3d0e2', nautical: '#8c9dbd', astronomical: '#56658c', night: '#2b3457' },
+    ground: '#d9d3c4',
+    pathCasing: '#161a26',
+    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
+  },
+  dark: {
+    name: 'dark',
+    paper: '#0d111b',
+    zones: { 'sees-all': '#cdb783', 'sets-during': '#9080bd', 'rises-during': '#43677e', 'sees-none': '#1b2231' },
+    land: '#ffffff',
+    landOpacity: 0.24,
+    border: '#0d111b',
+    coastline: '#e4e8f0',
+    coastlineOpacity: 0.8,
+    graticule: '#59627a',
+    graticuleOpacity: 0.2,
+    edgeStrong: '#f5f1e6',
+    edgeLight: '#c9cedb',
+    field: '#ff9a5c',
+    marker: '#ffd166',
+    text: '#f1f3f8',
+    textMuted: '#b4bccb',
+    halo: '#0d111b',
+    haloOpacity: 0.8,
+    sky: { day: '#3b4a66', civil: '#2c3852', nautical: '#1f2840', astronomical: '#161d30', night: '#0d111b' },
+    ground: '#252a33',
+    pathCasing: '#05070c',
+    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
+  },
+  print: {
+    name: 'print',
+    paper: '#ffffff',
+    zones: { 'sees-all': '#4a4a4a', 'sets-during': '#8c8c8c', 'rises-during': '#bdbdbd', 'sees-none': '#f0f0f0' },
+    land: '#000000',
+    landOpacity: 0.22,
+    border: '#ffffff',
+    coastline: '#000000',
+    coastlineOpacity: 0.8,
+    graticule: '#777777',
+    graticuleOpacity: 0.3,
+    edgeStrong: '#000000',
+    edgeLight: '#222222',
+    field: '#000000',
+    marker: '#000000',
+    text: '#000000',
+    textMuted: '#333333',
+    halo: '#ffffff',
+    haloOpacity: 0.85,
+    sky: { day: '#f4f4f4', civil: '#dcdcdc', nautical: '#bdbdbd', astronomical: '#9a9a9a', night: '#7a7a7a' },
+    ground: '#e6e6e6',
+    pathCasing: '#000000',
+    path: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
+  },
+};

@@ -113,6 +113,7 @@ function describeEclipse(track: ShadowTrack, greatestTT: number, convention: Sha
   };
 
   return {
+    body: 'lunar',
     id: isoSeconds(greatest.utDays).slice(0, 10),
     kind,
     convention: convention.name,

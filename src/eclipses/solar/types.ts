@@ -1,7 +1,6 @@
 /** Solar eclipses as plain data: what the catalogue, the local circumstances and the curves hand on. */
-import type { DeltaT } from '../../ephemeris/deltaT.ts';
+import type { EclipseCore } from '../common/record.ts';
 import type { LonLat } from '../../ephemeris/earth.ts';
-import type { Moment } from '../../ephemeris/time.ts';
 import type { BesselianFit } from './besselian.ts';
 
 /** Kind of the eclipse as a whole. Non-central total and annular eclipses are `total`/`annular` with `central: false`. */
@@ -33,22 +32,11 @@ export interface SolarDurations {
 }
 
 /** One solar eclipse, as computed under one ΔT model. */
-export interface SolarEclipse {
-  readonly body: 'solar';
-  /** UTC date of greatest eclipse, YYYY-MM-DD. */
-  readonly id: string;
-  readonly kind: SolarEclipseKind;
+export interface SolarEclipse extends EclipseCore<'solar', SolarEclipseKind, SolarContactName> {
   /** Whether the shadow axis meets the Earth. */
   readonly central: boolean;
-  /** Instant of the shadow axis's least distance from the Earth's centre. */
-  readonly greatest: Moment;
-  /** ΔT used for every UT instant of this eclipse (its value at greatest). */
-  readonly deltaT: DeltaT;
-  /** That least distance in Earth equatorial radii, + when the axis passes north of the Earth's centre. */
-  readonly gamma: number;
   /** Magnitude at the greatest point at greatest eclipse (the fraction of the Sun's diameter covered). */
   readonly magnitude: number;
-  readonly saros: number;
   /** Where the axis meets the Earth at greatest; for non-central eclipses, the point of the Earth's limb nearest the axis. */
   readonly greatestPoint: LonLat;
   /** The Sun's geometric altitude at the greatest point, degrees (no refraction). */
@@ -56,7 +44,6 @@ export interface SolarEclipse {
   /** Width of the total/annular path at greatest, km (central eclipses, when both limits lie on the Earth). */
   readonly pathWidthKm?: number;
   readonly durations: SolarDurations;
-  readonly contacts: Readonly<Partial<Record<SolarContactName, Moment>>>;
   readonly moonRadii: MoonRadii;
   /** The Besselian elements the eclipse was computed from: local circumstances and curves start here. */
   readonly elements: BesselianFit;

@@ -9,6 +9,7 @@
 import { InputError } from '../errors.ts';
 import { julianDateOfUtcDay } from './calendar.ts';
 import { dayMark, timeRange } from './dayMark.ts';
+import { narrowBracket } from './roots.ts';
 import { dateFromDays } from './time.ts';
 
 export interface CivilClock {
@@ -131,13 +132,8 @@ export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
       const b = fromUtDays + ((toUtDays - fromUtDays) * k) / steps;
       const offsetB = offsetSeconds(b);
       if (offsetB !== offsetA) {
-        let lo = a;
-        let hi = b;
-        while (hi - lo > SECOND_DAYS / 2) {
-          const mid = (lo + hi) / 2;
-          if (offsetSeconds(mid) === offsetA) lo = mid;
-          else hi = mid;
-        }
+        const before = offsetA;
+        const { inside: lo, outside: hi } = narrowBracket(a, b, (t) => offsetSeconds(t) === before, SECOND_DAYS / 2);
         const at = Math.round(hi / SECOND_DAYS) * SECOND_DAYS;
         changes.push({ utDays: at, before: zoneLabel(lo), after: zoneLabel(at) });
       }

@@ -2,7 +2,8 @@
  * The Earth's rotation: sidereal time and the point beneath a body.
  * Uses OUR UT (from the ΔT model in use), never astronomy-engine's global ΔT.
  */
-import { e_tilt, Rotation_EQJ_EQD, RotateVector, Vector } from 'astronomy-engine';
+import { e_tilt } from 'astronomy-engine';
+import { toEquatorOfDate } from './frames.ts';
 import { astroTimeOf, type Moment } from './time.ts';
 import type { Vec3 } from './vector.ts';
 
@@ -38,9 +39,8 @@ export function greenwichApparentSiderealDeg(moment: Moment): number {
  * (Meeus, Astronomical Algorithms, ch. 12–13). `positionEQJ` is geocentric, any length unit, EQJ.
  */
 export function subBodyPoint(positionEQJ: Vec3, moment: Moment): LonLat {
-  const time = astroTimeOf(moment);
-  const ofDate = RotateVector(Rotation_EQJ_EQD(time), new Vector(positionEQJ[0], positionEQJ[1], positionEQJ[2], time));
-  const raDeg = (Math.atan2(ofDate.y, ofDate.x) * 180) / Math.PI;
-  const decDeg = (Math.atan2(ofDate.z, Math.hypot(ofDate.x, ofDate.y)) * 180) / Math.PI;
+  const [x, y, z] = toEquatorOfDate(positionEQJ, astroTimeOf(moment));
+  const raDeg = (Math.atan2(y, x) * 180) / Math.PI;
+  const decDeg = (Math.atan2(z, Math.hypot(x, y)) * 180) / Math.PI;
   return [wrapLongitudeDeg(raDeg - greenwichApparentSiderealDeg(moment)), decDeg];
 }

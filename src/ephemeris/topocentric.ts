@@ -11,8 +11,8 @@
  * one, as almanacs tabulate bodies below the horizon. The apparent altitude
  * therefore steps from about −0.35° to −1° there.
  */
-import { RotateVector, Rotation_EQJ_EQD, Vector } from 'astronomy-engine';
 import { greenwichApparentSiderealDeg } from './earth.ts';
+import { toEquatorOfDate } from './frames.ts';
 import { astroTimeOf, type Moment } from './time.ts';
 import type { Vec3 } from './vector.ts';
 import { EARTH_ECCENTRICITY_SQUARED, EARTH_EQUATORIAL_RADIUS_KM, EARTH_FLATTENING } from './constants.ts';
@@ -60,12 +60,11 @@ export function observerPositionKm({ latDeg, lonDeg, heightKm = 0 }: Observer): 
 
 /** Geocentric EQJ position (km) → Earth-fixed (km), true equator and equinox of date turned by GAST. */
 export function earthFixedKm(positionEQJ: Vec3, moment: Moment): Vec3 {
-  const time = astroTimeOf(moment);
-  const ofDate = RotateVector(Rotation_EQJ_EQD(time), new Vector(positionEQJ[0], positionEQJ[1], positionEQJ[2], time));
+  const [x, y, z] = toEquatorOfDate(positionEQJ, astroTimeOf(moment));
   const theta = greenwichApparentSiderealDeg(moment) * DEG;
   const c = Math.cos(theta);
   const s = Math.sin(theta);
-  return [c * ofDate.x + s * ofDate.y, -s * ofDate.x + c * ofDate.y, ofDate.z];
+  return [c * x + s * y, -s * x + c * y, z];
 }
 
 export function horizontal(positionEQJKm: Vec3, moment: Moment, observer: Observer): Horizontal {

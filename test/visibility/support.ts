@@ -4,7 +4,7 @@ import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
 import type { LonLat } from '../../src/ephemeris/earth.ts';
 import { astroTimeOf, decimalYearFromDays, type Moment } from '../../src/ephemeris/time.ts';
 import type { MoonUpCap } from '../../src/visibility/lunar/moonUp.ts';
-import { MOON_EARTH_RADIUS_RATIO } from '../../src/eclipses/lunar/track.ts';
+import { MOON_RADIUS_EARTH_RADII } from '../../src/ephemeris/constants.ts';
 
 /** astronomy-engine's internal time steps must share our ΔT for these checks. */
 export function useOurDeltaTInAstronomyEngine(): void {
@@ -40,7 +40,7 @@ export function moonUpTopocentric(place: LonLat, moment: Moment): { up: boolean;
   const observer = new Observer(place[1], place[0], 0);
   const equ = Equator(Body.Moon, time, observer, true, true);
   const altitudeDeg = Horizon(time, observer, equ.ra, equ.dec, 'normal').altitude;
-  const semiDiameterDeg = (Math.asin((MOON_EARTH_RADIUS_RATIO * 6378.137) / (equ.dist * 1.495978707e8)) * 180) / Math.PI;
+  const semiDiameterDeg = (Math.asin((MOON_RADIUS_EARTH_RADII * 6378.137) / (equ.dist * 1.495978707e8)) * 180) / Math.PI;
   return { up: altitudeDeg + semiDiameterDeg > 0, altitudeDeg, limbAltitudeDeg: altitudeDeg + semiDiameterDeg };
 }
 

@@ -4,6 +4,7 @@
  * before any ephemeris call is spent on them.
  */
 import type { ShadowConvention } from '../lunar/conventions.ts';
+import { EARTH_EQUATORIAL_RADIUS_KM, MOON_RADIUS_EARTH_RADII, SUN_RADIUS_KM } from '../../ephemeris/constants.ts';
 
 /** Mean synodic month, days (Meeus ch. 49). */
 export const SYNODIC_MONTH_DAYS = 29.530588861;
@@ -88,15 +89,14 @@ export function meeusLunarGamma(k: number): number {
 export const GAMMA_SERIES_MARGIN = 0.05;
 
 const LIMIT_EXTREMES = {
-  moonParallaxRad: Math.asin(6378.137 / 406_800),
+  moonParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / 406_800),
   sunParallaxRad: ((8.794 / 0.9825) / 3600) * DEG,
-  sunSemiDiameterRad: Math.asin(696_000 / (0.9825 * 149_597_870.7)),
+  sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / (0.9825 * 149_597_870.7)),
 } as const;
-const MOON_RADIUS_IN_EARTH_RADII = 0.2725076;
 
 /** The largest |γ| (Earth radii) at which a convention's penumbra can still touch the Moon, years 1000–3000. */
 export function largestPenumbralGamma(convention: ShadowConvention): number {
-  return convention.radii(LIMIT_EXTREMES).penumbraRad / LIMIT_EXTREMES.moonParallaxRad + MOON_RADIUS_IN_EARTH_RADII;
+  return convention.radii(LIMIT_EXTREMES).penumbraRad / LIMIT_EXTREMES.moonParallaxRad + MOON_RADIUS_EARTH_RADII;
 }
 
 /** False only where no eclipse of the convention is possible at full moon k + 0.5. */

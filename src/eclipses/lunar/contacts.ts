@@ -3,6 +3,7 @@
  * Astronomical Almanac, 3rd ed., ch. 11).
  * Each contact is its own root: nothing assumes symmetry about greatest.
  */
+import { bisectSignChange } from '../../ephemeris/roots.ts';
 import type { ShadowConvention } from './conventions.ts';
 import type { ShadowState, ShadowTrack } from './track.ts';
 
@@ -64,20 +65,9 @@ export function findCrossingTT(
   fromTTDays: number,
   toTTDays: number,
 ): number | undefined {
-  let a = fromTTDays;
-  let b = toTTDays;
-  let fa = limit(track.at(a), convention);
-  const fb = limit(track.at(b), convention);
+  const at = (ttDays: number) => limit(track.at(ttDays), convention);
+  const fa = at(fromTTDays);
+  const fb = at(toTTDays);
   if (Math.sign(fa) === Math.sign(fb)) return undefined;
-  while (b - a > TIME_TOLERANCE_DAYS) {
-    const mid = (a + b) / 2;
-    const fm = limit(track.at(mid), convention);
-    if (Math.sign(fm) === Math.sign(fa)) {
-      a = mid;
-      fa = fm;
-    } else {
-      b = mid;
-    }
-  }
-  return (a + b) / 2;
+  return bisectSignChange(at, fromTTDays, toTTDays, fa, TIME_TOLERANCE_DAYS);
 }

@@ -7,10 +7,7 @@
 import { chebyshevNodes, evaluateChebyshev, fitChebyshev, type ChebyshevSeries } from '../common/chebyshev.ts';
 import { ephemerisTime, moonPositionKm, sunPositionKm } from '../../ephemeris/bodies.ts';
 import { angleBetween, dot, norm, scale, unit, type Vec3 } from '../../ephemeris/vector.ts';
-import { EARTH_EQUATORIAL_RADIUS_KM, SUN_RADIUS_KM } from '../../ephemeris/constants.ts';
-
-/** Moon radius / Earth equatorial radius (IAU). */
-export const MOON_EARTH_RADIUS_RATIO = 0.2725076;
+import { EARTH_EQUATORIAL_RADIUS_KM, MOON_RADIUS_EARTH_RADII, SUN_RADIUS_KM } from '../../ephemeris/constants.ts';
 
 /** Geometry of the Moon against the shadow at one TT instant. Angles in radians, seen from the Earth's centre. */
 export interface ShadowState {
@@ -52,7 +49,7 @@ export function shadowStateFrom(ttDays: number, moonKm: Vec3, sunKm: Vec3): Shad
     separationRad,
     northSign: northComponent >= 0 ? 1 : -1,
     moonParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / moonDistanceKm),
-    moonSemiDiameterRad: Math.asin((MOON_EARTH_RADIUS_RATIO * EARTH_EQUATORIAL_RADIUS_KM) / moonDistanceKm),
+    moonSemiDiameterRad: Math.asin((MOON_RADIUS_EARTH_RADII * EARTH_EQUATORIAL_RADIUS_KM) / moonDistanceKm),
     sunParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / sunDistanceKm),
     sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / sunDistanceKm),
     moonPositionKm: moonKm,

@@ -17,10 +17,11 @@
  * (ephemeris/bodies.ts), our ΔT, our GAST (ephemeris/earth.ts). Each element
  * is a Chebyshev fit over a window of hours; rates come from the series.
  */
-import { Rotation_EQJ_EQD, RotateVector, Vector } from 'astronomy-engine';
+import type { RotationMatrix } from 'astronomy-engine';
 import { chebyshevNodes, evaluateChebyshev, fitChebyshev, type ChebyshevSeries } from '../common/chebyshev.ts';
 import { ephemerisTime, moonPositionKm, sunPositionKm } from '../../ephemeris/bodies.ts';
 import { greenwichApparentSiderealDeg } from '../../ephemeris/earth.ts';
+import { equatorOfDateRotation, toEquatorOfDate } from '../../ephemeris/frames.ts';
 import { momentFromTT } from '../../ephemeris/time.ts';
 import type { Vec3 } from '../../ephemeris/vector.ts';
 import { EARTH_EQUATORIAL_RADIUS_KM, K_PENUMBRA, K_UMBRA, SUN_RADIUS_EARTH_RADII } from './constants.ts';
@@ -80,14 +81,14 @@ export interface BesselianFit {
 /** Nine nodes over ten hours reproduce the direct elements to better than 1e-9 Earth radii (6 mm) and 1e-9 rad (pinned in test/eclipses/solarElements.test.ts). */
 export const BESSELIAN_NODE_COUNT = 9;
 
-function ofDate(rotation: ReturnType<typeof Rotation_EQJ_EQD>, positionKm: Vec3, time: ReturnType<typeof ephemerisTime>): Vec3 {
-  const v = RotateVector(rotation, new Vector(positionKm[0], positionKm[1], positionKm[2], time));
-  return [v.x / EARTH_EQUATORIAL_RADIUS_KM, v.y / EARTH_EQUATORIAL_RADIUS_KM, v.z / EARTH_EQUATORIAL_RADIUS_KM];
+function ofDate(rotation: RotationMatrix, positionKm: Vec3, time: ReturnType<typeof ephemerisTime>): Vec3 {
+  const [x, y, z] = toEquatorOfDate(positionKm, time, rotation);
+  return [x / EARTH_EQUATORIAL_RADIUS_KM, y / EARTH_EQUATORIAL_RADIUS_KM, z / EARTH_EQUATORIAL_RADIUS_KM];
 }
 
 function axisGeometry(ttDays: number): AxisGeometry {
   const time = ephemerisTime(ttDays);
-  const rotation = Rotation_EQJ_EQD(time);
+  const rotation = equatorOfDateRotation(time);
   const moon = ofDate(rotation, moonPositionKm(time), time);
   const sun = ofDate(rotation, sunPositionKm(time), time);
   const g: Vec3 = [sun[0] - moon[0], sun[1] - moon[1], sun[2] - moon[2]];

@@ -2,7 +2,7 @@
  * The constants of the solar-eclipse geometry, named once and stated in
  * every output that depends on them.
  */
-import { EARTH_EQUATORIAL_RADIUS_KM, SUN_RADIUS_KM } from '../../ephemeris/constants.ts';
+import { EARTH_EQUATORIAL_RADIUS_KM, MOON_RADIUS_EARTH_RADII, SUN_RADIUS_KM } from '../../ephemeris/constants.ts';
 
 export { EARTH_EQUATORIAL_RADIUS_KM, SUN_RADIUS_KM };
 
@@ -10,7 +10,7 @@ export { EARTH_EQUATORIAL_RADIUS_KM, SUN_RADIUS_KM };
  * Moon radius / Earth equatorial radius for the penumbra: partial-eclipse
  * limits, C1/C4, magnitudes (IAU value; common practice).
  */
-export const K_PENUMBRA = 0.2725076;
+export const K_PENUMBRA = MOON_RADIUS_EARTH_RADII;
 /**
  * Moon radius / Earth equatorial radius for every umbral and antumbral
  * quantity, total and annular alike (common practice: a mean radius that
@@ -21,10 +21,6 @@ export const K_UMBRA = 0.272281;
 
 /** Sun radius in Earth equatorial radii. */
 export const SUN_RADIUS_EARTH_RADII = SUN_RADIUS_KM / EARTH_EQUATORIAL_RADIUS_KM;
-
-/** WGS 84 flattening and first eccentricity squared (NIMA TR8350.2). */
-export const WGS84_FLATTENING = 1 / 298.257223563;
-export const WGS84_E2 = WGS84_FLATTENING * (2 - WGS84_FLATTENING);
 
 /** Sunrise and sunset: the Sun's centre at geometric altitude −0°50′ (upper limb on the refracted horizon; Meeus, Astronomical Algorithms, ch. 15). */
 export const SUNRISE_ALTITUDE_DEG = -50 / 60;

@@ -11,6 +11,7 @@
  * cut at ±180° with a point on each side of the cut.
  */
 import type { LonLat } from '../../ephemeris/earth.ts';
+import { narrowBracket } from '../../ephemeris/roots.ts';
 import { momentFromTT, type Moment } from '../../ephemeris/time.ts';
 import { besselianAt, type BesselianElements } from './besselian.ts';
 import { magnitudeRadius, obscurationRadius, outlinePointsAt, penumbraRadius, umbraRadius, type OutlineRadius } from './outline.ts';
@@ -97,19 +98,12 @@ export function sampleCurve(pointAt: (ttDays: number) => LonLat | undefined, fro
     if (i > 0 && (previous === undefined) !== (here === undefined)) {
       // One of the two is on the Earth: bisect between it and the other for the instant the curve meets the limb.
       const inside = (previous ?? here)!;
-      let onTT = inside.ttDays;
-      let offTT = previous ? times[i]! : times[i - 1]!;
       let edge: Sample = inside;
-      while (Math.abs(offTT - onTT) > BOUNDARY_TOLERANCE_DAYS) {
-        const mid = (onTT + offTT) / 2;
-        const s = at(mid);
-        if (s) {
-          onTT = mid;
-          edge = s;
-        } else {
-          offTT = mid;
-        }
-      }
+      const { inside: onTT } = narrowBracket(inside.ttDays, previous ? times[i]! : times[i - 1]!, (t) => {
+        const s = at(t);
+        if (s) edge = s;
+        return s !== undefined;
+      }, BOUNDARY_TOLERANCE_DAYS);
       const crowd = LIMB_FRACTIONS.map((f) => at(onTT + (inside.ttDays - onTT) * f)).filter((s): s is Sample => s !== undefined);
       if (previous) out.push(...crowd.reverse(), edge, undefined);
       else out.push(undefined, edge, ...crowd, here);

@@ -9,6 +9,7 @@
  */
 import type { LonLat } from '../../ephemeris/earth.ts';
 import type { BesselianElements } from './besselian.ts';
+import { narrowBracket } from '../../ephemeris/roots.ts';
 import { discOverlapFraction } from './localCore.ts';
 import { geocentricPlace, planeCoordinates, surfacePoint } from './surface.ts';
 
@@ -95,20 +96,13 @@ function candidateAt(e: BesselianElements, radius: OutlineRadius, q: number): Ca
 }
 
 function bisect<T>(lo: number, hi: number, keepLo: (q: number) => { keep: boolean; value?: T }): { q: number; value?: T } {
-  let a = lo;
-  let b = hi;
   let value: T | undefined;
-  while (Math.abs(b - a) > ANGLE_TOLERANCE_RAD) {
-    const mid = (a + b) / 2;
-    const test = keepLo(mid);
-    if (test.keep) {
-      a = mid;
-      value = test.value ?? value;
-    } else {
-      b = mid;
-    }
-  }
-  return { q: a, ...(value !== undefined ? { value } : {}) };
+  const { inside } = narrowBracket(lo, hi, (q) => {
+    const test = keepLo(q);
+    if (test.keep) value = test.value ?? value;
+    return test.keep;
+  }, ANGLE_TOLERANCE_RAD);
+  return { q: inside, ...(value !== undefined ? { value } : {}) };
 }
 
 /**

@@ -14,10 +14,10 @@
 import type { LonLat } from '../../ephemeris/earth.ts';
 import { wrapLongitudeDeg } from '../../ephemeris/earth.ts';
 import type { BesselianElements } from './besselian.ts';
-import { WGS84_E2 } from './constants.ts';
+import { EARTH_ECCENTRICITY_SQUARED } from '../../ephemeris/constants.ts';
 
 const DEG = Math.PI / 180;
-const SQRT_1_E2 = Math.sqrt(1 - WGS84_E2);
+const SQRT_1_E2 = Math.sqrt(1 - EARTH_ECCENTRICITY_SQUARED);
 
 /** ρ sin φ′ and ρ cos φ′ of a sea-level place (Earth equatorial radii), from its geodetic latitude. */
 export interface GeocentricPlace {
@@ -29,8 +29,8 @@ export interface GeocentricPlace {
 
 export function geocentricPlace([lonDeg, latDeg]: LonLat): GeocentricPlace {
   const phi = latDeg * DEG;
-  const c = 1 / Math.sqrt(1 - WGS84_E2 * Math.sin(phi) ** 2);
-  return { lonDeg, latDeg, rhoSinPhi: (1 - WGS84_E2) * c * Math.sin(phi), rhoCosPhi: c * Math.cos(phi) };
+  const c = 1 / Math.sqrt(1 - EARTH_ECCENTRICITY_SQUARED * Math.sin(phi) ** 2);
+  return { lonDeg, latDeg, rhoSinPhi: (1 - EARTH_ECCENTRICITY_SQUARED) * c * Math.sin(phi), rhoCosPhi: c * Math.cos(phi) };
 }
 
 /** A place on the fundamental plane at one instant, with its rates per day. */
@@ -63,7 +63,7 @@ export function planeCoordinates(e: BesselianElements, place: GeocentricPlace): 
 
 /** ρ1 = √(1 − e² cos² d): the Earth's outline on the plane has semi-axes 1 (ξ) and ρ1 (η). */
 export function rho1(dRad: number): number {
-  return Math.sqrt(1 - WGS84_E2 * Math.cos(dRad) ** 2);
+  return Math.sqrt(1 - EARTH_ECCENTRICITY_SQUARED * Math.cos(dRad) ** 2);
 }
 
 /** A point of the Earth's sunward surface, reached from the plane. */

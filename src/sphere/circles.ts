@@ -1,16 +1,24 @@
 /** Small circles on the sphere, in geodetic lon/lat degrees. */
 import type { Position } from 'geojson';
+import { geoDistance } from 'd3-geo';
 import type { LonLat } from '../ephemeris/earth.ts';
 
 const DEG = Math.PI / 180;
 
-/** Angular distance between two places, degrees. */
-export function angularDistanceDeg([lon1, lat1]: LonLat | Position, [lon2, lat2]: LonLat | Position): number {
-  const cos = Math.sin(lat1! * DEG) * Math.sin(lat2! * DEG) + Math.cos(lat1! * DEG) * Math.cos(lat2! * DEG) * Math.cos((lon2! - lon1!) * DEG);
-  return Math.acos(Math.min(1, Math.max(-1, cos))) / DEG;
+/** Angular distance between two places, degrees (d3-geo's geoDistance: the haversine, stable at every distance). */
+export function angularDistanceDeg(a: LonLat | Position, b: LonLat | Position): number {
+  return geoDistance([a[0]!, a[1]!], [b[0]!, b[1]!]) / DEG;
 }
 
-/** A closed ring of points at `radiusDeg` from `centre`, every `stepDeg` of bearing, clockwise seen from outside. */
+/**
+ * A closed ring of points at `radiusDeg` from `centre`, every `stepDeg` of bearing from north, clockwise seen from outside.
+ *
+ * Why not d3-geo's geoCircle: its vertices sit at angles offset by the radius itself (circleStream starts at
+ * t0 = radius + 2π, in a frame rotated onto the centre), not at whole bearing steps from north, and its last point
+ * only nearly repeats the first. Drawing the Moon-up lines and the field's half-circles from it moved their vertices
+ * and changed the bytes of every lunar map (tried: 8 maps and 4 batch images of the hash list,
+ * test/cli/outputHashes.test.ts). So we keep this ring; projection.ts still uses geoCircle for regional outlines.
+ */
 export function circleRing([lon, lat]: LonLat, radiusDeg: number, stepDeg: number): Position[] {
   const count = Math.ceil(360 / stepDeg);
   const r = radiusDeg * DEG;

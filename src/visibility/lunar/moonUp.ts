@@ -70,5 +70,5 @@ export function capTest(cap: MoonUpCap): CapTest {
  * function of position, which is what the region tracing needs.
  */
 export function moonUpMargin(test: CapTest, n: Normal): number {
-  return n.x * test.x + n.y * test.y + n.z * test.z - test.sinHorizon;
+  return n[0] * test.x + n[1] * test.y + n[2] * test.z - test.sinHorizon;
 }

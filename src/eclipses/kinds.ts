@@ -92,9 +92,8 @@ function dayOfId(id: unknown): Date {
   const match = typeof id === 'string' ? ID_PATTERN.exec(id) : null;
   if (!match) throw new InputError('id', ID_EXPECTED, id);
   const [year, month, day] = [Number(match[1]), Number(match[2]), Number(match[3])];
+  // Years 0–99 would be read as 1900–1999 by Date.UTC, but they lie outside the supported range and fail below either way.
   const start = new Date(Date.UTC(year, month - 1, day));
-  // Date.UTC maps 0–99 to 1900–1999; ids have four digits, so set the year itself.
-  start.setUTCFullYear(year);
   const real = start.getUTCFullYear() === year && start.getUTCMonth() === month - 1 && start.getUTCDate() === day;
   if (!real || start < SUPPORTED_RANGE.from || start >= SUPPORTED_RANGE.to) throw new InputError('id', ID_EXPECTED, id);
   return start;

@@ -1,0 +1,80 @@
+/**
+ * Words shared by both kinds of eclipse: the one duration formatter, the one
+ * rounding of a length of time to whole minutes, numbers as printed, and the
+ * notice every output carries. Words that belong to one kind only live in
+ * words/lunar/ or words/solar/, never here.
+ *
+ * Shaped for translation: each language supplies a `CommonWords` catalogue
+ * (English below); the functions take the catalogue, defaulting to English.
+ */
+
+/** Shared words, one catalogue per language. */
+export interface CommonWords {
+  /** BCP 47 tag of the catalogue's language, for Intl. */
+  readonly locale: string;
+  /** Every output's last word on what a prediction can promise. */
+  readonly predictions: string;
+  /** Unit words for durations: "3 h 27 min" (long) and "3h 27m" (compact, for tables). */
+  readonly durationUnits: {
+    readonly long: { readonly hour: string; readonly minute: string };
+    readonly compact: { readonly hour: string; readonly minute: string };
+  };
+  /** "A, B and C". */
+  readonly and: string;
+}
+
+export const ENGLISH: CommonWords = {
+  locale: 'en',
+  predictions: 'Predictions: weather and the local horizon decide what is seen.',
+  durationUnits: {
+    long: { hour: ' h', minute: ' min' },
+    compact: { hour: 'h', minute: 'm' },
+  },
+  and: 'and',
+};
+
+/**
+ * Whole minutes in a length of time given in seconds, rounded to the nearest
+ * minute (half a minute rounds up): the one rounding every printed duration
+ * goes through, so one eclipse's phases read the same in every output.
+ */
+export function roundToMinute(seconds: number): number {
+  // `+ 0` turns the -0 of a few negative milliseconds into 0, which prints without a sign.
+  return Math.round(seconds / 60) + 0;
+}
+
+/** How a duration is written: `long` on figures, in captions and summaries ("3 h 27 min", "58 min"); `compact` in tables ("3h 27m", "58m"). */
+export type DurationForm = 'long' | 'compact';
+
+/**
+ * A length of time, given in seconds, as printed: rounded to the minute
+ * (roundToMinute), hours and two-digit minutes from one hour up.
+ * long: "58 min", "3 h 07 min"; compact: "58m", "3h 07m".
+ */
+export function formatDuration(seconds: number, form: DurationForm = 'long', words: CommonWords = ENGLISH): string {
+  const minutes = roundToMinute(seconds);
+  const unit = words.durationUnits[form];
+  const [whole, twoDigits] = integerFormats(words.locale);
+  if (minutes < 60) return `${whole.format(minutes)}${unit.minute}`;
+  return `${whole.format(Math.floor(minutes / 60))}${unit.hour} ${twoDigits.format(minutes % 60)}${unit.minute}`;
+}
+
+const integerFormatsByLocale = new Map<string, readonly [Intl.NumberFormat, Intl.NumberFormat]>();
+/** Whole numbers, and whole numbers to two digits ("07"), in a language's digits; made once per language. */
+function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.NumberFormat] {
+  let formats = integerFormatsByLocale.get(locale);
+  if (!formats) {
+    formats = [
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0 }),
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2 }),
+    ];
+    integerFormatsByLocale.set(locale, formats);
+  }
+  return formats;
+}
+
+/** "A", "A and B", "A, B and C" (no serial comma: the house style). */
+export function listWords(items: readonly string[], words: CommonWords = ENGLISH): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} ${words.and} ${items[items.length - 1]}`;
+}

@@ -7,6 +7,7 @@
  * Shaped for translation: each language supplies a `CommonWords` catalogue
  * (English below); the functions take the catalogue, defaulting to English.
  */
+import type { EclipseBody } from '../eclipses/common/record.ts';
 
 /** Shared words, one catalogue per language. */
 export interface CommonWords {
@@ -77,4 +78,18 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
 export function listWords(items: readonly string[], words: CommonWords = ENGLISH): string {
   if (items.length <= 1) return items.join('');
   return `${items.slice(0, -1).join(', ')} ${words.and} ${items[items.length - 1]}`;
+}
+
+declare const meantFor: unique symbol;
+/**
+ * A text meant for one kind of eclipse only — above all a caution. Each
+ * kind's catalogue marks its own (lunarText, solarText); an output that takes
+ * a `TextFor<'solar'>` will not compile with a lunar one, nor the reverse.
+ * At run time it is a plain string.
+ */
+export type TextFor<B extends EclipseBody> = string & { readonly [meantFor]: B };
+
+/** Marks a text as meant for one kind; only the words/ catalogues call it. */
+export function meantOnlyFor<B extends EclipseBody>(_body: B, text: string): TextFor<B> {
+  return text as TextFor<B>;
 }

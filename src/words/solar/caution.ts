@@ -11,6 +11,7 @@
  * partial or annular eclipse), `whole-eclipse` for maps and catalogues of a
  * total or hybrid eclipse, which serve readers on both sides of the limits.
  */
+import { meantOnlyFor, type TextFor } from '../common.ts';
 
 export type SolarSafetyForm = 'short' | 'long';
 export type SolarSafetyScope = 'totality' | 'no-totality' | 'whole-eclipse';
@@ -30,13 +31,13 @@ const SHORT_BOTH = 'In the path, viewers off only while totality hides the Sun c
 const SHORT_REST = 'No binoculars, telescopes or cameras without a front solar filter. Supervise children; follow local health advice.';
 
 /** The caution, short (for map headers, captions, one-line formats) or long (for pages, alt text, local reports). */
-export function solarSafetyText(form: SolarSafetyForm, scope: SolarSafetyScope): string {
+export function solarSafetyText(form: SolarSafetyForm, scope: SolarSafetyScope): TextFor<'solar'> {
   if (form === 'short') {
     const middle = scope === 'totality' ? SHORT_TOTALITY : scope === 'no-totality' ? SHORT_NO_TOTALITY : SHORT_BOTH;
-    return [SHORT_VIEWERS, middle, SHORT_REST].join(' ');
+    return meantOnlyFor('solar', [SHORT_VIEWERS, middle, SHORT_REST].join(' '));
   }
   const middle = scope === 'totality' ? [TOTALITY] : scope === 'no-totality' ? [NO_TOTALITY] : [TOTALITY, NO_TOTALITY];
-  return [VIEWERS, NEVER_UNPROTECTED, ...middle, OPTICS, CHILDREN, AUTHORITIES].join(' ');
+  return meantOnlyFor('solar', [VIEWERS, NEVER_UNPROTECTED, ...middle, OPTICS, CHILDREN, AUTHORITIES].join(' '));
 }
 
 /** Which scope fits a place: totality seen there or not. */

@@ -7,6 +7,7 @@
  * Shaped for translation: each language supplies a `CommonWords` catalogue
  * (English below); the functions take the catalogue, defaulting to English.
  */
+import isoCountries from 'i18n-iso-countries';
 import type { EclipseBody } from '../eclipses/common/record.ts';
 
 /** Shared words, one catalogue per language. */
@@ -22,6 +23,10 @@ export interface CommonWords {
   };
   /** "A, B and C". */
   readonly and: string;
+  /** Hemisphere letters after a latitude and a longitude: "35.28°S, 149.13°E". */
+  readonly hemispheres: { readonly north: string; readonly south: string; readonly east: string; readonly west: string };
+  /** Country names as prose writes them, by ISO 3166-1 alpha-2 code, where they differ from the language's plain list name. */
+  readonly countryNames: Readonly<Record<string, string>>;
 }
 
 export const ENGLISH: CommonWords = {
@@ -32,6 +37,42 @@ export const ENGLISH: CommonWords = {
     compact: { hour: 'h', minute: 'm' },
   },
   and: 'and',
+  hemispheres: { north: 'N', south: 'S', east: 'E', west: 'W' },
+  // English prose (common practice in news style): short forms, and "the" where the name takes it.
+  countryNames: {
+    US: 'the United States',
+    GB: 'the United Kingdom',
+    NL: 'the Netherlands',
+    PH: 'the Philippines',
+    BS: 'the Bahamas',
+    GM: 'the Gambia',
+    CF: 'the Central African Republic',
+    DO: 'the Dominican Republic',
+    AE: 'the United Arab Emirates',
+    SB: 'the Solomon Islands',
+    FK: 'the Falkland Islands',
+    CD: 'DR Congo',
+    CG: 'Congo',
+    KR: 'South Korea',
+    KP: 'North Korea',
+    LA: 'Laos',
+    SY: 'Syria',
+    MD: 'Moldova',
+    BN: 'Brunei',
+    RU: 'Russia',
+    IR: 'Iran',
+    VE: 'Venezuela',
+    BO: 'Bolivia',
+    TZ: 'Tanzania',
+    VN: 'Vietnam',
+    TW: 'Taiwan',
+    MK: 'North Macedonia',
+    CZ: 'Czechia',
+    CI: "Côte d'Ivoire",
+    CN: 'China',
+    PS: 'Palestine',
+    TR: 'Turkey',
+  },
 };
 
 /**
@@ -92,4 +133,20 @@ export type TextFor<B extends EclipseBody> = string & { readonly [meantFor]: B }
 /** Marks a text as meant for one kind; only the words/ catalogues call it. */
 export function meantOnlyFor<B extends EclipseBody>(_body: B, text: string): TextFor<B> {
   return text as TextFor<B>;
+}
+
+/** A place's latitude and longitude to 0.01°, hemisphere letters after: "35.28°S, 149.13°E". */
+export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWords = ENGLISH): string {
+  const h = words.hemispheres;
+  return `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? h.north : h.south}, ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? h.east : h.west}`;
+}
+
+/**
+ * A country as prose names it: the catalogue's own form where it has one,
+ * else the ISO 3166 name from i18n-iso-countries in the catalogue's language,
+ * else the basemap's name.
+ */
+export function countryName(country: { readonly code?: string | undefined; readonly name: string }, words: CommonWords = ENGLISH): string {
+  if (country.code && words.countryNames[country.code]) return words.countryNames[country.code]!;
+  return (country.code && isoCountries.getName(country.code, words.locale)) || country.name;
 }

@@ -60,6 +60,8 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const p = r.printed ?? figuresFromRecord(r);
     // utDays count from J2000.0, 2000-01-01 12:00 UT.
     const greatestUtDays = (Date.parse(r.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
+    // A kind this version does not know (a manifest from another) is printed as it stands.
+    const kind = (WORDS.kind as Readonly<Record<string, string>>)[r.kind] ?? r.kind;
     const facts = [
       clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
       r.kind === 'penumbral' ? w.penumbralMagnitude(p.penumbralMagnitude) : w.umbralMagnitude(p.umbralMagnitude),
@@ -75,11 +77,11 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
     const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(w.thumbnailAlt(r.kind, date))}"${dimensions} loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
       : '';
     return `    <article class="${escapeXml(r.kind)}" id="${escapeXml(r.id)}">
       ${image}
-      <h2>${escapeXml(date)} <small>${escapeXml(r.kind)}</small></h2>
+      <h2>${escapeXml(date)} <small>${escapeXml(kind)}</small></h2>
       <p>${facts.map(escapeXml).join(' · ')}</p>
       <ul>
         ${links}

@@ -101,7 +101,7 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const hidden = say(continentsIn(continents, 'sees-none', namedOutside('sees-none')).filter((h) => h.share !== 'parts'));
   if (hidden.length > 0) sentences.push(w.hidden(list(hidden)));
   const caption = [...facts, ...sentences, ...(extra ? [extra] : []), words.common.predictions].join(' ');
-  const altText = w.altText(eclipse.kind, clock.date(at), altParts.join('; '), hidden.length > 0 ? list(hidden) : undefined);
+  const altText = w.altText(words.kind[eclipse.kind], clock.date(at), altParts.join('; '), hidden.length > 0 ? list(hidden) : undefined);
   return { caption, altText, countries, named };
 }
 

@@ -38,7 +38,7 @@ export function catalogueTable(doc: CatalogueDocument): string {
   // Every figure as printed elsewhere: rounded once, from the full value (record.printed).
   const rows = doc.eclipses.map((e: EclipseRecord) => [
     julianDateOfIsoDate(e.id) ? w.julianBeside(e.id, julianDateOfIsoDate(e.id)!) : e.id,
-    e.kind,
+    words.kind[e.kind],
     e.printed.greatestUtc,
     e.printed.umbralMagnitude,
     e.printed.penumbralMagnitude,

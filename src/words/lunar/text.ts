@@ -29,6 +29,8 @@ export interface LunarWords {
   readonly common: CommonWords;
   /** "Total", as a title starts. */
   readonly kindTitle: Readonly<Record<EclipseKind, string>>;
+  /** "total", inside a sentence or a table. */
+  readonly kind: Readonly<Record<EclipseKind, string>>;
   /** The shadow-enlargement convention, by its author's name. */
   readonly convention: Readonly<Record<ShadowConventionName, string>>;
   /** The naked-eye line, as a calendar entry ends (the figures carry their own sentence of it). */
@@ -139,6 +141,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   body: 'lunar',
   common: ENGLISH,
   kindTitle: { total: 'Total', partial: 'Partial', penumbral: 'Penumbral' },
+  kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Safe to watch with the naked eye; predictions, weather permitting.'),
   table: {

@@ -19,7 +19,8 @@ export { findPlace, resolvePlace, type MatchKind, type Place, type PlaceMatch } 
 export { timeZoneAt, timeZoneOfPlace, zonesOfCountry } from './places/timeZone.ts';
 export { visibilityOf, visibilityEvaluator, type Visibility, type VisibilityEvaluator, type ZoneName, type StageName } from './visibility/lunar/visibility.ts';
 export { moonUpCap, type MoonUpCap } from './visibility/lunar/moonUp.ts';
-export { localCircumstances, localSummary, localView, upIntervals, type LocalCircumstances, type LocalEvent, type LocalView, type SkyClass, type UpInterval } from './local/lunar.ts';
+export { localCircumstances, localView, upIntervals, type LocalCircumstances, type LocalEvent, type LocalView, type SkyClass, type UpInterval } from './local/lunar.ts';
+export { localSummary } from './words/lunar/text.ts';
 export { THEMES, THEME_NAMES, type Theme, type ThemeName } from './figures/theme.ts';
 export { PROJECTION_NAMES, type View, type ProjectionName } from './figures/projection.ts';
 export { composeScene, type MapStyle, type Scene } from './figures/map.ts';

@@ -3,20 +3,22 @@
  * a thumbnail per eclipse, its key facts, links to every file. No scripts, no
  * remote fonts or styles; relative links only, to files inside the folder.
  */
-import { civilClock, durationWords } from '../ephemeris/civilTime.ts';
+import { civilClock } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../figures/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
+import { formatDuration, roundToMinute } from '../words/common.ts';
+import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
 import type { Manifest } from './manifest.ts';
 
-const ROLE_WORDS: Record<string, string> = { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' };
+const WORDS = LUNAR_ENGLISH;
 
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
 
 /** Manifests written before records carried `printed`: the figures from the record's own (already rounded) values. */
 function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
-  const minutes = (seconds: number | undefined) => (seconds === undefined ? undefined : Math.round(seconds / 60));
+  const minutes = (seconds: number | undefined) => (seconds === undefined ? undefined : roundToMinute(seconds));
   return {
     greatestUtc: new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(0, 16).replace('T', ' '),
     umbralMagnitude: r.umbralMagnitude.toFixed(3),
@@ -29,7 +31,7 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
 /** The sheet's heading for a range whose end is exclusive: "Lunar eclipses 2026-01-01 to 2035-12-31", both days included. */
 export function sheetTitle(fromIso: string, toIsoExclusive: string): string {
   const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
-  return `Lunar eclipses ${fromIso.slice(0, 10)} to ${lastDay}`;
+  return WORDS.sheet.title(fromIso.slice(0, 10), lastDay);
 }
 
 /** Width and height of a PNG from its IHDR chunk (PNG specification, §11.2.2): bytes 16–23. */
@@ -47,6 +49,8 @@ export function pngSize(head: Uint8Array): [number, number] | undefined {
 export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
   const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
   const clock = civilClock(tz);
+  const w = WORDS.sheet;
+  const duration = (minutes: number) => formatDuration(minutes * 60, 'long', WORDS.common);
   const cards = manifest.eclipses.map((listed) => {
     // Only plain relative paths inside the folder become links: never "../", "/", "//host" or a URL.
     const entry = { ...listed, files: listed.files.filter((f) => isPlainRelativePath(f.path)) };
@@ -56,26 +60,28 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const p = r.printed ?? figuresFromRecord(r);
     // utDays count from J2000.0, 2000-01-01 12:00 UT.
     const greatestUtDays = (Date.parse(r.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
+    // A kind this version does not know (a manifest from another) is printed as it stands.
+    const kind = (WORDS.kind as Readonly<Record<string, string>>)[r.kind] ?? r.kind;
     const facts = [
-      clock.zone === 'UTC' ? `Greatest ${p.greatestUtc.slice(11)} UTC` : `Greatest ${clock.stamp(greatestUtDays)}`,
-      r.kind === 'penumbral' ? `penumbral magnitude ${p.penumbralMagnitude}` : `umbral magnitude ${p.umbralMagnitude}`,
-      ...(p.minutes.total !== undefined ? [`totality ${durationWords(p.minutes.total * 60)}`] : []),
-      ...(p.minutes.partial !== undefined ? [`in the umbra ${durationWords(p.minutes.partial * 60)}`] : [`penumbral phase ${durationWords(p.minutes.penumbral * 60)}`]),
-      `saros ${r.saros}`,
+      clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
+      r.kind === 'penumbral' ? w.penumbralMagnitude(p.penumbralMagnitude) : w.umbralMagnitude(p.umbralMagnitude),
+      ...(p.minutes.total !== undefined ? [w.totality(duration(p.minutes.total))] : []),
+      ...(p.minutes.partial !== undefined ? [w.inUmbra(duration(p.minutes.partial))] : [w.penumbralPhase(duration(p.minutes.penumbral))]),
+      w.saros(r.saros),
     ];
     const links = entry.files
       .filter((f) => f.role !== 'thumbnail')
-      .map((f) => `<li><a href="${escapeXml(href(f.path))}">${escapeXml(f.path.split('/').pop()!)}</a> <span>${ROLE_WORDS[f.role] ?? f.role}, ${(f.bytes / 1024).toFixed(0)} KiB</span></li>`)
+      .map((f) => `<li><a href="${escapeXml(href(f.path))}">${escapeXml(f.path.split('/').pop()!)}</a> <span>${w.fileNote(w.roles[f.role] ?? f.role, (f.bytes / 1024).toFixed(0))}</span></li>`)
       .join('\n        ');
     const size = thumb ? thumbSize(thumb.path) : undefined;
     const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
     const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(`Visibility map of the ${r.kind} lunar eclipse of ${date}`)}"${dimensions} loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
       : '';
     return `    <article class="${escapeXml(r.kind)}" id="${escapeXml(r.id)}">
       ${image}
-      <h2>${escapeXml(date)} <small>${escapeXml(r.kind)}</small></h2>
+      <h2>${escapeXml(date)} <small>${escapeXml(kind)}</small></h2>
       <p>${facts.map(escapeXml).join(' · ')}</p>
       <ul>
         ${links}
@@ -83,7 +89,7 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     </article>`;
   });
   return `<!doctype html>
-<html lang="en">
+<html lang="${escapeXml(WORDS.common.locale)}">
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
@@ -106,12 +112,12 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
 <body>
 <header>
   <h1>${escapeXml(title)}</h1>
-  <p>${manifest.eclipses.length === 1 ? '1 eclipse' : `${manifest.eclipses.length} eclipses`} · dates and times in ${escapeXml(tz)} · style ${escapeXml(manifest.styleHash)} · ${escapeXml(manifest.tool)}</p>
+  <p>${w.header(w.eclipses(manifest.eclipses.length), escapeXml(tz), escapeXml(manifest.styleHash), escapeXml(manifest.tool))}</p>
 </header>
 <main>
 ${cards.join('\n')}
 </main>
-<footer>Predictions: weather and the local horizon decide what is seen. Basemap: Natural Earth via world-atlas (public domain). Places: GeoNames (CC BY 4.0). See manifest.json and catalogue.csv.</footer>
+<footer>${WORDS.common.predictions} ${w.credits}</footer>
 </body>
 </html>
 `;

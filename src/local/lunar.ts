@@ -2,12 +2,12 @@
  * Local circumstances (twilight classes: common practice): for one place, each stage's instant,
  * the Moon's altitude and azimuth, whether it is up (by the same convention as
  * the map's zones), the Sun's altitude and the sky it makes; moonrise and
- * moonset inside the eclipse; and a plain-words summary.
+ * moonset inside the eclipse; and what of each phase the place sees (localView), which
+ * words/lunar/text.ts tells in a summary.
  */
 import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { ephemerisTime, moonPositionKm, sunPositionKm } from '../ephemeris/bodies.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { momentFromUT, type Moment } from '../ephemeris/time.ts';
 import { horizontal, type Observer } from '../ephemeris/topocentric.ts';
 import { capTest, moonUpCap, moonUpMargin } from '../visibility/lunar/moonUp.ts';
@@ -198,17 +198,11 @@ export function altitudeTrack(observer: Observer, from: Moment, to: Moment, step
   });
 }
 
-// ---- plain words -------------------------------------------------------------------------
+// ---- what a place sees (words/lunar/text.ts turns it into sentences) -------------------------
 
-const COMPASS = ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'];
-export const compassWord = (azimuthDeg: number) => COMPASS[Math.round(azimuthDeg / 45) % 8]!;
 /** The 16 points in their short forms, "ESE" for east-southeast (common practice on charts and forecasts). */
 const COMPASS_16 = ['N', 'NNE', 'NE', 'ENE', 'E', 'ESE', 'SE', 'SSE', 'S', 'SSW', 'SW', 'WSW', 'W', 'WNW', 'NW', 'NNW'];
 export const compassPoint = (azimuthDeg: number) => COMPASS_16[Math.round((((azimuthDeg % 360) + 360) % 360) / 22.5) % 16]!;
-const heightWord = (altitudeDeg: number) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the');
-
-/** Within this latitude of a pole (about 100 m) compass words lose their meaning. */
-const POLE_LATITUDE_DEG = 89.999;
 
 export type EclipsePhase = 'before' | 'penumbral' | 'partial' | 'total' | 'after';
 
@@ -221,14 +215,6 @@ export function phaseAt(eclipse: LunarEclipse, utDays: number): EclipsePhase {
   if (c.U1 && c.U4 && utDays >= c.U1.utDays && utDays <= c.U4.utDays) return 'partial';
   return 'penumbral';
 }
-
-const PHASE_STATE: Record<ReturnType<typeof phaseAt>, string> = {
-  before: 'before the eclipse begins',
-  penumbral: 'in the faint penumbral phase',
-  partial: 'partly eclipsed',
-  total: 'totally eclipsed',
-  after: 'after the eclipse is over',
-};
 
 export type Coverage = 'all' | 'part' | 'none';
 
@@ -279,86 +265,4 @@ export function localView(local: LocalCircumstances): LocalView {
     main: eclipse.kind === 'penumbral' ? over(c.P1!, c.P4!) : over(c.U1!, c.U4!),
     ...(eclipse.kind === 'total' ? { totality: over(c.U2!, c.U3!) } : {}),
   };
-}
-
-/** What is in view, in a few words, from the coverage of each phase. */
-function inViewWords(kind: LunarEclipse['kind'], view: LocalView): string {
-  if (view.whole === 'all') return kind === 'penumbral' ? 'the whole penumbral eclipse is in view' : 'the whole eclipse is in view';
-  if (kind === 'penumbral') return 'part of the penumbral eclipse is in view';
-  if (view.main === 'all') return kind === 'total' ? 'all of the partial phases and totality are in view' : 'all of the partial phase is in view';
-  if (view.main === 'none') return 'only the faint penumbral phase is seen';
-  if (kind === 'partial') return 'part of the partial phase is in view';
-  if (view.totality === 'all') return 'all of totality is in view, and part of the partial phases';
-  if (view.totality === 'part') return 'part of totality is in view';
-  return 'part of the partial phase is in view, but not totality';
-}
-
-const CONTACT_WORDS: Partial<Record<LocalEventName, string>> = {
-  U1: 'the partial phase begins',
-  U2: 'totality begins',
-  U3: 'totality ends',
-  U4: 'the partial phase ends',
-};
-const PENUMBRAL_CONTACT_WORDS: Partial<Record<LocalEventName, string>> = {
-  P1: 'the penumbral phase begins',
-  P4: 'the penumbral phase ends',
-};
-
-/**
- * One or two sentences for a newsletter: what readers at this place will
- * see, in their time. What is said to be in view comes from the intervals
- * the Moon is actually up (localView), and every rise and set between P1
- * and P4 is told, in time order.
- */
-export function localSummary(local: LocalCircumstances, clock: CivilClock, placeName: string): string {
-  const { eclipse, events } = local;
-  const c = eclipse.contacts;
-  // Every time carries the zone in force at its own instant, so a clock change inside the eclipse reads true.
-  // A time on another day, in this zone, than the first time the summary gives says so ("01:13 +1 day NZDT").
-  let reference: number | undefined;
-  const t = (m: Moment) => clock.stamp(m.utDays, (reference ??= m.utDays));
-  const range = (a: Moment, b: Moment) => clock.range(a.utDays, b.utDays, (reference ??= a.utDays));
-  // At a pole every direction is south (or north): give the height only.
-  const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
-  const where = (e: LocalEvent) =>
-    atPole ? `${Math.max(0, Math.round(e.moonAltitudeDeg))}° above the horizon` : `${heightWord(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg)}`;
-  const view = localView(local);
-  const penumbral = eclipse.kind === 'penumbral';
-  const daylight = events.some((e) => e.moonUp && e.sky === 'day' && e.event !== 'moonrise' && e.event !== 'moonset')
-    ? ' Part of it falls in daylight, when the Moon is hard to see.'
-    : '';
-  const from = `From ${placeName}`;
-  if (view.whole === 'none') return `${from} the eclipse cannot be seen: the Moon is below the horizon from start to finish.`;
-
-  const greatest = events.find((e) => e.event === 'greatest')!;
-  const crossings = events.filter((e) => e.event === 'moonrise' || e.event === 'moonset');
-  // At a rise or set the Moon is on the horizon: say only where.
-  const setBefore = (e: LocalEvent) => crossings.some((x) => x.event === 'moonset' && x.moment.utDays < e.moment.utDays);
-  const moves = (e: LocalEvent, time: string) =>
-    `the Moon ${e.event === 'moonrise' ? (setBefore(e) ? 'rises again' : 'rises') : 'sets'} at ${time}${atPole ? '' : ` in the ${compassWord(e.moonAzimuthDeg)}`}, ${PHASE_STATE[phaseAt(eclipse, e.moment.utDays)]}`;
-  // The whole main phase in view: its span in one stretch, as almanacs give it, with any rise before it and set after it, in order.
-  if (view.main === 'all') {
-    const [startName, endName] = penumbral ? (['P1', 'P4'] as const) : (['U1', 'U4'] as const);
-    const totality = eclipse.kind === 'total' ? `, totality ${range(c.U2!, c.U3!)}` : '';
-    const before = crossings.filter((e) => e.moment.utDays < c[startName]!.utDays);
-    const after = crossings.filter((e) => e.moment.utDays > c[endName]!.utDays);
-    const clauses = before.map((e) => moves(e, t(e.moment)));
-    const span = range(c[startName]!, c[endName]!);
-    clauses.push(`${penumbral ? 'penumbral phase' : 'partial phases'} ${span}${totality}, the Moon ${where(greatest)} at greatest`);
-    clauses.push(...after.map((e) => moves(e, t(e.moment))));
-    return `${from} ${inViewWords(eclipse.kind, view)}: ${clauses.join('; ')}.${daylight}`;
-  }
-  // Otherwise tell it in order: the contacts seen, greatest if seen, and every rise and set.
-  const words = penumbral ? PENUMBRAL_CONTACT_WORDS : CONTACT_WORDS;
-  const clauses: string[] = [];
-  for (const e of events) {
-    if (e.event === 'moonrise' || e.event === 'moonset') {
-      clauses.push(moves(e, t(e.moment)));
-    } else if (e.moonUp && e.event === 'greatest') {
-      clauses.push(`greatest eclipse at ${t(e.moment)}, the Moon ${where(e)}`);
-    } else if (e.moonUp && words[e.event]) {
-      clauses.push(`${words[e.event]} at ${t(e.moment)}`);
-    }
-  }
-  return `${from} ${inViewWords(eclipse.kind, view)}: ${clauses.join('; ')}.${daylight}`;
 }

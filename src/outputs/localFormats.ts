@@ -8,7 +8,9 @@ import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
-import { localCircumstances, localSummary, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../local/lunar.ts';
+import { localCircumstances, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../local/lunar.ts';
+import { coordinatesText } from '../words/common.ts';
+import { LUNAR_ENGLISH, localSummary, type LunarPhaseKey } from '../words/lunar/text.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
@@ -34,17 +36,7 @@ export function localReport(eclipse: LunarEclipse, chosen: { place: PlaceLabel; 
   return { local, place, clock, summary: localSummary(local, clock, place.name) };
 }
 
-export const EVENT_WORDS: Record<LocalEventName, string> = {
-  P1: 'Moon enters the penumbra',
-  U1: 'partial eclipse begins',
-  U2: 'totality begins',
-  greatest: 'greatest eclipse',
-  U3: 'totality ends',
-  U4: 'partial eclipse ends',
-  P4: 'Moon leaves the penumbra',
-  moonrise: 'moonrise',
-  moonset: 'moonset',
-};
+const WORDS = LUNAR_ENGLISH;
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
 /** Altitudes in data outputs: to 0.01°. */
@@ -84,17 +76,18 @@ export function localJson(report: LocalReport): string {
 
 function rows(report: LocalReport): string[][] {
   const { clock } = report;
+  const w = WORDS.local;
   return report.local.events.map((e: LocalEvent) => [
-    e.event === 'greatest' ? 'Greatest' : e.event === 'moonrise' ? 'Moonrise' : e.event === 'moonset' ? 'Moonset' : e.event,
-    EVENT_WORDS[e.event],
+    w.eventLabel[e.event] ?? e.event,
+    w.events[e.event],
     `${clock.isoDate(e.moment.utDays)} ${clock.stamp(e.moment.utDays)}`,
     isoMinutes(e.moment.utDays).slice(11, 16),
     // Rounded once, from the full value (an azimuth of 67.46° is 67°, not 67.5° and then 68°).
     `${fixed(e.moonAltitudeDeg, 1)}°`,
     `${Math.round(e.moonAzimuthDeg) % 360}°`,
-    e.moonUp ? 'yes' : 'no',
+    e.moonUp ? w.yes : w.no,
     `${fixed(e.sunAltitudeDeg, 1)}°`,
-    e.sky,
+    w.sky[e.sky],
   ]);
 }
 
@@ -104,26 +97,23 @@ function headerFor(report: LocalReport): string[] {
   const first = local.events[0]!.moment.utDays;
   const changes = clock.offsetChanges(first, local.events[local.events.length - 1]!.moment.utDays);
   const zone = changes.length === 0 ? clock.zoneLabel(local.eclipse.greatest.utDays) : [clock.zoneLabel(first), ...changes.map((c) => c.after)].join(' → ');
-  return ['Event', 'What happens', `Local (${zone})`, 'UTC', 'Moon alt.', 'Moon az.', 'Moon up', 'Sun alt.', 'Sky'];
+  return [...WORDS.local.header(zone)];
 }
 
 function titleOf(report: LocalReport): string {
   const { local, place } = report;
-  const lat = `${Math.abs(place.latDeg).toFixed(2)}°${place.latDeg >= 0 ? 'N' : 'S'}`;
-  const lon = `${Math.abs(place.lonDeg).toFixed(2)}°${place.lonDeg >= 0 ? 'E' : 'W'}`;
-  const julian = julianDateOfIsoDate(local.eclipse.id);
-  const calendar = julian ? ` (Julian: ${julian})` : '';
-  return `${local.eclipse.kind[0]!.toUpperCase()}${local.eclipse.kind.slice(1)} lunar eclipse ${local.eclipse.id}${calendar} from ${place.name} (${lat}, ${lon}; ${place.tz})`;
+  const e = local.eclipse;
+  return WORDS.local.title(WORDS.kindTitle[e.kind], e.id, julianDateOfIsoDate(e.id), place.name, coordinatesText(place.latDeg, place.lonDeg, WORDS.common), place.tz);
 }
 
 function notes(report: LocalReport): string[] {
   const e = report.local.eclipse;
   const events = report.local.events;
   const zone = report.clock.zoneDescriptionBetween(events[0]!.moment.utDays, events[events.length - 1]!.moment.utDays);
-  const julian = julianDateOfIsoDate(e.id) ? ' Dates: proleptic Gregorian calendar (the Julian date is given beside the eclipse\'s date).' : '';
+  const w = WORDS.local;
   return [
-    `Local time: ${zone}. Times rounded to the minute. Moon altitude: its centre, with refraction from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.${julian}`,
-    `Shadow: ${e.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${e.deltaT.seconds.toFixed(1)} s (${e.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
+    w.timeNote(zone, julianDateOfIsoDate(e.id) ? w.julianNote : ''),
+    w.shadowNote(WORDS.convention[e.convention], e.deltaT.seconds, e.deltaT.source, WORDS.common.predictions),
   ];
 }
 
@@ -189,16 +179,15 @@ function fold(line: string): string {
 }
 
 interface Phase {
-  readonly key: 'penumbral' | 'partial' | 'total';
-  readonly title: string;
+  readonly key: LunarPhaseKey;
   readonly start: LocalEventName;
   readonly end: LocalEventName;
 }
 
 const PHASES: readonly Phase[] = [
-  { key: 'penumbral', title: 'Penumbral lunar eclipse', start: 'P1', end: 'P4' },
-  { key: 'partial', title: 'Partial phases of the lunar eclipse', start: 'U1', end: 'U4' },
-  { key: 'total', title: 'Totality', start: 'U2', end: 'U3' },
+  { key: 'penumbral', start: 'P1', end: 'P4' },
+  { key: 'partial', start: 'U1', end: 'U4' },
+  { key: 'total', start: 'U2', end: 'U3' },
 ];
 
 /**
@@ -218,8 +207,10 @@ export function localIcs(report: LocalReport, generator: string): string {
   const events = local.events;
   const find = (name: LocalEventName) => events.find((e) => e.event === name);
   const intervals = upIntervals(local);
+  const w = WORDS.calendar;
   const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
   for (const phase of PHASES) {
+    const title = w.phaseTitle[phase.key];
     const start = find(phase.start);
     const end = find(phase.end);
     if (!start || !end) continue;
@@ -231,17 +222,17 @@ export function localIcs(report: LocalReport, generator: string): string {
       const from = a === start.moment.utDays ? start.moment : momentFromUT(a, start.moment.deltaTSeconds);
       const to = b === end.moment.utDays ? end.moment : momentFromUT(b, end.moment.deltaTSeconds);
       const uid = `${local.eclipse.id}-${phase.key}${k > 0 ? `-${k + 1}` : ''}-${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}@umbracast`;
-      const cut = from !== start.moment || to !== end.moment ? ' (the part with the Moon above the horizon)' : '';
+      const cut = from !== start.moment || to !== end.moment ? w.cutToMoonUp : '';
       lines.push(
         'BEGIN:VEVENT',
         `UID:${uid}`,
         `DTSTAMP:${ICS_STAMP}`,
         `DTSTART:${icsTime(from)}`,
         `DTEND:${icsTime(to)}`,
-        `SUMMARY:${icsText(`${phase.title}${cut ? ' (Moon up)' : ''}`)}`,
+        `SUMMARY:${icsText(`${title}${cut ? w.cutToMoonUpShort : ''}`)}`,
         `LOCATION:${icsText(place.name)}`,
         `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-        `DESCRIPTION:${icsText(`${phase.title} of ${local.eclipse.id}${cut}. ${report.summary} Safe to watch with the naked eye; predictions, weather permitting.`)}`,
+        `DESCRIPTION:${icsText(w.description(title, local.eclipse.id, cut, report.summary, WORDS.nakedEyeInCalendar))}`,
         'TRANSP:TRANSPARENT',
         'END:VEVENT',
       );
@@ -256,10 +247,10 @@ export function localIcs(report: LocalReport, generator: string): string {
       `DTSTAMP:${ICS_STAMP}`,
       `DTSTART:${icsTime(p1.moment)}`,
       `DTEND:${icsTime(p4.moment)}`,
-      `SUMMARY:${icsText(`Lunar eclipse, not visible from ${place.name}`)}`,
+      `SUMMARY:${icsText(w.notSeenTitle(place.name))}`,
       `LOCATION:${icsText(place.name)}`,
       `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-      `DESCRIPTION:${icsText(`${report.summary} This entry only marks the date; there is nothing to see from here.`)}`,
+      `DESCRIPTION:${icsText(w.notSeenDescription(report.summary))}`,
       'TRANSP:TRANSPARENT',
       'END:VEVENT',
     );

@@ -14,7 +14,8 @@ import { horizontal, refractionDeg, REFRACTION_FLOOR_DEG } from '../../src/ephem
 import { localJson, type LocalReport } from '../../src/outputs/localFormats.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
-import { localCircumstances, localSummary } from '../../src/local/lunar.ts';
+import { localCircumstances } from '../../src/local/lunar.ts';
+import { localSummary } from '../../src/words/lunar/text.ts';
 import { useOurDeltaTInAstronomyEngine } from '../visibility/support.ts';
 
 useOurDeltaTInAstronomyEngine();

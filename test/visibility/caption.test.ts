@@ -13,7 +13,8 @@ import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import type { LonLat } from '../../src/ephemeris/earth.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { loadBasemap } from '../../src/sphere/world.ts';
-import { countryName, eclipseCaption } from '../../src/outputs/caption.ts';
+import { eclipseCaption } from '../../src/outputs/caption.ts';
+import { countryName } from '../../src/words/common.ts';
 import { countrySampling, countryShares, MIN_SAMPLES_PER_COUNTRY, type CountryShare } from '../../src/visibility/lunar/countries.ts';
 import { visibilityEvaluator, visibilityOf, type ZoneName } from '../../src/visibility/lunar/visibility.ts';
 import { seededRandom } from './support.ts';
@@ -90,7 +91,7 @@ for (const date of DATES) {
     // Each country at most once.
     for (const c of countries) {
       const name = countryName(c);
-      const longer = countries.map(countryName).filter((other) => other !== name && other.includes(name));
+      const longer = countries.map((c) => countryName(c)).filter((other) => other !== name && other.includes(name));
       const hits = zoneSentences.filter(({ sentence }) => {
         let text = sentence;
         for (const other of longer) text = text.split(other).join('');
@@ -136,7 +137,7 @@ for (const date of DATES) {
 
 test('country names tell every country apart; the two Congos and the article names come out as prose writes them (common practice)', () => {
   const shares = countryShares(visibilityOf(one('2026-03-03')), features);
-  const names = shares.filter((c) => c.code).map(countryName);
+  const names = shares.filter((c) => c.code).map((c) => countryName(c));
   assert.equal(new Set(names).size, names.length, 'no two countries share a name');
   const byCode = (code: string) => countryName(shares.find((c) => c.code === code)!);
   assert.equal(byCode('CD'), 'DR Congo');

@@ -14,7 +14,8 @@ import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { astroTimeOf, momentFromUT, utDaysFromDate, type Moment } from '../../src/ephemeris/time.ts';
 import { localIcs, localIso, type LocalReport } from '../../src/outputs/localFormats.ts';
-import { localCircumstances, localSummary, moonRisesAndSets } from '../../src/local/lunar.ts';
+import { localCircumstances, moonRisesAndSets } from '../../src/local/lunar.ts';
+import { localSummary } from '../../src/words/lunar/text.ts';
 import { stage, visibilityEvaluator, visibilityOf, zoneFromMargins } from '../../src/visibility/lunar/visibility.ts';
 import { distanceToEdgeDeg, randomPlaces, useOurDeltaTInAstronomyEngine } from './support.ts';
 

@@ -17,7 +17,8 @@ import type { LunarEclipse } from '../../src/eclipses/lunar/types.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { momentFromUT } from '../../src/ephemeris/time.ts';
 import { localIcs, type LocalReport } from '../../src/outputs/localFormats.ts';
-import { localCircumstances, localSummary, localView, type Coverage, type LocalCircumstances } from '../../src/local/lunar.ts';
+import { localCircumstances, localView, type Coverage, type LocalCircumstances } from '../../src/local/lunar.ts';
+import { localSummary } from '../../src/words/lunar/text.ts';
 import { moonUpTopocentric, useOurDeltaTInAstronomyEngine } from './support.ts';
 
 useOurDeltaTInAstronomyEngine();

@@ -9,7 +9,7 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { safetyScopeForEclipse, safetyScopeForPlace, solarSafetyText, type SolarSafetyForm, type SolarSafetyScope } from '../../src/words/solar.ts';
+import { safetyScopeForEclipse, safetyScopeForPlace, solarSafetyText, type SolarSafetyForm, type SolarSafetyScope } from '../../src/words/solar/caution.ts';
 
 const FORMS: SolarSafetyForm[] = ['short', 'long'];
 const SCOPES: SolarSafetyScope[] = ['totality', 'no-totality', 'whole-eclipse'];

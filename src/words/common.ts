@@ -1,0 +1,152 @@
+/**
+ * Words shared by both kinds of eclipse: the one duration formatter, the one
+ * rounding of a length of time to whole minutes, numbers as printed, and the
+ * notice every output carries. Words that belong to one kind only live in
+ * words/lunar/ or words/solar/, never here.
+ *
+ * Shaped for translation: each language supplies a `CommonWords` catalogue
+ * (English below); the functions take the catalogue, defaulting to English.
+ */
+import isoCountries from 'i18n-iso-countries';
+import type { EclipseBody } from '../eclipses/common/record.ts';
+
+/** Shared words, one catalogue per language. */
+export interface CommonWords {
+  /** BCP 47 tag of the catalogue's language, for Intl. */
+  readonly locale: string;
+  /** Every output's last word on what a prediction can promise. */
+  readonly predictions: string;
+  /** Unit words for durations: "3 h 27 min" (long) and "3h 27m" (compact, for tables). */
+  readonly durationUnits: {
+    readonly long: { readonly hour: string; readonly minute: string };
+    readonly compact: { readonly hour: string; readonly minute: string };
+  };
+  /** "A, B and C". */
+  readonly and: string;
+  /** Hemisphere letters after a latitude and a longitude: "35.28°S, 149.13°E". */
+  readonly hemispheres: { readonly north: string; readonly south: string; readonly east: string; readonly west: string };
+  /** Country names as prose writes them, by ISO 3166-1 alpha-2 code, where they differ from the language's plain list name. */
+  readonly countryNames: Readonly<Record<string, string>>;
+}
+
+export const ENGLISH: CommonWords = {
+  locale: 'en',
+  predictions: 'Predictions: weather and the local horizon decide what is seen.',
+  durationUnits: {
+    long: { hour: ' h', minute: ' min' },
+    compact: { hour: 'h', minute: 'm' },
+  },
+  and: 'and',
+  hemispheres: { north: 'N', south: 'S', east: 'E', west: 'W' },
+  // English prose (common practice in news style): short forms, and "the" where the name takes it.
+  countryNames: {
+    US: 'the United States',
+    GB: 'the United Kingdom',
+    NL: 'the Netherlands',
+    PH: 'the Philippines',
+    BS: 'the Bahamas',
+    GM: 'the Gambia',
+    CF: 'the Central African Republic',
+    DO: 'the Dominican Republic',
+    AE: 'the United Arab Emirates',
+    SB: 'the Solomon Islands',
+    FK: 'the Falkland Islands',
+    CD: 'DR Congo',
+    CG: 'Congo',
+    KR: 'South Korea',
+    KP: 'North Korea',
+    LA: 'Laos',
+    SY: 'Syria',
+    MD: 'Moldova',
+    BN: 'Brunei',
+    RU: 'Russia',
+    IR: 'Iran',
+    VE: 'Venezuela',
+    BO: 'Bolivia',
+    TZ: 'Tanzania',
+    VN: 'Vietnam',
+    TW: 'Taiwan',
+    MK: 'North Macedonia',
+    CZ: 'Czechia',
+    CI: "Côte d'Ivoire",
+    CN: 'China',
+    PS: 'Palestine',
+    TR: 'Turkey',
+  },
+};
+
+/**
+ * Whole minutes in a length of time given in seconds, rounded to the nearest
+ * minute (half a minute rounds up): the one rounding every printed duration
+ * goes through, so one eclipse's phases read the same in every output.
+ */
+export function roundToMinute(seconds: number): number {
+  // `+ 0` turns the -0 of a few negative milliseconds into 0, which prints without a sign.
+  return Math.round(seconds / 60) + 0;
+}
+
+/** How a duration is written: `long` on figures, in captions and summaries ("3 h 27 min", "58 min"); `compact` in tables ("3h 27m", "58m"). */
+export type DurationForm = 'long' | 'compact';
+
+/**
+ * A length of time, given in seconds, as printed: rounded to the minute
+ * (roundToMinute), hours and two-digit minutes from one hour up.
+ * long: "58 min", "3 h 07 min"; compact: "58m", "3h 07m".
+ */
+export function formatDuration(seconds: number, form: DurationForm = 'long', words: CommonWords = ENGLISH): string {
+  const minutes = roundToMinute(seconds);
+  const unit = words.durationUnits[form];
+  const [whole, twoDigits] = integerFormats(words.locale);
+  if (minutes < 60) return `${whole.format(minutes)}${unit.minute}`;
+  return `${whole.format(Math.floor(minutes / 60))}${unit.hour} ${twoDigits.format(minutes % 60)}${unit.minute}`;
+}
+
+const integerFormatsByLocale = new Map<string, readonly [Intl.NumberFormat, Intl.NumberFormat]>();
+/** Whole numbers, and whole numbers to two digits ("07"), in a language's digits; made once per language. */
+function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.NumberFormat] {
+  let formats = integerFormatsByLocale.get(locale);
+  if (!formats) {
+    formats = [
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0 }),
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2 }),
+    ];
+    integerFormatsByLocale.set(locale, formats);
+  }
+  return formats;
+}
+
+/** "A", "A and B", "A, B and C" (no serial comma: the house style). */
+export function listWords(items: readonly string[], words: CommonWords = ENGLISH): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} ${words.and} ${items[items.length - 1]}`;
+}
+
+declare const meantFor: unique symbol;
+/**
+ * A text meant for one kind of eclipse only — above all a caution. Each
+ * kind's catalogue marks its own (lunarText, solarText); an output that takes
+ * a `TextFor<'solar'>` will not compile with a lunar one, nor the reverse.
+ * At run time it is a plain string.
+ */
+export type TextFor<B extends EclipseBody> = string & { readonly [meantFor]: B };
+
+/** Marks a text as meant for one kind; only the words/ catalogues call it. */
+export function meantOnlyFor<B extends EclipseBody>(_body: B, text: string): TextFor<B> {
+  return text as TextFor<B>;
+}
+
+/** A place's latitude and longitude to 0.01°, hemisphere letters after: "35.28°S, 149.13°E". */
+export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWords = ENGLISH): string {
+  const h = words.hemispheres;
+  return `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? h.north : h.south}, ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? h.east : h.west}`;
+}
+
+/**
+ * A country as prose names it: the catalogue's own form where it has one,
+ * else the ISO 3166 name from i18n-iso-countries in the catalogue's language,
+ * else the basemap's name.
+ */
+export function countryName(country: { readonly code?: string | undefined; readonly name: string }, words: CommonWords = ENGLISH): string {
+  if (country.code && words.countryNames[country.code]) return words.countryNames[country.code]!;
+  return (country.code && isoCountries.getName(country.code, words.locale)) || country.name;
+}

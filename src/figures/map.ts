@@ -14,7 +14,8 @@ import type { LonLat } from '../ephemeris/earth.ts';
 import { fieldLines, type FieldLine } from '../visibility/lunar/fieldLines.ts';
 import { storyCentre } from '../visibility/lunar/storyCentre.ts';
 import { AREA_NAMES } from './areaNames.ts';
-import { circleRing, runWhere, angularDistanceDeg } from '../sphere/circles.ts';
+import { angularDistanceDeg } from '../sphere/circles.ts';
+import { capOutline, PAINTED_ZONES, visibilityZonePolygons } from '../visibility/lunar/zones.ts';
 import { stage, visibilityEvaluator, type Stage, type StageName, type Visibility, type ZoneName } from '../visibility/lunar/visibility.ts';
 import { timeOnDay, timeRange } from '../ephemeris/dayMark.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from '../sphere/world.ts';
@@ -311,35 +312,6 @@ export function thinnedFieldLines(lines: readonly FieldLine[], projection: GeoPr
   return runs;
 }
 
-/**
- * The zones a start cap S and an end cap E make, as disjoint spherical
- * polygons built from arcs of the two circles, each ring clockwise around
- * what it encloses (d3-geo's rule): both caps (sees all), S only (sets
- * during), E only (rises during). Painting them once each over the
- * nothing-seen background costs less than stacking caps or clipping.
- */
-export function zonePolygons(start: Stage, end: Stage): Record<'sees-all' | 'sets-during' | 'rises-during', GeoPermissibleObjects> {
-  const inside = (s: Stage) => (p: Position) => angularDistanceDeg(s.cap.centre, p) < s.cap.radiusDeg;
-  // circleRing runs clockwise around its centre.
-  const ringOf = (s: Stage) => circleRing(s.cap.centre, s.cap.radiusDeg, 0.25);
-  const sRing = ringOf(start);
-  const eRing = ringOf(end);
-  const sInE = runWhere(sRing, inside(end));
-  const eInS = runWhere(eRing, inside(start));
-  const sOutE = runWhere(sRing, (p) => !inside(end)(p));
-  const eOutS = runWhere(eRing, (p) => !inside(start)(p));
-  const polygon = (ring: Position[]): GeoPermissibleObjects => (ring.length < 3 ? { type: 'Polygon', coordinates: [] } : { type: 'Polygon', coordinates: [[...ring, ring[0]!]] });
-  return {
-    'sees-all': polygon([...sInE, ...eInS]),
-    'sets-during': polygon([...sOutE, ...[...eInS].reverse()]),
-    'rises-during': polygon([...eOutS, ...[...sInE].reverse()]),
-  };
-}
-
-function capEdge(s: Stage): LineString {
-  return { type: 'LineString', coordinates: circleRing(s.cap.centre, s.cap.radiusDeg, 0.5) };
-}
-
 /** Where a projected line crosses a horizontal line y = targetY, inside a frame; with the index of the point before. */
 function crossingsAtY(points: ([number, number] | null)[], targetY: number, frame: Frame): { point: [number, number]; index: number }[] {
   const found: { point: [number, number]; index: number }[] = [];
@@ -477,8 +449,7 @@ export function composeScene(input: SceneInput): Scene {
   const projection: GeoProjection = fitted.projection;
   const path = geoPath(projection).digits(1);
   const basemap = loadBasemap(detailForScale(pixelsPerDegree(fitted)));
-  const start = stage(visibility, zoneSpan.start);
-  const end = stage(visibility, zoneSpan.end);
+
   const outlineD = fitted.world ? path({ type: 'Sphere' }) ?? '' : `M${n2(frame.x)},${n2(frame.y)}h${n2(frame.width)}v${n2(frame.height)}h${n2(-frame.width)}Z`;
 
   // What lies under the lines and letters, and those.
@@ -490,8 +461,8 @@ export function composeScene(input: SceneInput): Scene {
 
   // d3-geo clips every layer to the view (the sphere's edge, or the region's frame): no SVG clip paths needed.
   base.push(`<path d="${outlineD}" fill="${theme.zones['sees-none']}"/>`);
-  const zones = zonePolygons(start, end);
-  for (const zone of ['rises-during', 'sets-during', 'sees-all'] as const) base.push(`<path d="${path(zones[zone]) ?? ''}" fill="${theme.zones[zone]}"/>`);
+  const zones = visibilityZonePolygons(visibility);
+  for (const zone of PAINTED_ZONES) base.push(`<path d="${path(zones[zone]) ?? ''}" fill="${theme.zones[zone]}"/>`);
   // The graticule under the land, the coastline above both.
   base.push(`<path d="${path(geoGraticule().step([30, 30])()) ?? ''}" fill="none" stroke="${theme.graticule}" stroke-width="${n2(0.4 * unit)}" stroke-opacity="${theme.graticuleOpacity}"/>`);
   // World data is denser than the picture: points within half a pixel of the last one kept add bytes and drawing time, not detail.
@@ -507,7 +478,7 @@ export function composeScene(input: SceneInput): Scene {
   overlay.push(`<path d="${path(fieldGeometry) ?? ''}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(4 * unit)} ${n2(2.2 * unit)}"/>`);
 
   // Moon-up edges at each stage (drawn, then labelled).
-  const edges = new Map(visibility.stages.map((s) => [s.name, capEdge(s)]));
+  const edges = new Map(visibility.stages.map((s) => [s.name, capOutline(s)]));
   for (const s of visibility.stages) {
     const strong = s.name === zoneSpan.start || s.name === zoneSpan.end;
     const d = path(edges.get(s.name)!) ?? '';

@@ -10,9 +10,12 @@ import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../local/lunar.ts';
 import { compassPoint, phaseAt, skyClass } from '../local/lunar.ts';
-import { flowRows, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
+import { SKY_HORIZON, SKY_PHASE_WORDS, SKY_WORDS, skyEventLabel, skySmallPrint, skyTitle } from '../words/lunar/figures.ts';
+import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
+import { pageFrame, type LegendEntry } from './frame.ts';
+import { fillSwatch, trackPath, trackSwatch } from './layers.ts';
 import type { Theme } from './theme.ts';
-import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
+import { FONT_CREDIT, measureText } from './typography.ts';
 
 export interface SkySceneInput {
   readonly eclipse: LunarEclipse;
@@ -39,14 +42,6 @@ export interface SkyScene {
 }
 
 const SKY_ORDER: readonly SkyClass[] = ['day', 'civil', 'nautical', 'astronomical', 'night'];
-const SKY_WORDS: Record<SkyClass, string> = {
-  day: 'daylight',
-  civil: 'civil twilight',
-  nautical: 'nautical twilight',
-  astronomical: 'astronomical twilight',
-  night: 'night',
-};
-const KIND_WORDS: Record<LunarEclipse['kind'], string> = { total: 'total', partial: 'partial', penumbral: 'penumbral' };
 
 type Phase = 'outside' | 'penumbral' | 'partial' | 'total';
 
@@ -78,45 +73,34 @@ export function localHourTicks(clock: CivilClock, fromUtDays: number, toUtDays: 
 
 export function composeSkyScene(input: SkySceneInput): SkyScene {
   const { eclipse, clock, theme, size, track, events } = input;
-  const layout = layoutFor(size);
-  const { unit, margin } = layout;
-  const W = size.widthPx;
-  const H = size.heightPx;
-  const contentWidth = W - 2 * margin;
 
-  const title = input.title ?? `The ${KIND_WORDS[eclipse.kind]} lunar eclipse from ${input.placeName} · ${clock.date(eclipse.greatest.utDays)}`;
-  const titleText = fitText(title, layout.titleStyle, contentWidth);
-  const summaryLines = wrapText(input.summary, layout.subtitleStyle, contentWidth);
-  const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
-  const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
-  const headerBottom = subtitleBaseline + (summaryLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + 16 * unit;
-
+  const title = input.title ?? skyTitle(eclipse, input.placeName, clock);
   const first = track[0]!.moment.utDays;
   const last = track[track.length - 1]!.moment.utDays;
   const zoneName = clock.zoneDescriptionBetween(first, last);
   // When the clocks change inside the figure, every time on it carries its own zone's name.
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays) : clock.time(utDays));
-  const smallPrint = [
-    `Local time: ${zoneName}, 24-hour clock. Altitude of the Moon's centre with standard refraction, above a sea-level horizon; letters under the path: where to look (compass point, e.g. ESE = east-southeast).`,
-    `Shadow: ${eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention; ΔT ${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source}).`,
-    'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',
-    `${input.credits} Type: ${FONT_CREDIT}. Made with ${input.generator}.`,
-  ].join(' ');
-  const smallLines = wrapText(smallPrint, layout.smallStyle, contentWidth);
-  const smallHeight = smallLines.length * layout.smallStyle.sizePx * 1.4;
+  const smallPrint = skySmallPrint(eclipse, zoneName, input.generator, { places: input.credits, font: FONT_CREDIT });
 
-  // Legend row: the sky's classes and the path's phases.
-  const swatch = 14 * unit;
-  const legendItems: { fill: string; label: string; line?: boolean }[] = [
-    ...SKY_ORDER.map((k) => ({ fill: theme.sky[k], label: SKY_WORDS[k] })),
-    { fill: theme.path.penumbral, label: 'penumbral phase', line: true },
-    { fill: theme.path.partial, label: 'partial phase', line: true },
-    ...(eclipse.kind === 'total' ? [{ fill: theme.path.total, label: 'totality', line: true }] : []),
+  // Legend: the sky's classes and the track's phases, each swatch drawn as its layer is.
+  const unitOf = layoutFor(size).unit;
+  const legend: LegendEntry[] = [
+    ...SKY_ORDER.map((k) => ({ label: SKY_WORDS[k], swatch: fillSwatch(theme.sky[k], theme, unitOf) })),
+    { label: SKY_PHASE_WORDS.penumbral, swatch: trackSwatch(theme.track.penumbral, theme, unitOf) },
+    { label: SKY_PHASE_WORDS.partial, swatch: trackSwatch(theme.track.partial, theme, unitOf) },
+    ...(eclipse.kind === 'total' ? [{ label: SKY_PHASE_WORDS.total, swatch: trackSwatch(theme.track.total, theme, unitOf) }] : []),
   ];
-  const legendRowHeight = layout.legendStyle.sizePx * 1.7;
-  const rows = flowRows(legendItems, (item) => swatch + 6 * unit + measureText(item.label, layout.legendStyle) + 14 * unit, contentWidth, margin);
-  const footerHeight = rows.length * legendRowHeight + 10 * unit + smallHeight;
+  const page = pageFrame({
+    size, theme, id: 'sky', title, subtitle: input.summary, description: `${input.summary} ${smallPrint}`, smallPrint, legend,
+    legendSetting: { swatchUnits: 14, gapUnits: 14, gapInWidth: true }, headerGapUnits: 16,
+  });
+  const { layout } = page;
+  const { unit, margin } = layout;
+  const W = size.widthPx;
+  const H = size.heightPx;
+  const headerBottom = page.headerBottom;
+  const footerHeight = page.footerHeight;
 
   // The plot: room on the left for altitude ticks, below for hour ticks.
   const axisStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
@@ -135,11 +119,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   const y = (altDeg: number) => plot.bottom - ((altDeg - altBottom) / (altTop - altBottom)) * (plot.bottom - plot.top);
 
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="sky-title sky-desc">`);
-  out.push(`<title id="sky-title">${escapeXml(title)}</title>`);
-  out.push(`<desc id="sky-desc">${escapeXml(`${input.summary} ${smallPrint}`)}</desc>`);
-  out.push(`<defs><clipPath id="plot"><rect x="${n2(plot.left)}" y="${n2(plot.top)}" width="${n2(plot.right - plot.left)}" height="${n2(plot.bottom - plot.top)}"/></clipPath></defs>`);
-  out.push(`<rect width="${W}" height="${H}" fill="${theme.paper}"/>`);
+  const defs = `<defs><clipPath id="plot"><rect x="${n2(plot.left)}" y="${n2(plot.top)}" width="${n2(plot.right - plot.left)}" height="${n2(plot.bottom - plot.top)}"/></clipPath></defs>`;
 
   // Sky bands: one rectangle per run of samples with the same class.
   let runStart = 0;
@@ -160,7 +140,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     out.push(`<path d="M${n2(plot.left)},${n2(gy)}H${n2(plot.right)}" stroke="${alt === 0 ? theme.text : theme.graticule}" stroke-width="${n2((alt === 0 ? 1.4 : 0.5) * unit)}" stroke-opacity="${alt === 0 ? 1 : 0.45}"/>`);
     out.push(textElement(`${alt < 0 ? '−' : ''}${Math.abs(alt)}°`, plot.left - 6 * unit, gy + axisStyle.sizePx * 0.35, axisStyle, theme.textMuted, 'end'));
   }
-  out.push(labelElement('horizon', plot.left + 34 * unit, y(0) - 5 * unit, { sizePx: axisStyle.sizePx, weight: 'regular' }, theme, unit));
+  out.push(labelElement(SKY_HORIZON, plot.left + 34 * unit, y(0) - 5 * unit, { sizePx: axisStyle.sizePx, weight: 'regular' }, theme, unit));
 
   // Hour ticks in local time: each whole hour of the clock in force at that instant, so that a
   // clock change inside the figure shows as a repeated or skipped hour, each labelled with its zone.
@@ -182,8 +162,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     if (segment.length > 1 && segmentPhase) {
       // Below the horizon the path fades: the Moon is there, but no one sees it.
       const dash = segmentUp ? '' : ' opacity="0.4"';
-      out.push(`<path d="M${segment.join('L')}" fill="none" stroke="${theme.pathCasing}" stroke-opacity="0.8" stroke-width="${n2((widths[segmentPhase] + 2.6) * unit)}" stroke-linecap="round" stroke-linejoin="round"${dash}/>`);
-      out.push(`<path d="M${segment.join('L')}" fill="none" stroke="${theme.path[segmentPhase]}" stroke-width="${n2(widths[segmentPhase] * unit)}" stroke-linecap="round" stroke-linejoin="round"${dash}/>`);
+      out.push(trackPath(`M${segment.join('L')}`, theme.track[segmentPhase], widths[segmentPhase], theme, unit, dash));
     }
   };
   for (const sample of track) {
@@ -228,8 +207,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
   for (const event of shown) {
     const px = x(event.moment.utDays);
     const py = y(event.moonAltitudeDeg);
-    const name = event.event === 'greatest' ? 'Greatest' : event.event === 'moonrise' ? 'Moonrise' : event.event === 'moonset' ? 'Moonset' : (event.event as ContactName);
-    const text = `${name} ${timeText(event.moment.utDays)}`;
+    const text = skyEventLabel(event.event as ContactName | 'greatest' | 'moonrise' | 'moonset', timeText(event.moment.utDays));
     out.push(`<circle cx="${n2(px)}" cy="${n2(py)}" r="${n2(4 * unit)}" fill="${theme.paper}" stroke="${theme.text}" stroke-width="${n2(1.4 * unit)}"/>`);
     const step = labelStyle.sizePx * 1.3;
     const spots = [-12 * unit, 12 * unit + labelStyle.sizePx * 0.8, -12 * unit - step, 12 * unit + labelStyle.sizePx * 0.8 + step, -12 * unit - 2 * step]
@@ -240,23 +218,5 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     out.push(labelElement(text, px, ly, labelStyle, theme, unit));
   }
 
-  // Header, legend, small print.
-  out.push(textElement(titleText, margin, titleBaseline, layout.titleStyle, theme.text));
-  summaryLines.forEach((line, i) => out.push(textElement(line, margin, subtitleBaseline + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted)));
-  const legendTop = H - margin - footerHeight;
-  rows.forEach((row, r) => {
-    const ly = legendTop + r * legendRowHeight;
-    for (const item of row) {
-      out.push(item.line
-        ? `<path d="M${n2(item.x)},${n2(ly + swatch / 2)}h${n2(swatch)}" stroke="${theme.pathCasing}" stroke-opacity="0.8" stroke-width="${n2(6.6 * unit)}" stroke-linecap="round"/>`
-          + `<path d="M${n2(item.x)},${n2(ly + swatch / 2)}h${n2(swatch)}" stroke="${item.fill}" stroke-width="${n2(4 * unit)}" stroke-linecap="round"/>`
-        : `<rect x="${n2(item.x)}" y="${n2(ly + swatch * 0.1)}" width="${n2(swatch)}" height="${n2(swatch * 0.8)}" fill="${item.fill}" stroke="${theme.textMuted}" stroke-width="${n2(0.5 * unit)}"/>`);
-      out.push(textElement(item.label, item.x + swatch + 6 * unit, ly + swatch * 0.8, layout.legendStyle, theme.text));
-    }
-  });
-  smallLines.forEach((line, i) => {
-    out.push(textElement(line, margin, H - margin - smallHeight + layout.smallStyle.sizePx * (1 + i * 1.4) - layout.smallStyle.sizePx * 0.4, layout.smallStyle, theme.textMuted));
-  });
-  out.push('</svg>');
-  return { svg: out.join('\n'), title, description: `${input.summary} ${smallPrint}`, dots, labelPlates, compassMarks };
+  return { svg: page.render({ defs, layers: out, footer: 'page-bottom' }), title, description: `${input.summary} ${smallPrint}`, dots, labelPlates, compassMarks };
 }

@@ -28,25 +28,26 @@ export interface Theme {
   readonly coastlineOpacity: number;
   readonly graticule: string;
   readonly graticuleOpacity: number;
-  /** Moon-up edges at the start and end of the zone-defining phase. */
-  readonly edgeStrong: string;
-  /** Moon-up edges at the other stages. */
-  readonly edgeLight: string;
+  /** Where the body rises or sets at the start and end of the phase that defines the zones. */
+  readonly boundaryStrong: string;
+  /** Where it rises or sets at the other stages. */
+  readonly boundaryLight: string;
   /** Lines of the continuous field. */
   readonly field: string;
-  readonly marker: string;
+  /** The point under the body at greatest. */
+  readonly centreMark: string;
   readonly text: string;
   readonly textMuted: string;
   /** Halo behind map labels. */
   readonly halo: string;
   readonly haloOpacity: number;
-  /** The "view from here" figure: the sky's brightness behind the Moon's path. */
+  /** The "view from here" figure: the sky's brightness behind the body's track. */
   readonly sky: Readonly<Record<SkyClass, string>>;
   readonly ground: string;
-  /** Drawn under the Moon's path on every sky: it shows where the path's own colour would not. */
-  readonly pathCasing: string;
-  /** The Moon's path, by phase. */
-  readonly path: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
+  /** Drawn under the body's track on every sky: it shows where the track's own colour would not. */
+  readonly trackCasing: string;
+  /** The body's track across the sky, by phase. */
+  readonly track: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
 }
 
 export const THEMES: Readonly<Record<ThemeName, Theme>> = {
@@ -61,18 +62,18 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     coastlineOpacity: 0.85,
     graticule: '#8a93a3',
     graticuleOpacity: 0.3,
-    edgeStrong: '#10152b',
-    edgeLight: '#3a4259',
+    boundaryStrong: '#10152b',
+    boundaryLight: '#3a4259',
     field: '#b8581c',
-    marker: '#f0b429',
+    centreMark: '#f0b429',
     text: '#161a26',
     textMuted: '#4b5263',
     halo: '#faf8f3',
     haloOpacity: 0.85,
     sky: { day: '#e7eef5', civil: '#c3d0e2', nautical: '#8c9dbd', astronomical: '#56658c', night: '#2b3457' },
     ground: '#d9d3c4',
-    pathCasing: '#161a26',
-    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
+    trackCasing: '#161a26',
+    track: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
   },
   dark: {
     name: 'dark',
@@ -85,18 +86,18 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     coastlineOpacity: 0.8,
     graticule: '#59627a',
     graticuleOpacity: 0.2,
-    edgeStrong: '#f5f1e6',
-    edgeLight: '#c9cedb',
+    boundaryStrong: '#f5f1e6',
+    boundaryLight: '#c9cedb',
     field: '#ff9a5c',
-    marker: '#ffd166',
+    centreMark: '#ffd166',
     text: '#f1f3f8',
     textMuted: '#b4bccb',
     halo: '#0d111b',
     haloOpacity: 0.8,
     sky: { day: '#3b4a66', civil: '#2c3852', nautical: '#1f2840', astronomical: '#161d30', night: '#0d111b' },
     ground: '#252a33',
-    pathCasing: '#05070c',
-    path: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
+    trackCasing: '#05070c',
+    track: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
   },
   print: {
     name: 'print',
@@ -109,17 +110,17 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     coastlineOpacity: 0.8,
     graticule: '#777777',
     graticuleOpacity: 0.3,
-    edgeStrong: '#000000',
-    edgeLight: '#222222',
+    boundaryStrong: '#000000',
+    boundaryLight: '#222222',
     field: '#000000',
-    marker: '#000000',
+    centreMark: '#000000',
     text: '#000000',
     textMuted: '#333333',
     halo: '#ffffff',
     haloOpacity: 0.85,
     sky: { day: '#f4f4f4', civil: '#dcdcdc', nautical: '#bdbdbd', astronomical: '#9a9a9a', night: '#7a7a7a' },
     ground: '#e6e6e6',
-    pathCasing: '#000000',
-    path: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
+    trackCasing: '#000000',
+    track: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
   },
 };

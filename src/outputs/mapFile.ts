@@ -9,7 +9,7 @@ import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../figures/map.ts';
 import { rasteriseSet, RASTER_FORMATS, type RasterFormat } from '../raster/raster.ts';
 import { localCircumstances } from '../local/lunar.ts';
-import { visibilityOf } from '../visibility/lunar/visibility.ts';
+import { visibilityOf, type Visibility } from '../visibility/lunar/visibility.ts';
 import { eclipseCaption, type Caption } from './caption.ts';
 import { visibilityGeoJson } from './geojson.ts';
 import type { PlaceLabel } from './localFormats.ts';
@@ -60,34 +60,44 @@ export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: C
 }
 
 export async function renderMapFile(request: MapRequest): Promise<MapFile> {
+  // GeoJSON is geometry alone: no fonts, scene or caption are made for it.
+  if (request.format === 'geojson') return { bytes: geoJsonBytes(visibilityOf(request.eclipse)) };
   const { files, scene, caption } = await renderMapFiles(request, [request.format]);
-  return { bytes: files.get(request.format)!, ...(request.format === 'geojson' ? {} : { scene, caption }) };
+  return { bytes: files.get(request.format)!, ...(scene ? { scene } : {}), caption };
 }
+
+const geoJsonBytes = (visibility: Visibility): Uint8Array => Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`);
 
 /**
  * One eclipse in several formats at once: the scene and caption are made
  * once and serve every picture format (a batch asks for PNG and SVG
  * together), and the raster formats, with a thumbnail if asked, come from
- * one drawing of the scene.
+ * one drawing of the scene. The scene is composed only when a picture or a
+ * thumbnail is asked for.
  */
 export async function renderMapFiles(
   request: Omit<MapRequest, 'format'>,
   formats: readonly MapFormat[],
   thumbnailWidthPx?: number,
-): Promise<{ files: Map<MapFormat, Uint8Array>; scene: Scene; caption: Caption; thumbnail?: Uint8Array }> {
+): Promise<{ files: Map<MapFormat, Uint8Array>; scene?: Scene; caption: Caption; thumbnail?: Uint8Array }> {
   const visibility = visibilityOf(request.eclipse);
+  const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
+  const files = new Map<MapFormat, Uint8Array>();
+  const pictures = formats.filter((f) => f !== 'geojson');
+  if (pictures.length === 0 && thumbnailWidthPx === undefined) {
+    for (const format of formats) files.set(format, geoJsonBytes(visibility));
+    return { files, caption };
+  }
   const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p, request.style.markClock === 'town' ? undefined : request.style.clock) }));
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
-  const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
   const rasters = await rasteriseSet(
     scene.svg,
     formats.filter((f): f is RasterFormat => (RASTER_FORMATS as readonly string[]).includes(f)),
     { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` },
     thumbnailWidthPx,
   );
-  const files = new Map<MapFormat, Uint8Array>();
   for (const format of formats) {
-    if (format === 'geojson') files.set(format, Buffer.from(`${JSON.stringify(visibilityGeoJson(visibility))}\n`));
+    if (format === 'geojson') files.set(format, geoJsonBytes(visibility));
     else if (format === 'svg') files.set(format, Buffer.from(`${scene.svg}\n`));
     else files.set(format, rasters.files.get(format)!);
   }

@@ -7,6 +7,7 @@ import type { Theme } from '../figures/theme.ts';
 import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
 import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../local/lunar.ts';
+import { skyCaption } from '../words/lunar/figures.ts';
 import type { SkyFormat } from './formatNames.ts';
 import type { LocalReport } from './localFormats.ts';
 
@@ -23,10 +24,9 @@ export interface SkyRequest {
   readonly title?: string;
 }
 
-/** The caption file published beside a sky figure: its title and summary, then alt text. */
+/** The caption file published beside a sky figure: its title and summary, then alt text (words/lunar/figures.ts). */
 export function skyCaptionText(title: string, report: LocalReport): string {
-  const alt = `Chart of the Moon's height above the horizon through the night at ${report.place.name}, local time along the bottom, with the eclipse's phases marked on its path and the twilight behind.`;
-  return `${title}. ${report.summary}\n\nAlt text: ${alt}\n`;
+  return skyCaption(title, report.summary, report.place.name);
 }
 
 export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {

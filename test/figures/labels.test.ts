@@ -96,7 +96,7 @@ test('marked towns: their own symbol (ink square, not the Moon-overhead ring\'s 
     const hex = (h: string) => [1, 3, 5].map((i) => parseInt(h.slice(i, i + 2), 16));
     const distance = (a: number[], b: number[]) => Math.hypot(...a.map((v, i) => v - b[i]!));
     assert.ok(distance(pixel, hex(THEMES.light.text)) < 30, `symbol ${pixel}`);
-    assert.ok(distance(pixel, hex(THEMES.light.marker)) > 150, 'unlike the Moon-overhead ring');
+    assert.ok(distance(pixel, hex(THEMES.light.centreMark)) > 150, 'unlike the Moon-overhead ring');
   }
 });
 

@@ -69,11 +69,11 @@ for (const name of THEME_NAMES) {
   test(`${name} theme: every phase of the Moon's path stands out on every sky — its colour or its casing differs by ≥ 25 in L* (CIE L*, IEC 61966-2-1)`, () => {
     const theme = THEMES[name];
     for (const [sky, skyHex] of Object.entries(theme.sky)) {
-      for (const [phase, pathHex] of Object.entries(theme.path)) {
-        const step = Math.max(Math.abs(lightness(pathHex) - lightness(skyHex)), Math.abs(lightness(theme.pathCasing) - lightness(skyHex)));
+      for (const [phase, pathHex] of Object.entries(theme.track)) {
+        const step = Math.max(Math.abs(lightness(pathHex) - lightness(skyHex)), Math.abs(lightness(theme.trackCasing) - lightness(skyHex)));
         assert.ok(step >= 25, `${phase} on ${sky}: ΔL* ${step.toFixed(1)}`);
         // The faint penumbral line against its own casing, so that it reads on night and twilight alike.
-        if (phase === 'penumbral') assert.ok(Math.abs(lightness(pathHex) - lightness(theme.pathCasing)) >= 40, `${phase} against its casing`);
+        if (phase === 'penumbral') assert.ok(Math.abs(lightness(pathHex) - lightness(theme.trackCasing)) >= 40, `${phase} against its casing`);
       }
     }
   });

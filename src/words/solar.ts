@@ -25,7 +25,7 @@ const AUTHORITIES = 'Follow the advice of your local health authorities.';
 
 const SHORT_VIEWERS = 'Eye safety: watch only through ISO 12312-2 eclipse viewers or by projection; never look at a partial or annular phase unprotected, however much of the Sun is covered.';
 const SHORT_TOTALITY = 'Viewers off only while totality hides the Sun completely, back on at the first bright light.';
-const SHORT_NO_TOTALITY = 'Here, at no time is it safe to look without a filter.';
+const SHORT_NO_TOTALITY = 'Outside the path of totality, at no time is it safe to look without a filter.';
 const SHORT_BOTH = 'In the path, viewers off only while totality hides the Sun completely, back on at the first bright light; outside it, at no time is it safe to look without a filter.';
 const SHORT_REST = 'No binoculars, telescopes or cameras without a front solar filter. Supervise children; follow local health advice.';
 

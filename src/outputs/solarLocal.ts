@@ -93,7 +93,9 @@ export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilCl
   } else {
     sentences.push(`From ${placeName} the Sun is partly eclipsed: at most ${percent(local.obscurationSeen)} of its disc covered.`);
   }
-  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays)}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
+  // The local date is named where it is not the eclipse's UTC date (across the date line, or late in the UTC day).
+  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? '' : ` on ${clock.date(c1.moment.utDays)}`;
+  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays)}${localDate}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
   const rise = find('sunrise');
   const set = find('sunset');
   if (rise) sentences.push(`The Sun rises already eclipsed, at ${clock.stamp(rise.moment.utDays)}.`);

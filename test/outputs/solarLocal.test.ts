@@ -58,6 +58,10 @@ const CASES: Case[] = [
   { eclipse: '2024-04-08', place: { name: 'Hobart', latDeg: -42.88, lonDeg: 147.33, tz: 'Australia/Hobart' }, sees: 'none' },
   // The Sun rises eclipsed here: C1 before sunrise.
   { eclipse: '2023-10-14', place: { name: 'Honolulu', latDeg: 21.31, lonDeg: -157.86, tz: 'Pacific/Honolulu' }, sees: 'partial' },
+  // East of 180° yet west of the date line: the local date is the day after the eclipse's UTC date.
+  { eclipse: '2012-11-13', place: { name: "Nuku'alofa", latDeg: -21.14, lonDeg: -175.2, tz: 'Pacific/Tongatapu' }, sees: 'partial' },
+  // Near the South Pole's latitude, inside a short polar totality with a low Sun.
+  { eclipse: '2021-12-04', place: { name: 'Union Glacier', latDeg: -79.77, lonDeg: -82.86, tz: 'America/Punta_Arenas' }, sees: 'total' },
 ];
 
 const reports = new Map<Case, SolarLocalReport>();
@@ -113,6 +117,7 @@ test('what each place sees, and C1, C2, maximum, C3, C4 in the JSON, against ast
       continue;
     }
     const engine = SearchLocalSolarEclipse(MakeTime(new Date(Date.parse(`${c.eclipse}T00:00:00Z`) - 2 * DAY_SECONDS * 1000)), new EngineObserver(c.place.latDeg, c.place.lonDeg, 0));
+    assert.equal(engine.kind, c.sees, `${c.place.name}: astronomy-engine's kind`);
     assert.ok(Math.abs(Date.parse(json.events.find((e: { event: string }) => e.event === 'maximum').utc) - engine.peak.time.date.getTime()) < 2000, `${c.place.name}: maximum`);
     const pairs: [string, Date | undefined, number][] = [
       ['C1', engine.partial_begin.time.date, 6],
@@ -144,6 +149,9 @@ test('local times are RFC 3339 (§5.6) in the place\'s IANA zone and denote the 
   }
   const darwin = JSON.parse(solarLocalJson(reportOf(CASES[4]!)));
   assert.ok(darwin.events.every((e: { local: string }) => e.local.endsWith('+09:30')), 'Australia/Darwin is UTC+09:30 (IANA tz database)');
+  const tonga = JSON.parse(solarLocalJson(reportOf(CASES[9]!)));
+  assert.ok(tonga.events.every((e: { local: string }) => e.local.startsWith('2012-11-14T') && e.local.endsWith('+13:00')), 'Pacific/Tongatapu is UTC+13:00 (IANA tz database): the next day');
+  assert.match(tonga.summary, /on 14 November 2012/);
 });
 
 test('a sunset inside the eclipse: an event with sunUp false after it, the calendar cut to the Sun-up part (astronomy-engine: the Sun below the horizon at C4)', () => {

@@ -7,6 +7,10 @@
  * polygons traced on a global grid by sphere/regions.ts, so they are cut at
  * ±180°, closed along the poles and wound counter-clockwise (§3.1.6).
  *
+ * A path narrower than about two grid cells (≈ 55 km: hybrid paths, the
+ * short ends of some total ones) is traced coarsely, its polygon cutting
+ * corners by up to the path's own width; the `limit` lines are exact there.
+ *
  * The collection carries the eye-safety caution (long form, in `umbracast`)
  * and every feature its short form, so that a GIS table shows it too.
  */
@@ -16,7 +20,7 @@ import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { isoSeconds } from '../ephemeris/time.ts';
 import { K_PENUMBRA, K_UMBRA } from '../eclipses/solar/constants.ts';
-import { centralLine, equalMagnitudeCurves, equalObscurationCurves, partialLimits, pathLimits, riseSetCurves, type NorthSouth } from '../eclipses/solar/curves.ts';
+import { centralLine, equalMagnitudeCurves, equalObscurationCurves, partialLimits, pathLimits, riseSetCurves, type NorthSouth, type TimedLine } from '../eclipses/solar/curves.ts';
 import { localMaximumTT, localShadow, type LocalShadow } from '../eclipses/solar/localCore.ts';
 import { geocentricPlace } from '../eclipses/solar/surface.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
@@ -68,18 +72,23 @@ const shadowAt = (eclipse: SolarEclipse, lonLat: LonLat): SolarShadow => (atLoca
  * Δ < L2′) with the Sun on the sunward side (ζ ≥ 0). The margin
  * min(radius − Δ, ζ) is continuous, so the traced edge follows both the
  * limits and, where the path starts or ends, the sunrise and sunset limb.
- * Only places within 2° of longitude and half a degree of latitude of the
- * limits' reach are evaluated: the path lies between its limits.
+ * Only places within 2° of longitude of the limits' and central line's
+ * segments, and half a degree of latitude of their reach, are evaluated: the
+ * path lies between its limits.
  */
-function pathRegions(eclipse: SolarEclipse, limits: NorthSouth): Record<SolarShadow, PlanarMultiPolygon> {
+function pathRegions(eclipse: SolarEclipse, limits: NorthSouth, central: readonly TimedLine[]): Record<SolarShadow, PlanarMultiPolygon> {
   const empty = { umbra: [], antumbra: [] };
   const points = [...limits.north, ...limits.south].flat();
   if (points.length === 0) return empty;
   const lats = points.map((p) => p[1]);
-  // Whole degrees of longitude the limits pass through, widened by two on each side (wrapping at ±180°).
+  // Whole degrees of longitude the limits and the central line pass through (every segment, not only its
+  // ends: near the limb a minute moves the shadow by degrees), widened by two on each side, wrapping at ±180°.
   const columns = new Set<number>();
-  for (const [lon] of points) {
-    for (let d = -2; d <= 2; d++) columns.add((((Math.floor(lon) + d) % 360) + 540) % 360 - 180);
+  for (const line of [...limits.north, ...limits.south, ...central.map((c) => c.points)]) {
+    line.forEach(([lon], k) => {
+      const previous = k > 0 ? line[k - 1]![0] : lon;
+      for (let d = Math.floor(Math.min(lon, previous)) - 2; d <= Math.floor(Math.max(lon, previous)) + 2; d++) columns.add(wrapDegree(d));
+    });
   }
   const grid = placeGrid(SOLAR_PATH_GRID_DEG);
   const band = [Math.min(...lats) - 2 * SOLAR_PATH_GRID_DEG, Math.max(...lats) + 2 * SOLAR_PATH_GRID_DEG];
@@ -88,13 +97,16 @@ function pathRegions(eclipse: SolarEclipse, limits: NorthSouth): Record<SolarSha
   grid.normals.forEach((n, k) => {
     const latDeg = Math.asin(Math.max(-1, Math.min(1, n.z))) * DEG;
     const lonDeg = Math.atan2(n.y, n.x) * DEG;
-    if (latDeg < band[0]! || latDeg > band[1]! || !columns.has((((Math.floor(lonDeg) % 360) + 540) % 360) - 180)) return;
+    if (latDeg < band[0]! || latDeg > band[1]! || !columns.has(wrapDegree(Math.floor(lonDeg)))) return;
     const s = atLocalMaximum(eclipse, [lonDeg, latDeg]);
     umbra[k] = Math.min(-s.umbra - s.distance, s.zeta);
     antumbra[k] = Math.min(s.umbra - s.distance, s.zeta);
   });
   return { umbra: traceRegion(grid, umbra), antumbra: traceRegion(grid, antumbra) };
 }
+
+/** A whole degree of longitude in −180…179. */
+const wrapDegree = (d: number) => ((((d + 180) % 360) + 360) % 360) - 180;
 
 /** Split a line where the shadow changes (hybrid eclipses), the point of change ending one piece and starting the next. */
 function splitByShadow<T>(eclipse: SolarEclipse, points: readonly LonLat[], extra: readonly T[]): { shadow: SolarShadow; points: LonLat[]; extra: T[] }[] {
@@ -132,13 +144,14 @@ export function solarGeoJson(eclipse: SolarEclipse, options: SolarGeojsonOptions
     features.push({ type: 'Feature', properties: { ...properties, safety: safetyShort }, geometry });
 
   const limits = pathLimits(eclipse);
-  const paths = pathRegions(eclipse, limits);
+  const central = centralLine(eclipse);
+  const paths = pathRegions(eclipse, limits, central);
   for (const shadow of ['umbra', 'antumbra'] as const) {
     const region = roundedRegion(paths[shadow]);
     if (region.length > 0) add({ layer: 'path', shadow }, { type: 'MultiPolygon', coordinates: region } satisfies MultiPolygon);
   }
 
-  for (const line of centralLine(eclipse)) {
+  for (const line of central) {
     for (const piece of splitByShadow(eclipse, line.points, line.times)) {
       add(
         { layer: 'central-line', shadow: piece.shadow, times: piece.extra.map((m) => isoSeconds(m.utDays)) },

@@ -13,6 +13,9 @@ import { DeltaT_EspenakMeeus, MakeTime, Observer as EngineObserver, SearchLocalS
 import { InputError } from '../../src/errors.ts';
 import { standardDeltaTModel } from '../../src/ephemeris/deltaT.ts';
 import { decimalYearFromDays } from '../../src/ephemeris/time.ts';
+import { EARTH_EQUATORIAL_RADIUS_KM } from '../../src/eclipses/solar/constants.ts';
+import { localMaximumTT, localShadow } from '../../src/eclipses/solar/localCore.ts';
+import { geocentricPlace } from '../../src/eclipses/solar/surface.ts';
 import { solarLocalCircumstances } from '../../src/local/solar.ts';
 import { solarGeoJson } from '../../src/outputs/solarGeojson.ts';
 import { regionContains, ringArea } from '../../src/sphere/regions.ts';
@@ -105,6 +108,29 @@ test('the path holds the places astronomy-engine calls total, and no others, mor
   }
   const crossing = layer(geometryOf('2012-11-13'), 'central-line');
   assert.equal(crossing.length, 2, 'the 2012-11-13 central line is cut at ±180° (from memory: its path crosses the date line in the South Pacific)');
+});
+
+test('the traced path edge lies on the limit: at every vertex away from the limb and the ±180° cut, Δ = |L2′| at the place\'s maximum within 0.5 km on the fundamental plane where the shadow\'s radius is 30 km or more (issue 15\'s internal property: magnitude 1 on the path limits)', () => {
+  // Not 2023-04-20: that hybrid path is under 50 km wide, under two grid cells, everywhere.
+  for (const id of ['2024-04-08', '2012-11-13']) {
+    const eclipse = solarEclipseOn(id);
+    let checked = 0;
+    for (const f of layer(geometryOf(id), 'path')) {
+      for (const ring of (f.geometry as { coordinates: Position[][][] }).coordinates.flat()) {
+        for (const [lon, lat] of ring) {
+          if (Math.abs(lon!) === 180) continue;
+          const place = geocentricPlace([lon!, lat!]);
+          const s = localShadow(eclipse.elements, place, localMaximumTT(eclipse.elements, place, eclipse.greatest.ttDays));
+          // A path narrower than about two grid cells (shadow radius under 30 km: a hybrid path near its ends) is traced coarsely; the limit lines stay exact.
+          if (s.zeta < 0.1 || Math.abs(s.umbra) * EARTH_EQUATORIAL_RADIUS_KM < 30) continue;
+          const km = Math.abs(Math.abs(s.umbra) - s.distance) * EARTH_EQUATORIAL_RADIUS_KM;
+          assert.ok(km < 0.5, `${id} ${f.properties?.shadow} at ${lon}, ${lat}: ${km.toFixed(2)} km off the limit`);
+          checked++;
+        }
+      }
+    }
+    assert.ok(checked > 200, `${id}: ${checked} vertices`);
+  }
 });
 
 test('central-line times: astronomy-engine\'s local maximum at each sampled vertex falls on the vertex\'s time (within 2 s), and the eclipse is total there', () => {

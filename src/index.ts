@@ -31,3 +31,7 @@ export { localIcs, localJson, localMarkdown, localTable, localCsv, LOCAL_FORMATS
 export { renderSkyFile } from './outputs/skyFile.ts';
 export { runBatch, mergeManifests, type BatchOptions, type BatchSummary } from './batch/run.ts';
 export { loadStyle, validateStyle, type HouseStyle } from './batch/style.ts';
+export { solarLocalReport, solarLocalJson, solarLocalTable, solarLocalMarkdown, solarLocalCsv, solarLocalIcs, solarLocalSummary, type SolarLocalReport } from './outputs/solarLocal.ts';
+export { solarGeoJson, SOLAR_GEOMETRY_SCHEMA, type SolarGeojsonOptions } from './outputs/solarGeojson.ts';
+export { solarEclipseRecord, type SolarEclipseRecord } from './eclipses/solar/record.ts';
+export { solarSafetyText, safetyScopeForEclipse, safetyScopeForPlace, type SolarSafetyForm, type SolarSafetyScope } from './words/solar/caution.ts';

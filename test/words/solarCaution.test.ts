@@ -48,6 +48,15 @@ test('viewers come off only in totality, and go back on at the first bright ligh
   }
 });
 
+test('the outside-the-path sentence reads the same in both forms and fits a map of a partial or annular eclipse as well as a place: no "here" (the issue\'s eye-safety section)', () => {
+  const sentence = 'Outside the path of totality, at no time is it safe to look without a filter.';
+  for (const form of FORMS) {
+    const text = solarSafetyText(form, 'no-totality');
+    assert.ok(text.includes(sentence), form);
+    assert.doesNotMatch(text, /\bhere\b/i, form);
+  }
+});
+
 test('never the lunar caution: no "naked eye", no "safe to watch"', () => {
   for (const form of FORMS) {
     for (const scope of SCOPES) {

@@ -47,7 +47,7 @@ export const SOLAR_ENGLISH: SolarWords = {
     short: {
       viewers: 'Eye safety: watch only through ISO 12312-2 eclipse viewers or by projection; never look at a partial or annular phase unprotected, however much of the Sun is covered.',
       totality: 'Viewers off only while totality hides the Sun completely, back on at the first bright light.',
-      noTotality: 'Here, at no time is it safe to look without a filter.',
+      noTotality: 'Outside the path of totality, at no time is it safe to look without a filter.',
       both: 'In the path, viewers off only while totality hides the Sun completely, back on at the first bright light; outside it, at no time is it safe to look without a filter.',
       rest: 'No binoculars, telescopes or cameras without a front solar filter. Supervise children; follow local health advice.',
     },

@@ -1,0 +1,343 @@
+/**
+ * What one place sees of a solar eclipse, as a table, markdown, CSV
+ * (RFC 4180), an iCalendar file (RFC 5545) and the `umbracast.local/1` JSON
+ * contract for `body: 'solar'`. Every format carries the eye-safety caution
+ * (src/words/solar.ts, long form, scoped to whether the place sees
+ * totality): the first line of the table and markdown, the first row of the
+ * CSV, `safety` in JSON, every VEVENT's description. The lunar naked-eye
+ * line is never written here.
+ *
+ * Times are in the place's zone through the same clock as the lunar side
+ * (`civilClock`); the table and markdown print them to the second, since a
+ * total or annular phase lasts minutes.
+ */
+import { stringify } from 'csv-stringify/sync';
+import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
+import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
+import { K_PENUMBRA, K_UMBRA, LOW_SUN_DEG, NEAR_EDGE_KM } from '../eclipses/solar/constants.ts';
+import type { SolarEclipse } from '../eclipses/solar/types.ts';
+import { solarLocalCircumstances, type SolarLocalCircumstances, type SolarLocalEvent, type SolarLocalEventName } from '../local/solar.ts';
+import { safetyScopeForPlace, solarSafetyText, type SolarSafetyScope } from '../words/solar/caution.ts';
+import { foldIcsLine, icsText, icsTime } from './icalendar.ts';
+import { altitude2, ICS_STAMP, LOCAL_SCHEMA, localIso, type PlaceLabel } from './localFormats.ts';
+
+export interface SolarLocalReport {
+  readonly local: SolarLocalCircumstances;
+  readonly place: PlaceLabel;
+  readonly clock: CivilClock;
+  readonly summary: string;
+  /** The eye-safety caution for this place: totality seen here or not. */
+  readonly safetyScope: SolarSafetyScope;
+  readonly safety: string;
+}
+
+/** Everything the solar local formats print, for one eclipse and one place in its clock. */
+export function solarLocalReport(eclipse: SolarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }): SolarLocalReport {
+  const { place, clock } = chosen;
+  const local = solarLocalCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
+  const safetyScope = safetyScopeForPlace(local.kind === 'total');
+  return { local, place, clock, summary: solarLocalSummary(local, clock, place.name), safetyScope, safety: solarSafetyText('long', safetyScope) };
+}
+
+// ---- words (to move to src/words/solar/ with the caution) ------------------------------------
+
+export const SOLAR_EVENT_WORDS: Record<SolarLocalEventName, string> = {
+  C1: 'the Moon begins to cover the Sun',
+  C2: 'central phase begins',
+  maximum: 'maximum eclipse',
+  C3: 'central phase ends',
+  C4: 'the Moon leaves the Sun',
+  sunrise: 'sunrise',
+  sunset: 'sunset',
+};
+
+const CENTRAL_WORDS = { total: 'totality', annular: 'annularity' } as const;
+
+function eventWords(local: SolarLocalCircumstances, event: SolarLocalEventName): string {
+  if (event !== 'C2' && event !== 'C3') return SOLAR_EVENT_WORDS[event];
+  const central = local.kind === 'total' || local.kind === 'annular' ? CENTRAL_WORDS[local.kind] : 'central phase (Sun below the horizon)';
+  return `${central} ${event === 'C2' ? 'begins' : 'ends'}`;
+}
+
+/** "4 min 28 s", "52 s": central durations to the second. */
+export function minutesAndSeconds(seconds: number): string {
+  const whole = Math.round(seconds);
+  const minutes = Math.floor(whole / 60);
+  return minutes === 0 ? `${whole} s` : `${minutes} min ${String(whole % 60).padStart(2, '0')} s`;
+}
+
+const percent = (fraction: number) => `${Math.round(fraction * 100)} %`;
+
+/** A wall-clock time to the second with its own zone's name: "13:27:10 CDT". */
+function clockSeconds(clock: CivilClock, utDays: number): string {
+  return `${clock.rfc3339(utDays).slice(11, 19)} ${clock.abbreviation(utDays)}`;
+}
+
+/** What the place sees, in two or three sentences, from the circumstances alone. */
+export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilClock, placeName: string): string {
+  const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
+  const c1 = find('C1');
+  const c4 = find('C4');
+  if (!c1 || !c4) return `From ${placeName} the Moon's shadow misses: no eclipse of the Sun is seen on ${local.eclipse.id}.`;
+  if (local.kind === 'none') {
+    return `From ${placeName} the Sun is below the horizon for the whole eclipse (${clock.range(c1.moment.utDays, c4.moment.utDays)}): nothing is seen.`;
+  }
+  const sentences: string[] = [];
+  const c2 = find('C2');
+  const c3 = find('C3');
+  const maximum = find('maximum')!;
+  if ((local.kind === 'total' || local.kind === 'annular') && c2 && c3 && local.centralSeconds !== undefined) {
+    const what = local.kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,';
+    sentences.push(`From ${placeName} ${what} for ${minutesAndSeconds(local.centralSeconds)}, ${clockSeconds(clock, c2.moment.utDays)} to ${clockSeconds(clock, c3.moment.utDays)}.`);
+  } else {
+    sentences.push(`From ${placeName} the Sun is partly eclipsed: at most ${percent(local.obscurationSeen)} of its disc covered.`);
+  }
+  // The local date is named where it is not the eclipse's UTC date (across the date line, or late in the UTC day).
+  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? '' : ` on ${clock.date(c1.moment.utDays)}`;
+  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays)}${localDate}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
+  const rise = find('sunrise');
+  const set = find('sunset');
+  if (rise) sentences.push(`The Sun rises already eclipsed, at ${clock.stamp(rise.moment.utDays)}.`);
+  if (set) sentences.push(`The Sun sets still eclipsed, at ${clock.stamp(set.moment.utDays)}.`);
+  if (local.nearPathEdge) {
+    sentences.push(`This place lies within ${NEAR_EDGE_KM} km of the path's edge: the Moon's uneven limb and the uncertainty of ΔT can move the edge by a kilometre or more, so the central phase may be shorter or missed.`);
+  }
+  if (local.lowSun) sentences.push(`The Sun stands below ${LOW_SUN_DEG}° at best: a clear, low horizon in its direction is needed.`);
+  return sentences.join(' ');
+}
+
+// ---- data ---------------------------------------------------------------------------------------
+
+const round = (value: number, places: number) => {
+  const factor = 10 ** places;
+  const r = Math.round(value * factor) / factor;
+  return Object.is(r, -0) ? 0 : r;
+};
+
+/** Fixed decimals, rounded once from the full value; never "-0.0". */
+const fixed = (value: number, places: number) => {
+  const text = value.toFixed(places);
+  return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
+};
+
+export function solarLocalJson(report: SolarLocalReport): string {
+  const { local, place, clock, summary } = report;
+  const e = local.eclipse;
+  return `${JSON.stringify({
+    schema: LOCAL_SCHEMA,
+    body: 'solar',
+    eclipse: e.id,
+    eclipseKind: e.kind,
+    kind: local.kind,
+    calendar: DATA_CALENDAR,
+    deltaT: round(e.deltaT.seconds, 1),
+    moonRadius: { penumbra: K_PENUMBRA, umbra: K_UMBRA },
+    place: { name: place.name, lat: place.latDeg, lon: place.lonDeg, tz: place.tz },
+    magnitude: round(local.magnitude, 4),
+    obscuration: round(local.obscuration, 4),
+    obscurationSeen: round(local.obscurationSeen, 4),
+    ...(local.centralSeconds !== undefined ? { centralSeconds: Math.round(local.centralSeconds) } : {}),
+    insidePath: local.insidePath,
+    ...(local.centralLineKm !== undefined ? { centralLineKm: round(local.centralLineKm, 1) } : {}),
+    ...(local.nearestLimitKm !== undefined ? { nearestLimitKm: round(local.nearestLimitKm, 1) } : {}),
+    nearPathEdge: local.nearPathEdge,
+    lowSun: local.lowSun,
+    events: local.events.map((ev) => ({
+      event: ev.event,
+      utc: isoSeconds(ev.moment.utDays),
+      local: localIso(clock, ev.moment),
+      sunAltitude: altitude2(ev.sunAltitudeDeg),
+      sunAzimuth: round(ev.sunAzimuthDeg, 1),
+      sunUp: ev.sunUp,
+    })),
+    summary,
+    safety: report.safety,
+  }, null, 2)}\n`;
+}
+
+// ---- table and markdown ---------------------------------------------------------------------------
+
+function zoneHeader(report: SolarLocalReport): string {
+  const { clock, local } = report;
+  const first = local.events[0]?.moment.utDays ?? local.eclipse.greatest.utDays;
+  const last = local.events[local.events.length - 1]?.moment.utDays ?? first;
+  const changes = clock.offsetChanges(first, last);
+  return changes.length === 0 ? clock.zoneLabel(first) : [clock.zoneLabel(first), ...changes.map((c) => c.after)].join(' → ');
+}
+
+const HEADER_RIGHT = [false, false, false, false, true, true, false];
+
+function header(report: SolarLocalReport): string[] {
+  return ['Event', 'What happens', `Local (${zoneHeader(report)})`, 'UTC', 'Sun alt.', 'Sun az.', 'Sun up'];
+}
+
+function rows(report: SolarLocalReport): string[][] {
+  const { clock, local } = report;
+  return local.events.map((ev: SolarLocalEvent) => [
+    ev.event === 'maximum' ? 'Maximum' : ev.event === 'sunrise' ? 'Sunrise' : ev.event === 'sunset' ? 'Sunset' : ev.event,
+    eventWords(local, ev.event),
+    `${clock.rfc3339(ev.moment.utDays).slice(0, 10)} ${clockSeconds(clock, ev.moment.utDays)}`,
+    isoSeconds(ev.moment.utDays).slice(11, 19),
+    `${fixed(ev.sunAltitudeDeg, 1)}°`,
+    `${Math.round(ev.sunAzimuthDeg) % 360}°`,
+    ev.sunUp ? 'yes' : 'no',
+  ]);
+}
+
+function titleOf(report: SolarLocalReport): string {
+  const { local, place } = report;
+  const lat = `${Math.abs(place.latDeg).toFixed(2)}°${place.latDeg >= 0 ? 'N' : 'S'}`;
+  const lon = `${Math.abs(place.lonDeg).toFixed(2)}°${place.lonDeg >= 0 ? 'E' : 'W'}`;
+  const kind = local.eclipse.kind;
+  return `${kind[0]!.toUpperCase()}${kind.slice(1)} solar eclipse ${local.eclipse.id} from ${place.name} (${lat}, ${lon}; ${place.tz})`;
+}
+
+function seenWords(local: SolarLocalCircumstances): string {
+  const m = fixed(local.magnitude, 3);
+  const o = percent(local.obscuration);
+  switch (local.kind) {
+    case 'total': return `Seen here: total (magnitude ${m}).`;
+    case 'annular': return `Seen here: annular (magnitude ${m}, ${o} of the Sun's disc covered).`;
+    case 'partial': return `Seen here: partial (magnitude ${m}, ${o} of the Sun's disc covered at maximum).`;
+    case 'none': return 'Seen here: nothing.';
+  }
+}
+
+function notes(report: SolarLocalReport): string[] {
+  const { clock, local } = report;
+  const first = local.events[0]?.moment.utDays ?? local.eclipse.greatest.utDays;
+  const last = local.events[local.events.length - 1]?.moment.utDays ?? first;
+  return [
+    `Local time: ${clock.zoneDescriptionBetween(first, last)}. Times to the second. Sun altitude: its centre, with refraction (Saemundsson) from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.`,
+    `Moon radius k1 = ${K_PENUMBRA} (penumbra: C1, C4, magnitude), k2 = ${K_UMBRA} (umbra and antumbra: C2, C3); smooth lunar limb, sea-level observer; ΔT ${local.eclipse.deltaT.seconds.toFixed(1)} s (${local.eclipse.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
+  ];
+}
+
+/** Plain text: the caution first, then the title, the events, what is seen, the summary and the notes. */
+export function solarLocalTable(report: SolarLocalReport): string {
+  const head = header(report);
+  const body = rows(report);
+  const widths = head.map((h, i) => Math.max(h.length, ...body.map((r) => r[i]!.length)));
+  const line = (cells: string[]) => cells.map((c, i) => (HEADER_RIGHT[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
+  const table = body.length > 0 ? [line(head), line(widths.map((w) => '─'.repeat(w))), ...body.map(line), ''] : [];
+  return [`EYE SAFETY: ${report.safety}`, '', titleOf(report), '', ...table, seenWords(report.local), report.summary, '', ...notes(report), ''].join('\n');
+}
+
+export function solarLocalMarkdown(report: SolarLocalReport): string {
+  const head = header(report);
+  const escape = (cell: string) => cell.replace(/\|/g, '\\|');
+  const table = report.local.events.length > 0
+    ? [
+        `| ${head.map(escape).join(' | ')} |`,
+        `| ${head.map((_, i) => (HEADER_RIGHT[i] ? '---:' : '---')).join(' | ')} |`,
+        ...rows(report).map((r) => `| ${r.map(escape).join(' | ')} |`),
+        '',
+      ]
+    : [];
+  return [
+    `> **Eye safety:** ${escape(report.safety)}`,
+    '',
+    `### ${escape(titleOf(report))}`,
+    '',
+    ...table,
+    escape(`${seenWords(report.local)} ${report.summary}`),
+    '',
+    ...notes(report).map((n) => `<small>${escape(n)}</small>  `),
+    '',
+  ].join('\n');
+}
+
+// ---- CSV (RFC 4180) -------------------------------------------------------------------------------
+
+export const SOLAR_CSV_COLUMNS = ['event', 'utc', 'local', 'sunAltitude', 'sunAzimuth', 'sunUp', 'calendar', 'note'] as const;
+
+/** One row per event, after a first row whose event is `safety` and whose note is the caution. */
+export function solarLocalCsv(report: SolarLocalReport): string {
+  const { clock } = report;
+  return stringify(
+    [
+      ['safety', '', '', '', '', '', '', report.safety],
+      ...report.local.events.map((ev) => [
+        ev.event, isoSeconds(ev.moment.utDays), localIso(clock, ev.moment), altitude2(ev.sunAltitudeDeg), round(ev.sunAzimuthDeg, 1), ev.sunUp, DATA_CALENDAR, '',
+      ]),
+    ],
+    { header: true, columns: [...SOLAR_CSV_COLUMNS] },
+  );
+}
+
+// ---- iCalendar (RFC 5545) ---------------------------------------------------------------------------
+
+/** The stretches of a phase with the Sun up: from its start if the Sun is up then, else from a sunrise; to a sunset or its end. */
+function sunUpStretches(local: SolarLocalCircumstances, start: SolarLocalEvent, end: SolarLocalEvent): [number, number][] {
+  const fromUt = start.moment.utDays;
+  const toUt = end.moment.utDays;
+  const stretches: [number, number][] = [];
+  let openedAt = start.sunUp ? fromUt : undefined;
+  for (const ev of local.events) {
+    const t = ev.moment.utDays;
+    if (t <= fromUt || t >= toUt) continue;
+    if (ev.event === 'sunrise' && openedAt === undefined) openedAt = t;
+    if (ev.event === 'sunset' && openedAt !== undefined) {
+      if (t > openedAt) stretches.push([openedAt, t]);
+      openedAt = undefined;
+    }
+  }
+  if (openedAt !== undefined && toUt > openedAt) stretches.push([openedAt, toUt]);
+  return stretches;
+}
+
+/**
+ * One event per phase and stretch of it seen with the Sun up (the partial
+ * eclipse C1–C4, the central phase C2–C3); for an eclipse not seen at all,
+ * one informative event that says so (a calendar needs a component, RFC 5545
+ * §3.6). Every description ends with the caution.
+ */
+export function solarLocalIcs(report: SolarLocalReport, generator: string): string {
+  const { local, place } = report;
+  const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
+  const where = `${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}`;
+  const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
+  const vevent = (uid: string, from: Moment, to: Moment, summary: string, description: string) =>
+    lines.push(
+      'BEGIN:VEVENT',
+      `UID:${uid}@umbracast`,
+      `DTSTAMP:${ICS_STAMP}`,
+      `DTSTART:${icsTime(from)}`,
+      `DTEND:${icsTime(to)}`,
+      `SUMMARY:${icsText(summary)}`,
+      `LOCATION:${icsText(place.name)}`,
+      `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
+      `DESCRIPTION:${icsText(`${description} ${report.summary} EYE SAFETY: ${report.safety}`)}`,
+      'TRANSP:TRANSPARENT',
+      'END:VEVENT',
+    );
+  const central = local.kind === 'total' || local.kind === 'annular' ? CENTRAL_WORDS[local.kind] : undefined;
+  const phases = [
+    { key: 'partial', title: 'Partial phases of the solar eclipse', start: find('C1'), end: find('C4') },
+    ...(central ? [{ key: central, title: central === 'totality' ? 'Totality' : 'Annularity', start: find('C2'), end: find('C3') }] : []),
+  ];
+  for (const phase of phases) {
+    if (!phase.start || !phase.end) continue;
+    const { start, end } = phase;
+    sunUpStretches(local, start, end).forEach(([a, b], k) => {
+      const from = a === start.moment.utDays ? start.moment : momentFromUT(a, start.moment.deltaTSeconds);
+      const to = b === end.moment.utDays ? end.moment : momentFromUT(b, end.moment.deltaTSeconds);
+      const cut = from !== start.moment || to !== end.moment;
+      vevent(
+        `${local.eclipse.id}-solar-${phase.key}${k > 0 ? `-${k + 1}` : ''}-${where}`,
+        from,
+        to,
+        `${phase.title}${cut ? ' (Sun up)' : ''}`,
+        `${phase.title} of ${local.eclipse.id}${cut ? ' (the part with the Sun above the horizon)' : ''}; predictions, weather permitting.`,
+      );
+    });
+  }
+  if (!lines.includes('BEGIN:VEVENT')) {
+    const c1 = find('C1')?.moment ?? local.eclipse.contacts.P1!;
+    const c4 = find('C4')?.moment ?? local.eclipse.contacts.P4!;
+    vevent(`${local.eclipse.id}-solar-not-seen-${where}`, c1, c4, `Solar eclipse, not visible from ${place.name}`, 'This entry only marks the date; there is nothing to see from here.');
+  }
+  lines.push('END:VCALENDAR');
+  return `${lines.map(foldIcsLine).join('\r\n')}\r\n`;
+}

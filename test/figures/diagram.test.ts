@@ -141,3 +141,17 @@ test('bad input: one line on stderr naming the option, exit 2, nothing written',
   assert.match(noEclipse.stderr, /WHEN/);
   assert.ok(!existsSync(join(dir, 'y.png')));
 });
+
+test('a clock change inside the eclipse: every time carries its own zone, the repeated hour told apart (UK summer time ends on the last Sunday of October at 01:00 UTC, as Directive 2000/84/EC sets it; IANA tz through Intl)', async () => {
+  const eclipse = eclipseOn('2050-10-30');
+  const clock = civilClock('Europe/London');
+  const s = scene(undefined, undefined, 'Europe/London', shadowDiagram(eclipse));
+  assert.match(s.description, /BST, UTC\+01:00 until 02:00 BST, then/);
+  const file = await renderDiagramFile({ eclipse, clock, theme: THEMES.light, size: { widthPx: 1600, heightPx: 1000 }, dpi: 72, format: 'svg', generator: 'umbracast test' });
+  // P1 at 00:44 UTC reads 01:44 BST; U1 at 01:44 UTC reads 01:44 on the winter clock, an hour later.
+  assert.match(file.caption, /enters the Earth's penumbra at 01:44 BST/);
+  assert.ok(eclipse.contacts.P1!.utDays < Date.UTC(2050, 9, 30, 1) / 86_400_000 - 10_957.5);
+  assert.ok(eclipse.contacts.U1!.utDays > Date.UTC(2050, 9, 30, 1) / 86_400_000 - 10_957.5);
+  assert.equal(clock.time(eclipse.contacts.P1!.utDays), clock.time(eclipse.contacts.U1!.utDays));
+  assert.notEqual(clock.abbreviation(eclipse.contacts.P1!.utDays), clock.abbreviation(eclipse.contacts.U1!.utDays));
+});

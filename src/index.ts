@@ -29,6 +29,8 @@ export { visibilityGeoJson } from './outputs/geojson.ts';
 export { eclipseCaption, type Caption } from './outputs/caption.ts';
 export { localIcs, localJson, localMarkdown, localTable, localCsv, LOCAL_FORMATS, type LocalReport } from './outputs/localFormats.ts';
 export { renderSkyFile } from './outputs/skyFile.ts';
+export { shadowDiagram, type ShadowDiagram, type DiagramMoon, type SkyOffset } from './eclipses/lunar/diagram.ts';
+export { renderDiagramFile, type DiagramRequest, type DiagramFormat } from './outputs/diagramFile.ts';
 export { runBatch, mergeManifests, type BatchOptions, type BatchSummary } from './batch/run.ts';
 export { loadStyle, validateStyle, type HouseStyle } from './batch/style.ts';
 export { solarLocalReport, solarLocalJson, solarLocalTable, solarLocalMarkdown, solarLocalCsv, solarLocalIcs, solarLocalSummary, type SolarLocalReport } from './outputs/solarLocal.ts';

@@ -29,6 +29,7 @@ const COMMANDS: Record<string, () => Promise<Register>> = {
   map: async () => (await import('./commands/map.ts')).registerMap,
   local: async () => (await import('./commands/local.ts')).registerLocal,
   sky: async () => (await import('./commands/sky.ts')).registerSky,
+  diagram: async () => (await import('./commands/diagram.ts')).registerDiagram,
   caption: async () => (await import('./commands/caption.ts')).registerCaption,
   batch: async () => (await import('./commands/batch.ts')).registerBatch,
 };

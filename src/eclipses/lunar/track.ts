@@ -22,6 +22,8 @@ export interface ShadowState {
   readonly sunSemiDiameterRad: number;
   /** Geometric geocentric Moon, km, EQJ. */
   readonly moonPositionKm: Vec3;
+  /** Apparent geocentric Sun, km, EQJ (the shadow axis points away from it). */
+  readonly sunPositionKm: Vec3;
 }
 
 export interface ShadowTrack {
@@ -53,6 +55,7 @@ export function shadowStateFrom(ttDays: number, moonKm: Vec3, sunKm: Vec3): Shad
     sunParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / sunDistanceKm),
     sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / sunDistanceKm),
     moonPositionKm: moonKm,
+    sunPositionKm: sunKm,
   };
 }
 

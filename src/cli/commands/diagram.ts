@@ -1,0 +1,62 @@
+/** `umbracast diagram [WHEN]`: the Moon's path through the Earth's shadow, with the contact times. */
+import type { Command } from 'commander';
+import { THEME_NAMES, THEMES } from '../../figures/theme.ts';
+import { writeFileAtomic } from '../../outputs/files.ts';
+import { SKY_FORMATS } from '../../outputs/formatNames.ts';
+import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
+import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../../settings/mapSettings.ts';
+import { civilClock } from '../../ephemeris/civilTime.ts';
+import type { CommandContext } from '../context.ts';
+import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { toolVersion } from '../version.ts';
+import { captionPathFor, parseOutput, withSizeOptions } from './map.ts';
+
+interface DiagramOptions extends SizeOptions, PlaceChoice, EclipseChoice {
+  theme: string;
+  title?: string;
+  output?: string;
+  format?: string;
+}
+
+const DEFAULT_SIZE = { widthPx: 1600, heightPx: 1000 };
+
+export function registerDiagram(program: Command, context: CommandContext): void {
+  const command = program
+    .command('diagram')
+    .description('the Moon\'s path through the Earth\'s shadow: the Moon at each contact and at greatest, with times (PNG, SVG, WebP or JPEG)')
+    .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
+  withPlaceOptions(command)
+    .option('--theme <name>', THEME_NAMES.join(', '), 'light')
+    .option('--title <text>', 'replace the generated title');
+  withSizeOptions(command, `${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx}`);
+  withEclipseOptions(command
+    .option('-o, --output <file>', 'output file; .png, .svg, .webp or .jpg (default out/<id>-<kind>-diagram.png); its caption is written beside it (.txt)')
+    .option('--format <name>', SKY_FORMATS.join(', ')))
+    .action(async (whenText: string | undefined, options: DiagramOptions) => {
+      const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
+      const { size, dpi } = parseSizeAndDpi(options, DEFAULT_SIZE);
+      checkTitle(options.title);
+      // Times in UTC unless a zone is given, or a place whose zone is taken.
+      const chosen = choosePlace(options, false);
+      const clock = chosen?.clock ?? civilClock(options.tz === undefined ? 'UTC' : options.tz.trim(), '--tz');
+      const eclipse = chooseEclipse(whenText, options, context.now());
+      const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-diagram`, SKY_FORMATS);
+      if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
+      // The drawing code loads when a figure is drawn, not with the command line.
+      const { renderDiagramFile } = await import('../../outputs/diagramFile.ts');
+      const file = await renderDiagramFile({
+        eclipse,
+        clock,
+        theme,
+        size,
+        dpi,
+        format,
+        generator: `umbracast ${toolVersion()}`,
+        ...(options.title !== undefined ? { title: options.title } : {}),
+      });
+      await writeFileAtomic(path, file.bytes);
+      // Every picture gets its caption beside it.
+      await writeFileAtomic(captionPathFor(path), file.caption);
+      context.stdout(`${path}\n`);
+    });
+}

@@ -149,7 +149,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
 
   // The Moon's path, and an arrowhead on it after P4: the direction of motion.
   const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
-  out.push(`<path d="M${points.join('L')}" fill="none" stroke="${theme.pathCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}" stroke-linejoin="round"/>`);
+  out.push(`<path d="M${points.join('L')}" fill="none" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}" stroke-linejoin="round"/>`);
   out.push(`<path d="M${points.join('L')}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.8 * unit)}" stroke-linejoin="round"/>`);
   const tip = diagram.path[diagram.path.length - 1]!;
   const before = diagram.path[diagram.path.length - 3]!;
@@ -159,10 +159,10 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
     const r = i === 0 ? 0 : head;
     return `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
   });
-  out.push(`<path d="M${arrow[1]}L${arrow[0]}L${arrow[2]}Z" fill="${theme.field}" stroke="${theme.pathCasing}" stroke-opacity="0.55" stroke-width="${n2(0.8 * unit)}"/>`);
+  out.push(`<path d="M${arrow[1]}L${arrow[0]}L${arrow[2]}Z" fill="${theme.field}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(0.8 * unit)}"/>`);
 
   // The Moon at each contact (outlines) and at greatest (filled).
-  const moonFill = theme.path[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
+  const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
   for (const c of diagram.contacts) {
     out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" fill="${theme.halo}" fill-opacity="0.25" stroke="${theme.text}" stroke-width="${n2(1.1 * unit)}"/>`);
   }
@@ -247,7 +247,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
     keys.forEach((k, i) => {
       const y = keyTop + i * rowHeight;
       if (k.line) {
-        out.push(`<path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${theme.pathCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}"/><path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${k.fill}" stroke-width="${n2(1.8 * unit)}"/>`);
+        out.push(`<path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}"/><path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${k.fill}" stroke-width="${n2(1.8 * unit)}"/>`);
         out.push(textElement(k.label, table.left + swatch + 6 * unit, y + swatch * 0.7, rowStyle, theme.text));
         return;
       }

@@ -63,13 +63,6 @@ export interface OffsetChange {
   readonly after: string;
 }
 
-/** "58 min", "3 h 27 min": durations as printed on figures and in captions. */
-export function durationWords(seconds: number): string {
-  const minutes = Math.round(seconds / 60);
-  if (minutes < 60) return `${minutes} min`;
-  return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
-}
-
 const SECOND_DAYS = 1 / 86_400;
 /** Offsets change at most a few times a year: a scan every half hour finds each, bisection pins it to the second. */
 const CHANGE_SCAN_DAYS = 1 / 48;

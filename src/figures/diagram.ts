@@ -9,7 +9,8 @@ import type { ShadowDiagram, SkyOffset } from '../eclipses/lunar/diagram.ts';
 import type { ContactName } from '../eclipses/lunar/contacts.ts';
 import { printedFigures } from '../eclipses/lunar/figures.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
-import { durationWords, type CivilClock } from '../ephemeris/civilTime.ts';
+import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { formatDuration } from '../words/common.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
@@ -72,9 +73,9 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const depth = eclipse.kind === 'penumbral'
     ? `penumbral magnitude ${figures.penumbralMagnitude}`
     : `umbral magnitude ${figures.umbralMagnitude}`;
-  const longest = eclipse.durations.totalSeconds !== undefined ? `totality ${durationWords(eclipse.durations.totalSeconds)}`
-    : eclipse.durations.partialSeconds !== undefined ? `partial phase ${durationWords(eclipse.durations.partialSeconds)}`
-      : `penumbral phase ${durationWords(eclipse.durations.penumbralSeconds)}`;
+  const longest = eclipse.durations.totalSeconds !== undefined ? `totality ${formatDuration(eclipse.durations.totalSeconds)}`
+    : eclipse.durations.partialSeconds !== undefined ? `partial phase ${formatDuration(eclipse.durations.partialSeconds)}`
+      : `penumbral phase ${formatDuration(eclipse.durations.penumbralSeconds)}`;
   const subtitle = `The Moon's path across the shadow, deepest at ${timeText(greatestUt)} (${depth}, ${longest}). Times: ${zoneName}.`;
   const subtitleLines = wrapText(subtitle, layout.subtitleStyle, contentWidth);
   const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;

@@ -4,19 +4,19 @@
  * print, and the sky figure's caption. Kept here, apart from the drawing, so
  * that it can be reviewed and translated, and so that the lunar naked-eye line
  * can never reach a solar figure (no solar module imports this one).
- *
- * The durations use today's formatter (`durationWords`); the predictions
- * notice is the one every output carries and joins words/common.ts.
+ * Durations go through words/common.ts's `formatDuration`, and the
+ * predictions notice is the one every output carries (words/common.ts).
  */
 import type { ContactName } from '../../eclipses/lunar/contacts.ts';
 import { printedFigures } from '../../eclipses/lunar/figures.ts';
 import type { LunarEclipse } from '../../eclipses/lunar/types.ts';
-import { durationWords, type CivilClock } from '../../ephemeris/civilTime.ts';
+import type { CivilClock } from '../../ephemeris/civilTime.ts';
+import { ENGLISH, formatDuration } from '../common.ts';
 import { timeRange } from '../../ephemeris/dayMark.ts';
 import type { SkyClass } from '../../local/lunar.ts';
 
 /** Every lunar output's last word on safety: meant for lunar eclipses only. */
-const PREDICTIONS = 'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.';
+const PREDICTIONS = `${ENGLISH.predictions} A lunar eclipse is safe to watch with the naked eye.`;
 
 const KIND_TITLE: Record<LunarEclipse['kind'], string> = {
   total: 'Total lunar eclipse',
@@ -43,11 +43,11 @@ export function mapTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: 
   const minus = (text: string) => text.replace('-', '−');
   if (eclipse.kind === 'penumbral') {
     parts.push(`penumbral magnitude ${minus(figures.penumbralMagnitude)}`);
-    parts.push(`penumbral phase ${durationWords(figures.minutes.penumbral * 60)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
+    parts.push(`penumbral phase ${formatDuration(figures.minutes.penumbral * 60)} (${range(c.P1!.utDays, c.P4!.utDays)})`);
   } else {
     parts.push(`umbral magnitude ${minus(figures.umbralMagnitude)}`);
-    if (eclipse.kind === 'total') parts.push(`totality ${durationWords(figures.minutes.total! * 60)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
-    parts.push(`in the umbra ${durationWords(figures.minutes.partial! * 60)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
+    if (eclipse.kind === 'total') parts.push(`totality ${formatDuration(figures.minutes.total! * 60)} (${range(c.U2!.utDays, c.U3!.utDays)})`);
+    parts.push(`in the umbra ${formatDuration(figures.minutes.partial! * 60)} (${range(c.U1!.utDays, c.U4!.utDays)})`);
   }
   const subtitle = parts.join(' · ');
   const timesIn = `Times in ${clock.zoneDescriptionBetween(c.P1!.utDays, c.P4!.utDays)}`;

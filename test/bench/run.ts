@@ -207,13 +207,18 @@ line(`PNG encoding of the world map, RGB / RGBA (bytes ${(rgbPng.length / rgbaPn
     const result = spawnSync(process.execPath, args, { env, stdio: ['ignore', 'ignore', 'ignore'] });
     if (result.status !== 0) throw new Error(`${args.join(' ')} exited ${result.status}`);
   };
+  // The same command run from tsc's modules instead of the bundle (dist/bundle/) that bin.mjs runs.
+  const modules = new URL('../../dist/cli/main.js', import.meta.url).href;
+  const fromModules = `const { main } = await import(${JSON.stringify(modules)}); process.exitCode = await main(['list', '--from', '2026', '--to', '2026']);`;
   const startUp = await alternate({
     list: run([bin, 'list', '--from', '2026', '--to', '2026']),
+    modules: run(['--input-type=module', '-e', fromModules]),
     bare: run(['-e', "require('astronomy-engine')"]),
   }, 15);
   line('umbracast list, one year, whole process (median of 15)', `${startUp.list!.toFixed(0)} ms`);
   line('bare node loading astronomy-engine, whole process', `${startUp.bare!.toFixed(0)} ms`);
   line('ratio list / bare (target ≤ 1.5)', ratio(startUp, 'list', 'bare'));
+  line('umbracast list from the bundle / from tsc\'s modules', ratio(startUp, 'list', 'modules'));
 }
 
 // A decade of maps (PNG 2400 px wide + SVG) made by the command a user runs, `umbracast batch`, each

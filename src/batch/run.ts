@@ -22,7 +22,8 @@ import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
 import type { RasterFormatName } from '../outputs/formatNames.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipses/lunar/conventions.ts';
-import { parseSizeAndDpi, optionsFromStyle } from '../settings/mapSettings.ts';
+import { pageSize } from '../settings/mapSettings.ts';
+import { mapChoicesOf } from './styleSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
 import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
@@ -129,7 +130,7 @@ export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 
 
 /** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
 export function pictureLoad(style: HouseStyle): PictureLoad {
-  const { size } = parseSizeAndDpi(optionsFromStyle(style));
+  const { size } = pageSize(mapChoicesOf(style));
   const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
   return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter((f) => RASTER_NAMES.includes(f as RasterFormatName)).length };
 }

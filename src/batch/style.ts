@@ -58,6 +58,7 @@ const styleObject = z
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),
     sky: z.boolean().default(true),
     naming: namingTemplate.default(DEFAULT_NAMING),
+    // Lunar only: the shadow's enlargement (Danjon, Chauvenet); a solar eclipse has no such convention.
     convention: enumOf(SHADOW_CONVENTIONS).default('danjon'),
     deltaT: z.number().min(-86_400).max(86_400).optional(),
   })
@@ -203,3 +204,4 @@ export function styleHash(style: HouseStyle): string {
   const sorted = JSON.stringify(style, Object.keys(style).sort());
   return createHash('sha256').update(sorted).digest('hex').slice(0, 16);
 }
+

@@ -70,7 +70,7 @@ export class SamePlace extends Error {
 
 /** The places of a style, found in the gazetteer, with their unique file-name parts. */
 export function stylePlaces(names: readonly string[]): { place: Place; slug: string }[] {
-  const places = names.map((name) => findPlace(name, '--place'));
+  const places = names.map((name) => findPlace(name, 'places'));
   const slugs = placeSlugs(places);
   return places.map((place, i) => ({ place, slug: slugs[i]! }));
 }

@@ -181,15 +181,15 @@ export function loadStyle(path: string): HouseStyle {
 
 function loadStyleUnescaped(path: string): HouseStyle {
   const extension = extname(path).toLowerCase();
-  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('--style', 'a .json, .yaml or .yml file', path);
+  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('style', 'a .json, .yaml or .yml file', path);
   let bytes: Buffer;
   try {
     bytes = readRegularFile(path, MAX_STYLE_BYTES);
   } catch (error) {
     if (!(error instanceof ReadRefused)) throw error;
-    if (error.reason === 'too large') throw new InputError('--style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
-    if (error.reason === 'not a regular file') throw new InputError('--style', 'a regular style file', `${describeReceived(path)} (${error.detail.slice(path.length + 1)})`, true);
-    throw new InputError('--style', 'a readable style file', path);
+    if (error.reason === 'too large') throw new InputError('style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
+    if (error.reason === 'not a regular file') throw new InputError('style', 'a regular style file', `${describeReceived(path)} (${error.detail.slice(path.length + 1)})`, true);
+    throw new InputError('style', 'a readable style file', path);
   }
   const data = parseStyleText(bytes.toString('utf8'), extension === '.json', path);
   if (nestingDepth(data, MAX_STYLE_DEPTH) > MAX_STYLE_DEPTH) throw new InputError(path, `a style nested at most ${MAX_STYLE_DEPTH} levels deep`, 'a file nested deeper', true);

@@ -30,3 +30,5 @@ export { localIcs, localJson, localMarkdown, localTable, localCsv, LOCAL_FORMATS
 export { renderSkyFile } from './outputs/skyFile.ts';
 export { runBatch, mergeManifests, type BatchOptions, type BatchSummary } from './batch/run.ts';
 export { loadStyle, validateStyle, type HouseStyle } from './batch/style.ts';
+export { mapSettings, pageSize, viewOf, DEFAULT_MAP_CHOICES, type MapChoices, type MapSettings, type PageChoice, type ViewChoice } from './settings/mapSettings.ts';
+export { chooseEclipse, choosePlace, type ChosenPlace, type EclipseChoice, type PlaceChoice } from './settings/choose.ts';

@@ -20,7 +20,7 @@ import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
-import type { RasterFormatName } from '../outputs/formatNames.ts';
+import { isRasterFormat } from '../raster/formats.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipses/lunar/conventions.ts';
 import { pageSize } from '../settings/mapSettings.ts';
 import { mapChoicesOf } from './styleSettings.ts';
@@ -87,7 +87,6 @@ export { LOCK_NAME } from './lock.ts';
 export const MAX_BATCH_ECLIPSES = 500;
 /** Heap ceiling of each worker process, MB (V8's heap only; pictures live outside it, see resources.ts). */
 export const WORKER_HEAP_MB = 256;
-const RASTER_NAMES: readonly RasterFormatName[] = ['png', 'webp', 'jpg'];
 
 /**
  * Remove temporary files left by a killed run (writeFileAtomic's
@@ -134,7 +133,7 @@ export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 
 export function pictureLoad(style: HouseStyle): PictureLoad {
   const { size } = pageSize(mapChoicesOf(style));
   const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
-  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter((f) => RASTER_NAMES.includes(f as RasterFormatName)).length };
+  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter(isRasterFormat).length };
 }
 
 /** Names a batch writes in outDir itself, which must be files (or absent) for the batch to replace them. */

@@ -9,7 +9,7 @@ import { THEME_NAMES } from '../../figures/theme.ts';
 import { MARK_CLOCKS } from '../../figures/markClock.ts';
 import { AREA_NAMES_CHOICES } from '../../figures/areaNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
-import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
+import { EXTENSION_FORMATS, MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
@@ -67,10 +67,6 @@ export function registerMap(program: Command, context: CommandContext): void {
 
 const listOr = (items: string[]) => (items.length > 1 ? `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}` : items.join(''));
 
-const EXTENSION_FORMATS: Record<string, MapFormat> = {
-  '.png': 'png', '.svg': 'svg', '.webp': 'webp', '.jpg': 'jpg', '.jpeg': 'jpg', '.geojson': 'geojson', '.json': 'geojson',
-};
-
 /**
  * Where a picture goes: --output (its extension picks the format; its folder
  * must exist), else out/<defaultStem>.<format> in the working folder.
@@ -84,7 +80,7 @@ export function parseOutput<F extends MapFormat>(options: { output?: string; for
     return { path: resolve(folder, `${defaultStem}.${chosen}`), format: chosen };
   }
   const extension = extname(options.output).toLowerCase();
-  const fromExtension = EXTENSION_FORMATS[extension] as F | undefined;
+  const fromExtension = (Object.hasOwn(EXTENSION_FORMATS, extension) ? EXTENSION_FORMATS[extension] : undefined) as F | undefined;
   if (!fromExtension || !formats.includes(fromExtension)) {
     throw new InputError('--output', `a file name ending in ${listOr(formats.map((f) => `.${f}`))}`, options.output);
   }

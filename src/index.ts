@@ -32,3 +32,4 @@ export { runBatch, mergeManifests, type BatchOptions, type BatchSummary } from '
 export { loadStyle, validateStyle, type HouseStyle } from './batch/style.ts';
 export { mapSettings, pageSize, viewOf, DEFAULT_MAP_CHOICES, type MapChoices, type MapSettings, type PageChoice, type ViewChoice } from './settings/mapSettings.ts';
 export { chooseEclipse, choosePlace, type ChosenPlace, type EclipseChoice, type PlaceChoice } from './settings/choose.ts';
+export { CATALOGUES, findEclipses, RENDERED_BODIES, type EclipseOf } from './settings/catalogues.ts';

@@ -14,16 +14,15 @@ import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
-import { findLunarEclipses } from '../eclipses/lunar/catalogue.ts';
+import { findEclipses, OUTPUT_BODY } from '../settings/catalogues.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
-import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
 import { isRasterFormat } from '../raster/formats.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipses/lunar/conventions.ts';
 import { pageSize } from '../settings/mapSettings.ts';
-import { mapChoicesOf } from './styleSettings.ts';
+import { eclipseChoiceOf, mapChoicesOf } from './styleSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
 import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
@@ -116,8 +115,7 @@ export function removeLeftovers(outDir: string): number {
 /** What a batch call will do: every eclipse of the range and kinds, this shard's part, within the ceiling. */
 export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: LunarEclipse[]; mine: LunarEclipse[] } {
   const { style } = options;
-  const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);
-  const all = findLunarEclipses({ from: options.from, to: options.to, convention: style.convention, deltaT }).filter((e) => options.kinds.includes(e.kind));
+  const all = findEclipses(OUTPUT_BODY, options, eclipseChoiceOf(style)).filter((e) => options.kinds.includes(e.kind));
   const mine = shardOf(all, options.shard);
   if (mine.length > MAX_BATCH_ECLIPSES) {
     const which = options.shard ? `shard ${options.shard.index}/${options.shard.count}: ${mine.length} of ${all.length} eclipses` : `${all.length} eclipses`;

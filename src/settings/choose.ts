@@ -5,32 +5,20 @@
  * `at`, `zone`); the CLI shows its flags instead, a style its fields.
  */
 import { InputError } from '../errors.ts';
-import { eclipseNear, nextEclipse } from '../eclipses/lunar/catalogue.ts';
-import type { ShadowConventionName } from '../eclipses/lunar/conventions.ts';
-import type { LunarEclipse } from '../eclipses/lunar/types.ts';
+import type { EclipseBody } from '../eclipses/kinds.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
-import { fixedDeltaTModel, standardDeltaTModel, type DeltaTModel } from '../ephemeris/deltaT.ts';
 import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
 import type { PlaceLabel } from '../places/label.ts';
 import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
-import { checkNumber, DELTA_T_LIMITS, isLonLat, LAT_LON_EXPECTED, WHEN_EXPECTED, type When } from './read.ts';
+import { isLonLat, LAT_LON_EXPECTED, WHEN_EXPECTED, type When } from './read.ts';
+import { eclipseNear, nextEclipse, OUTPUT_BODY, type EclipseChoice, type EclipseOf } from './catalogues.ts';
 
 export { DELTA_T_LIMITS } from './read.ts';
+export { deltaTModelOf, type EclipseChoice } from './catalogues.ts';
 
-/** How an eclipse is computed: the lunar shadow convention, and ΔT (seconds) or the built-in model. */
-export interface EclipseChoice {
-  readonly convention: ShadowConventionName;
-  readonly deltaTSeconds?: number;
-}
-
-/** The ΔT model a choice asks for: a fixed value, else the built-in model. */
-export function deltaTModelOf(choice: EclipseChoice): DeltaTModel {
-  return choice.deltaTSeconds === undefined ? standardDeltaTModel() : fixedDeltaTModel(checkNumber('deltaT', choice.deltaTSeconds, DELTA_T_LIMITS));
-}
-
-export function chooseEclipse(when: When, choice: EclipseChoice, now: Date): LunarEclipse {
-  const options = { convention: choice.convention, deltaT: deltaTModelOf(choice) };
-  const found = when.kind === 'next' ? nextEclipse(now, options) : eclipseNear(when.date, 7.5, options);
+/** One eclipse of a body (by default the one the outputs render): the next after `now`, or the one within a week of a date. */
+export function chooseEclipse<B extends EclipseBody = typeof OUTPUT_BODY>(when: When, choice: EclipseChoice, now: Date, body: B = OUTPUT_BODY as B): EclipseOf[B] {
+  const found = when.kind === 'next' ? nextEclipse(body, now, choice) : eclipseNear(body, when.date, 7.5, choice);
   if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
   return found;
 }

@@ -15,6 +15,7 @@ import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
 import { findEclipses, OUTPUT_BODY } from '../settings/catalogues.ts';
+import type { Eclipse } from '../eclipses/kinds.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
@@ -52,13 +53,16 @@ export interface BatchOptions {
   readonly onProgress?: (event: ProgressEvent) => void;
 }
 
+/** The kind of an eclipse, whatever its body. */
+type Kind = Eclipse['kind'];
+
 export type ProgressEvent =
   | { readonly type: 'planned'; readonly total: number; readonly upToDate: number }
-  | { readonly type: 'started'; readonly id: string; readonly kind: string }
+  | { readonly type: 'started'; readonly id: string; readonly kind: Kind }
   /** `seconds`: the eclipse's own time in its worker, from the task's start (not from when it was queued). */
-  | { readonly type: 'done'; readonly id: string; readonly kind: string; readonly files: number; readonly seconds: number }
-  | { readonly type: 'skipped'; readonly id: string; readonly kind: string }
-  | { readonly type: 'failed'; readonly id: string; readonly kind: string; readonly message: string }
+  | { readonly type: 'done'; readonly id: string; readonly kind: Kind; readonly files: number; readonly seconds: number }
+  | { readonly type: 'skipped'; readonly id: string; readonly kind: Kind }
+  | { readonly type: 'failed'; readonly id: string; readonly kind: Kind; readonly message: string }
   | { readonly type: 'notice'; readonly message: string };
 
 export interface BatchSummary {

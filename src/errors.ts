@@ -1,21 +1,40 @@
 /**
  * The one error the library throws for bad input. Like sharp's
  * invalidParameterError, it names the parameter, what was expected and what
- * arrived; the CLI prints `message` as its single stderr line.
+ * arrived; the CLI prints it as its single stderr line, naming its own flags
+ * (see `renamed`).
  */
+
+/** How a caller names a parameter: the library by its own name, the CLI by its flag, a style by its field. */
+export type ParameterNamer = (parameter: string) => string;
+
+/** What was expected; a function when the text mentions other parameters, so that each caller names them its own way. */
+export type Expected = string | ((name: ParameterNamer) => string);
+
+const asNamed: ParameterNamer = (parameter) => parameter;
+
 export class InputError extends Error {
   readonly parameter: string;
   readonly expected: string;
   readonly received: string;
+  readonly #expected: Expected;
 
   /** `received` is quoted and shortened; pass `asIs` when it is already a description. */
-  constructor(parameter: string, expected: string, received: unknown, asIs = false) {
+  constructor(parameter: string, expected: Expected, received: unknown, asIs = false) {
     const shown = asIs ? String(received) : describeReceived(received);
-    super(`${parameter}: expected ${expected}, received ${shown}`);
+    const text = typeof expected === 'string' ? expected : expected(asNamed);
+    super(`${parameter}: expected ${text}, received ${shown}`);
     this.name = 'InputError';
     this.parameter = parameter;
-    this.expected = expected;
+    this.expected = text;
     this.received = shown;
+    this.#expected = expected;
+  }
+
+  /** The same error with every parameter it names (its own and those in `expected`) named by `name`. */
+  renamed(name: ParameterNamer): InputError {
+    const expected = this.#expected;
+    return new InputError(name(this.parameter), typeof expected === 'string' ? expected : expected(name), this.received, true);
   }
 }
 

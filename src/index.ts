@@ -37,3 +37,6 @@ export { solarLocalReport, solarLocalJson, solarLocalTable, solarLocalMarkdown, 
 export { solarGeoJson, SOLAR_GEOMETRY_SCHEMA, type SolarGeojsonOptions } from './outputs/solarGeojson.ts';
 export { solarEclipseRecord, type SolarEclipseRecord } from './eclipses/solar/record.ts';
 export { solarSafetyText, safetyScopeForEclipse, safetyScopeForPlace, type SolarSafetyForm, type SolarSafetyScope } from './words/solar/caution.ts';
+export { mapSettings, pageSize, viewOf, DEFAULT_MAP_CHOICES, type MapChoices, type MapSettings, type PageChoice, type ViewChoice } from './settings/mapSettings.ts';
+export { chooseEclipse, choosePlace, type ChosenPlace, type EclipseChoice, type PlaceChoice } from './settings/choose.ts';
+export { CATALOGUES, findEclipses, RENDERED_BODIES, type EclipseOf } from './settings/catalogues.ts';

@@ -119,7 +119,7 @@ function tryCreate(path: string, record: LockRecord, outDir: string): boolean {
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
     if (code === 'EACCES' || code === 'EPERM' || code === 'EROFS' || code === 'ENOENT') {
-      throw new InputError('--out', `a folder umbracast can write to (its lock ${LOCK_NAME} could not be made)`, `${outDir} (${code})`, true);
+      throw new InputError('outDir', `a folder umbracast can write to (its lock ${LOCK_NAME} could not be made)`, `${outDir} (${code})`, true);
     }
     throw error;
   }
@@ -164,7 +164,7 @@ export function acquireLock(outDir: string): () => void {
     if (!judged) continue;
     if (!judged.isFile()) {
       const kind = judged.isDirectory() ? 'a folder' : judged.isSymbolicLink() ? 'a symbolic link' : 'not a plain file';
-      throw new InputError('--out', `a folder whose lock ${LOCK_NAME} is a plain file`, `${outDir} (${LOCK_NAME} is ${kind}; remove it)`, true);
+      throw new InputError('outDir', `a folder whose lock ${LOCK_NAME} is a plain file`, `${outDir} (${LOCK_NAME} is ${kind}; remove it)`, true);
     }
     let holder: ReturnType<typeof parseLock>;
     try {
@@ -176,10 +176,10 @@ export function acquireLock(outDir: string): () => void {
     if (holder) {
       const state = holderState(holder);
       if (state === 'alive') {
-        throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (batch with process ${holder.pid} holds ${LOCK_NAME}; wait for it, or remove the lock if that process is gone)`, true);
+        throw new InputError('outDir', 'a folder no other batch is writing to', `${outDir} (batch with process ${holder.pid} holds ${LOCK_NAME}; wait for it, or remove the lock if that process is gone)`, true);
       }
       if (state === 'elsewhere') {
-        throw new InputError('--out', 'a folder no other batch is writing to', `${outDir} (a batch on host ${JSON.stringify(holder.host)} holds ${LOCK_NAME}; wait for it, or remove the lock if that batch is gone)`, true);
+        throw new InputError('outDir', 'a folder no other batch is writing to', `${outDir} (a batch on host ${JSON.stringify(holder.host)} holds ${LOCK_NAME}; wait for it, or remove the lock if that batch is gone)`, true);
       }
     }
     // Stale (its batch is gone) or not a lock of ours: move it aside, and remove it only if it is the one judged.
@@ -200,7 +200,7 @@ export function acquireLock(outDir: string): () => void {
     }
     unlinkSync(aside);
   }
-  throw new InputError('--out', 'a folder whose lock can be taken', `${outDir} (other batches keep taking ${LOCK_NAME})`, true);
+  throw new InputError('outDir', 'a folder whose lock can be taken', `${outDir} (other batches keep taking ${LOCK_NAME})`, true);
 }
 
 /** Remove an empty folder we made, if a lock could not be taken in it. */

@@ -165,8 +165,8 @@ export function readManifest(path: string): { manifest: Manifest | undefined; pr
 /** Strict read for merging: a corrupt manifest is a usage error there. */
 export function readManifestOrFail(path: string): Manifest {
   const { manifest, problem } = readManifest(path);
-  if (problem) throw new InputError('--merge', 'readable umbracast manifests', problem, true);
-  if (!manifest) throw new InputError('--merge', 'a folder or manifest file that exists', printable(path), true);
+  if (problem) throw new InputError('manifests', 'readable umbracast manifests', problem, true);
+  if (!manifest) throw new InputError('manifests', 'a folder or manifest file that exists', printable(path), true);
   return manifest;
 }
 

@@ -4,6 +4,7 @@
  * batch workers load no schema library.
  */
 import { findPlace, placeSlug, type Place } from '../places/gazetteer.ts';
+import type { Eclipse } from '../eclipses/kinds.ts';
 
 /** Placeholders a naming template may use. */
 export const NAMING_FIELDS = ['id', 'kind', 'year', 'saros'] as const;
@@ -13,7 +14,7 @@ export const DEFAULT_NAMING = '{id}-{kind}';
 const LONGEST: Record<(typeof NAMING_FIELDS)[number], number> = { id: 10, kind: 9, year: 4, saros: 4 };
 
 /** Fill a naming template for one eclipse. */
-export function fileStem(template: string, eclipse: { id: string; kind: string; saros: number }): string {
+export function fileStem(template: string, eclipse: Pick<Eclipse, 'id' | 'kind' | 'saros'>): string {
   const values: Record<(typeof NAMING_FIELDS)[number], string> = {
     id: eclipse.id,
     kind: eclipse.kind,
@@ -70,7 +71,7 @@ export class SamePlace extends Error {
 
 /** The places of a style, found in the gazetteer, with their unique file-name parts. */
 export function stylePlaces(names: readonly string[]): { place: Place; slug: string }[] {
-  const places = names.map((name) => findPlace(name, '--place'));
+  const places = names.map((name) => findPlace(name, 'places'));
   const slugs = placeSlugs(places);
   return places.map((place, i) => ({ place, slug: slugs[i]! }));
 }

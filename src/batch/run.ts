@@ -14,15 +14,16 @@ import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
-import { findLunarEclipses } from '../eclipses/lunar/catalogue.ts';
+import { findEclipses, OUTPUT_BODY } from '../settings/catalogues.ts';
+import type { Eclipse } from '../eclipses/kinds.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
-import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
-import type { RasterFormatName } from '../outputs/formatNames.ts';
+import { isRasterFormat } from '../raster/formats.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipses/lunar/conventions.ts';
-import { parseSizeAndDpi, optionsFromStyle } from '../settings/mapSettings.ts';
+import { pageSize } from '../settings/mapSettings.ts';
+import { eclipseChoiceOf, mapChoicesOf } from './styleSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
 import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
@@ -52,13 +53,16 @@ export interface BatchOptions {
   readonly onProgress?: (event: ProgressEvent) => void;
 }
 
+/** The kind of an eclipse, whatever its body. */
+type Kind = Eclipse['kind'];
+
 export type ProgressEvent =
   | { readonly type: 'planned'; readonly total: number; readonly upToDate: number }
-  | { readonly type: 'started'; readonly id: string; readonly kind: string }
+  | { readonly type: 'started'; readonly id: string; readonly kind: Kind }
   /** `seconds`: the eclipse's own time in its worker, from the task's start (not from when it was queued). */
-  | { readonly type: 'done'; readonly id: string; readonly kind: string; readonly files: number; readonly seconds: number }
-  | { readonly type: 'skipped'; readonly id: string; readonly kind: string }
-  | { readonly type: 'failed'; readonly id: string; readonly kind: string; readonly message: string }
+  | { readonly type: 'done'; readonly id: string; readonly kind: Kind; readonly files: number; readonly seconds: number }
+  | { readonly type: 'skipped'; readonly id: string; readonly kind: Kind }
+  | { readonly type: 'failed'; readonly id: string; readonly kind: Kind; readonly message: string }
   | { readonly type: 'notice'; readonly message: string };
 
 export interface BatchSummary {
@@ -86,7 +90,6 @@ export { LOCK_NAME } from './lock.ts';
 export const MAX_BATCH_ECLIPSES = 500;
 /** Heap ceiling of each worker process, MB (V8's heap only; pictures live outside it, see resources.ts). */
 export const WORKER_HEAP_MB = 256;
-const RASTER_NAMES: readonly RasterFormatName[] = ['png', 'webp', 'jpg'];
 
 /**
  * Remove temporary files left by a killed run (writeFileAtomic's
@@ -116,48 +119,49 @@ export function removeLeftovers(outDir: string): number {
 /** What a batch call will do: every eclipse of the range and kinds, this shard's part, within the ceiling. */
 export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: LunarEclipse[]; mine: LunarEclipse[] } {
   const { style } = options;
-  const deltaT = style.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(style.deltaT);
-  const all = findLunarEclipses({ from: options.from, to: options.to, convention: style.convention, deltaT }).filter((e) => options.kinds.includes(e.kind));
+  const all = findEclipses(OUTPUT_BODY, options, eclipseChoiceOf(style)).filter((e) => options.kinds.includes(e.kind));
   const mine = shardOf(all, options.shard);
   if (mine.length > MAX_BATCH_ECLIPSES) {
     const which = options.shard ? `shard ${options.shard.index}/${options.shard.count}: ${mine.length} of ${all.length} eclipses` : `${all.length} eclipses`;
-    const advice = `split the range, or use --shard I/N with N of at least ${Math.ceil(all.length / MAX_BATCH_ECLIPSES)}`;
-    throw new InputError(options.shard ? '--shard' : '--to', `at most ${MAX_BATCH_ECLIPSES} eclipses per batch or per shard (about two centuries); ${advice}`, `${which} from ${options.from.toISOString().slice(0, 10)}`, true);
+    const least = Math.ceil(all.length / MAX_BATCH_ECLIPSES);
+    const expected = (name: (parameter: string) => string) =>
+      `at most ${MAX_BATCH_ECLIPSES} eclipses per batch or per shard (about two centuries); split the range, or use ${name('shard')} I/N with N of at least ${least}`;
+    throw new InputError(options.shard ? 'shard' : 'to', expected, `${which} from ${options.from.toISOString().slice(0, 10)}`, true);
   }
   return { all, mine };
 }
 
 /** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
 export function pictureLoad(style: HouseStyle): PictureLoad {
-  const { size } = parseSizeAndDpi(optionsFromStyle(style));
+  const { size } = pageSize(mapChoicesOf(style));
   const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
-  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter((f) => RASTER_NAMES.includes(f as RasterFormatName)).length };
+  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter(isRasterFormat).length };
 }
 
-/** Names a batch writes in --out itself, which must be files (or absent) for the batch to replace them. */
+/** Names a batch writes in outDir itself, which must be files (or absent) for the batch to replace them. */
 function checkFolderEntries(outDir: string, names: readonly string[]): void {
   const thumbs = lstatSync(join(outDir, 'thumbs'), { throwIfNoEntry: false });
   if (thumbs && !thumbs.isDirectory()) {
-    throw new InputError('--out', 'a folder whose thumbs is a folder (or absent)', `${outDir} (thumbs is ${thumbs.isSymbolicLink() ? 'a symbolic link' : 'not a folder'})`, true);
+    throw new InputError('outDir', 'a folder whose thumbs is a folder (or absent)', `${outDir} (thumbs is ${thumbs.isSymbolicLink() ? 'a symbolic link' : 'not a folder'})`, true);
   }
   for (const name of names) {
     if (lstatSync(join(outDir, name), { throwIfNoEntry: false })?.isDirectory()) {
-      throw new InputError('--out', `a folder whose ${name} is a file (or absent)`, `${outDir} (${name} is a folder)`, true);
+      throw new InputError('outDir', `a folder whose ${name} is a file (or absent)`, `${outDir} (${name} is a folder)`, true);
     }
   }
 }
 
-/** Make --out if it is new (its parent must exist); the caller removes it again if nothing is written. */
+/** Make outDir if it is new (its parent must exist); the caller removes it again if nothing is written. */
 function makeOutDir(outDir: string): boolean {
   const stat = statSync(outDir, { throwIfNoEntry: false });
   if (stat) {
-    if (!stat.isDirectory()) throw new InputError('--out', 'a folder, or a new folder inside an existing one', outDir);
+    if (!stat.isDirectory()) throw new InputError('outDir', 'a folder, or a new folder inside an existing one', outDir);
     return false;
   }
   try {
     mkdirSync(outDir);
   } catch (error) {
-    throw new InputError('--out', 'a folder, or a new folder inside an existing one', `${outDir} (${(error as NodeJS.ErrnoException).code ?? 'cannot be made'})`, true);
+    throw new InputError('outDir', 'a folder, or a new folder inside an existing one', `${outDir} (${(error as NodeJS.ErrnoException).code ?? 'cannot be made'})`, true);
   }
   return true;
 }
@@ -337,35 +341,35 @@ export const MAX_MERGE_MANIFESTS = 9999;
  * files are made in memory first: a refused merge writes nothing.
  */
 export async function mergeManifests(outDir: string, manifests: readonly Manifest[], tool: string): Promise<Manifest> {
-  if (manifests.length === 0) throw new InputError('--merge', 'at least one shard manifest', 'none');
-  if (manifests.length > MAX_MERGE_MANIFESTS) throw new InputError('--merge', `at most ${MAX_MERGE_MANIFESTS} manifests`, `${manifests.length}`, true);
-  if (!statSync(outDir, { throwIfNoEntry: false })?.isDirectory()) throw new InputError('--out', 'the folder that holds the shards\' files', outDir);
+  if (manifests.length === 0) throw new InputError('manifests', 'at least one shard manifest', 'none');
+  if (manifests.length > MAX_MERGE_MANIFESTS) throw new InputError('manifests', `at most ${MAX_MERGE_MANIFESTS} manifests`, `${manifests.length}`, true);
+  if (!statSync(outDir, { throwIfNoEntry: false })?.isDirectory()) throw new InputError('outDir', 'the folder that holds the shards\' files', outDir);
   const release = acquireLock(outDir);
   try {
     removeLeftovers(outDir);
     const first = manifests[0]!;
     for (const m of manifests) {
-      if (m.styleHash !== first.styleHash) throw new InputError('--merge', `manifests made with one style (${first.styleHash})`, `a manifest with style ${m.styleHash}`, true);
+      if (m.styleHash !== first.styleHash) throw new InputError('manifests', `manifests made with one style (${first.styleHash})`, `a manifest with style ${m.styleHash}`, true);
     }
     const byId = new Map<string, ManifestEntry>();
     const owner = new Map<string, string>();
     for (const m of manifests) {
       for (const e of m.eclipses) {
         const seen = byId.get(e.id);
-        if (seen && seen.key !== e.key) throw new InputError('--merge', 'shards that agree on every eclipse they share', `two different entries for ${e.id}`, true);
+        if (seen && seen.key !== e.key) throw new InputError('manifests', 'shards that agree on every eclipse they share', `two different entries for ${e.id}`, true);
         if (seen) continue;
         for (const f of e.files) {
           const other = owner.get(f.path);
-          if (other !== undefined) throw new InputError('--merge', 'shards whose eclipses each have files of their own', `${e.id} and ${other} both list ${f.path}`, true);
+          if (other !== undefined) throw new InputError('manifests', 'shards whose eclipses each have files of their own', `${e.id} and ${other} both list ${f.path}`, true);
           owner.set(f.path, e.id);
         }
         byId.set(e.id, e);
       }
     }
-    if (byId.size > MAX_MANIFEST_ECLIPSES) throw new InputError('--merge', `at most ${MAX_MANIFEST_ECLIPSES} eclipses in all`, `${byId.size}`, true);
+    if (byId.size > MAX_MANIFEST_ECLIPSES) throw new InputError('manifests', `at most ${MAX_MANIFEST_ECLIPSES} eclipses in all`, `${byId.size}`, true);
     for (const e of byId.values()) {
       const broken = e.files.find((f) => !fileIntact(outDir, f));
-      if (broken) throw new InputError('--merge', 'shards whose files are in --out as their manifests list them (size and SHA-256)', `${e.id}: ${printable(broken.path)} missing or changed`, true);
+      if (broken) throw new InputError('manifests', (name) => `shards whose files are in ${name('outDir')} as their manifests list them (size and SHA-256)`, `${e.id}: ${printable(broken.path)} missing or changed`, true);
     }
     const from = manifests.map((m) => m.range.from).sort()[0]!;
     const to = manifests.map((m) => m.range.to).sort().at(-1)!;

@@ -58,6 +58,7 @@ const styleObject = z
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),
     sky: z.boolean().default(true),
     naming: namingTemplate.default(DEFAULT_NAMING),
+    // Lunar only: the shadow's enlargement (Danjon, Chauvenet); a solar eclipse has no such convention.
     convention: enumOf(SHADOW_CONVENTIONS).default('danjon'),
     deltaT: z.number().min(-86_400).max(86_400).optional(),
   })
@@ -180,15 +181,15 @@ export function loadStyle(path: string): HouseStyle {
 
 function loadStyleUnescaped(path: string): HouseStyle {
   const extension = extname(path).toLowerCase();
-  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('--style', 'a .json, .yaml or .yml file', path);
+  if (!['.json', '.yaml', '.yml'].includes(extension)) throw new InputError('style', 'a .json, .yaml or .yml file', path);
   let bytes: Buffer;
   try {
     bytes = readRegularFile(path, MAX_STYLE_BYTES);
   } catch (error) {
     if (!(error instanceof ReadRefused)) throw error;
-    if (error.reason === 'too large') throw new InputError('--style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
-    if (error.reason === 'not a regular file') throw new InputError('--style', 'a regular style file', `${describeReceived(path)} (${error.detail.slice(path.length + 1)})`, true);
-    throw new InputError('--style', 'a readable style file', path);
+    if (error.reason === 'too large') throw new InputError('style', `a style file of at most ${MAX_STYLE_BYTES / 1024} KiB`, path);
+    if (error.reason === 'not a regular file') throw new InputError('style', 'a regular style file', `${describeReceived(path)} (${error.detail.slice(path.length + 1)})`, true);
+    throw new InputError('style', 'a readable style file', path);
   }
   const data = parseStyleText(bytes.toString('utf8'), extension === '.json', path);
   if (nestingDepth(data, MAX_STYLE_DEPTH) > MAX_STYLE_DEPTH) throw new InputError(path, `a style nested at most ${MAX_STYLE_DEPTH} levels deep`, 'a file nested deeper', true);
@@ -203,3 +204,4 @@ export function styleHash(style: HouseStyle): string {
   const sorted = JSON.stringify(style, Object.keys(style).sort());
   return createHash('sha256').update(sorted).digest('hex').slice(0, 16);
 }
+

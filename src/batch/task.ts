@@ -11,7 +11,8 @@ import { captionText } from '../outputs/caption.ts';
 import { renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../settings/choose.ts';
-import { mapSettings, optionsFromStyle, type MapOptions } from '../settings/mapSettings.ts';
+import { mapSettings } from '../settings/mapSettings.ts';
+import { mapChoicesOf } from './styleSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
 import { SKY_FIGURE_PX } from './resources.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile, type TaskResult } from './written.ts';
@@ -27,7 +28,7 @@ export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
   const started = performance.now();
   const { eclipse, style, outDir, generator } = input;
   const stem = fileStem(style.naming, eclipse);
-  const settings = mapSettings(optionsFromStyle(style) as MapOptions);
+  const settings = mapSettings(mapChoicesOf(style));
   const written: WrittenFile[] = [];
   const write = async (relative: string, role: FileRole, data: Uint8Array | string) => {
     // Each file once: two outputs of one name would overwrite each other and never settle.
@@ -44,7 +45,7 @@ export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
 
   const slugs = stylePlaces(style.places).map((p) => p.slug);
   for (const [i, name] of style.places.entries()) {
-    const chosen = choosePlace({ place: name })!;
+    const chosen = choosePlace({ place: name }, true, 'places');
     const report = localReport(eclipse, chosen);
     const slug = slugs[i]!;
     for (const format of style.localFormats) {

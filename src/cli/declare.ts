@@ -5,8 +5,7 @@
 import type { Command } from 'commander';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
 
-/** ΔT beyond ±1 day makes no sense in years 1000–3000. */
-export const DELTA_T_LIMITS = { min: -86_400, max: 86_400, unit: 'seconds' };
+export { DELTA_T_LIMITS } from '../settings/read.ts';
 
 /** --convention and --delta-t, as every command that computes eclipses declares them. */
 export function withEclipseOptions(command: Command): Command {

@@ -6,6 +6,7 @@
 import { Command, CommanderError } from 'commander';
 import { InputError } from '../errors.ts';
 import type { CommandContext } from './context.ts';
+import { asFlags } from './flags.ts';
 import { printable } from '../batch/printable.ts';
 import { toolVersion } from './version.ts';
 
@@ -87,7 +88,8 @@ export async function main(args: readonly string[], context: CommandContext = de
       return EXIT_USAGE;
     }
     if (error instanceof InputError) {
-      context.stderr(`umbracast: ${printable(error.message)}\n`);
+      // The library names its parameters; the user typed flags.
+      context.stderr(`umbracast: ${printable(asFlags(error).message)}\n`);
       return EXIT_USAGE;
     }
     if (error instanceof Error && error.name === 'BatchInterrupted') {

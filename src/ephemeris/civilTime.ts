@@ -76,8 +76,9 @@ export function isKnownTimeZone(zone: string): boolean {
   }
 }
 
-export function civilClock(zone = 'UTC', option = '--tz'): CivilClock {
-  if (!isKnownTimeZone(zone)) throw new InputError(option, 'an IANA time zone such as Australia/Adelaide or America/Chicago, or UTC', zone);
+/** The clock of an IANA zone; a zone it does not know is an InputError naming `parameter`. */
+export function civilClock(zone = 'UTC', parameter = 'zone'): CivilClock {
+  if (!isKnownTimeZone(zone)) throw new InputError(parameter, 'an IANA time zone such as Australia/Adelaide or America/Chicago, or UTC', zone);
   // The wall clock is computed here (instant + its own offset, then rounded to the minute) and formatted in UTC,
   // so that a time and the zone printed beside it always come from the same offset, seconds included.
   const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });

@@ -15,12 +15,8 @@ import { LUNAR_ENGLISH, localSummary, type LunarPhaseKey } from '../words/lunar/
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
 
-export interface PlaceLabel {
-  readonly name: string;
-  readonly latDeg: number;
-  readonly lonDeg: number;
-  readonly tz: string;
-}
+import type { PlaceLabel } from '../places/label.ts';
+export type { PlaceLabel } from '../places/label.ts';
 
 export interface LocalReport {
   readonly local: LocalCircumstances;

@@ -7,7 +7,7 @@ import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } from '../figures/map.ts';
-import { rasteriseSet, RASTER_FORMATS, type RasterFormat } from '../raster/raster.ts';
+import { isRasterFormat, rasteriseSet } from '../raster/raster.ts';
 import { localCircumstances } from '../local/lunar.ts';
 import { visibilityOf, type Visibility } from '../visibility/lunar/visibility.ts';
 import { eclipseCaption, type Caption } from './caption.ts';
@@ -92,7 +92,7 @@ export async function renderMapFiles(
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const rasters = await rasteriseSet(
     scene.svg,
-    formats.filter((f): f is RasterFormat => (RASTER_FORMATS as readonly string[]).includes(f)),
+    formats.filter(isRasterFormat),
     { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` },
     thumbnailWidthPx,
   );

@@ -15,7 +15,7 @@
  * its own is at least as large: "York" is York, not a smaller town GeoNames
  * also knows by that name.
  */
-import { InputError } from '../errors.ts';
+import { InputError, type Expected } from '../errors.ts';
 import { cityAt, cityCount, keysOfLength, linesWithKey, type CityRow } from './geonames.ts';
 import { keyVariants, nameKey, nameKeyBytes } from './nameFold.ts';
 
@@ -129,9 +129,10 @@ function parseQuery(text: string): { name: string; country?: string; admin?: str
  */
 export const CLEAR_LEAD = 3;
 
-function expected(option: string): string {
-  const alternative = option === '--place' ? ', or use --at LAT,LON' : '';
-  return `a place name from the GeoNames gazetteer, e.g. "Adelaide" or "Springfield, US-IL"${alternative}`;
+/** What a place name should be; a name given as `place` may instead be a position, `at`. */
+function expected(parameter: string, rest = ''): Expected {
+  const text = 'a place name from the GeoNames gazetteer, e.g. "Adelaide" or "Springfield, US-IL"';
+  return parameter === 'place' ? (name) => `${text}, or use ${name('at')} LAT,LON${rest}` : `${text}${rest}`;
 }
 
 /** Edit distance with a swap of two neighbouring letters counted as one edit (the commonest typing slip). */
@@ -227,10 +228,10 @@ function candidatesFor(name: string): Candidate[] {
 /**
  * A place by name — "Cologne", "Springfield, US" or "Springfield, US-IL" —
  * and how it was found. Bad, unknown or ambiguous names are an InputError
- * naming `option` (the option or style field the name came from).
+ * naming `parameter` (the parameter or style field the name came from).
  */
-export function resolvePlace(text: string, option = '--place'): PlaceMatch {
-  if ([...text].length > MAX_PLACE_CHARS || text.trim() === '') throw new InputError(option, `${expected(option)}, at most ${MAX_PLACE_CHARS} characters`, text);
+export function resolvePlace(text: string, parameter = 'place'): PlaceMatch {
+  if ([...text].length > MAX_PLACE_CHARS || text.trim() === '') throw new InputError(parameter, expected(parameter, `, at most ${MAX_PLACE_CHARS} characters`), text);
   const query = parseQuery(text);
   const found = candidatesFor(query.name).filter(
     (c) => (!query.country || c.row.country === query.country) && (!query.admin || c.row.admin1.toUpperCase() === query.admin),
@@ -241,16 +242,16 @@ export function resolvePlace(text: string, option = '--place'): PlaceMatch {
   if (matches.length === 0) {
     const suggestions = suggestPlaces(query.name).map((p) => describePlace(p));
     const hint = suggestions.length > 0 ? ` (did you mean: ${suggestions.join('; ')}?)` : '';
-    throw new InputError(option, `${expected(option)}${hint}`, text);
+    throw new InputError(parameter, expected(parameter, hint), text);
   }
   const [first, second] = matches;
   if (second && !(first!.row.population > 0 && first!.row.population >= CLEAR_LEAD * second.row.population)) {
     const candidates = matches.slice(0, 4).map((c) => describePlace(placeOf(c.row), true)).join('; ');
-    throw new InputError(option, `one place, but the name is ambiguous: add a country or region code (${candidates})`, text);
+    throw new InputError(parameter, `one place, but the name is ambiguous: add a country or region code (${candidates})`, text);
   }
   return { place: placeOf(first!.row), geonameId: first!.row.geonameId, query: text, matchedBy: first!.matchedBy, matchedName: first!.matchedName, passedOver: matches.length - 1 };
 }
 
-export function findPlace(text: string, option = '--place'): Place {
-  return resolvePlace(text, option).place;
+export function findPlace(text: string, parameter = 'place'): Place {
+  return resolvePlace(text, parameter).place;
 }

@@ -8,8 +8,9 @@ import { createRequire } from 'node:module';
 import sharp, { type Sharp } from 'sharp';
 import { escapeXml } from '../figures/xml.ts';
 
-export type RasterFormat = 'png' | 'webp' | 'jpg';
-export const RASTER_FORMATS: readonly RasterFormat[] = ['png', 'webp', 'jpg'];
+import type { RasterFormat } from './formats.ts';
+
+export { RASTER_FORMATS, isRasterFormat, type RasterFormat } from './formats.ts';
 
 export interface RasterOptions {
   readonly format: RasterFormat;

@@ -1,78 +1,92 @@
-/** What several commands choose the same way: the eclipse (WHEN, convention, ΔT) and the place (--place, --at, --tz). */
+/**
+ * What several commands and the batch choose the same way, from typed values:
+ * the eclipse (when, convention, ΔT) and the place (a name or a position, and
+ * its zone). Errors name the library's parameters (`when`, `deltaT`, `place`,
+ * `at`, `zone`); the CLI shows its flags instead, a style its fields.
+ */
 import { InputError } from '../errors.ts';
-import { eclipseNear, nextEclipse } from '../eclipses/lunar/catalogue.ts';
-import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
-import type { LunarEclipse } from '../eclipses/lunar/types.ts';
+import type { EclipseBody } from '../eclipses/kinds.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
-import { fixedDeltaTModel, standardDeltaTModel } from '../ephemeris/deltaT.ts';
 import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
+import type { PlaceLabel } from '../places/label.ts';
 import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
-import type { PlaceLabel } from '../outputs/localFormats.ts';
-import { DELTA_T_LIMITS } from '../cli/declare.ts';
-import { parseChoice, parseLatLon, parseNumber, parseWhen, WHEN_EXPECTED } from '../cli/options.ts';
+import { isLonLat, LAT_LON_EXPECTED, WHEN_EXPECTED, type When } from './read.ts';
+import { eclipseNear, nextEclipse, OUTPUT_BODY, type EclipseChoice, type EclipseOf } from './catalogues.ts';
 
-export { DELTA_T_LIMITS, withEclipseOptions, withPlaceOptions } from '../cli/declare.ts';
+export { DELTA_T_LIMITS } from './read.ts';
+export { deltaTModelOf, type EclipseChoice } from './catalogues.ts';
 
-export interface EclipseChoice {
-  convention: string;
-  deltaT?: string;
-}
-
-export function chooseEclipse(whenText: string | undefined, options: EclipseChoice, now: Date): LunarEclipse {
-  const when = parseWhen(whenText);
-  const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
-  const deltaT = options.deltaT === undefined ? standardDeltaTModel() : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
-  const found = when.kind === 'next' ? nextEclipse(now, { convention, deltaT }) : eclipseNear(when.date, 7.5, { convention, deltaT });
-  if (!found) throw new InputError('WHEN', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
+/** One eclipse of a body (by default the one the outputs render): the next after `now`, or the one within a week of a date. */
+export function chooseEclipse<B extends EclipseBody = typeof OUTPUT_BODY>(when: When, choice: EclipseChoice, now: Date, body: B = OUTPUT_BODY as B): EclipseOf[B] {
+  const found = when.kind === 'next' ? nextEclipse(body, now, choice) : eclipseNear(body, when.date, 7.5, choice);
+  if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
   return found;
 }
 
+/** A place by name, or a position [lon, lat] in degrees; `zone` (IANA) overrides the zone found there. */
 export interface PlaceChoice {
-  place?: string;
-  at?: string;
-  tz?: string;
+  readonly place?: string;
+  readonly at?: readonly [number, number];
+  readonly zone?: string;
+}
+
+/** A place chosen: how outputs show it, its clock, and the line saying which place a name was taken for. */
+export interface ChosenPlace {
+  readonly place: PlaceLabel;
+  readonly clock: CivilClock;
+  readonly notice?: string;
 }
 
 /**
  * The line that says which place a name was taken for, when GeoNames spells
  * it otherwise (an exonym, a former name, accents dropped): for stderr, so that
  * data on stdout stays clean. Nothing when the name matched as written.
+ * `shownAs` is how the caller names where the name came from (a flag, a style field).
  */
-export function placeNotice(option: string, match: PlaceMatch): string | undefined {
+export function placeNotice(shownAs: string, match: PlaceMatch): string | undefined {
   if (match.matchedBy === 'exact') return undefined;
-  return `umbracast: ${option} ${JSON.stringify(match.query)} → ${describePlace(match.place)}`;
+  return `umbracast: ${shownAs} ${JSON.stringify(match.query)} → ${describePlace(match.place)}`;
 }
 
 /** The notices for names resolved elsewhere (marks on a map), in order. */
-export function placeNotices(option: string, names: readonly string[]): string[] {
-  return names.flatMap((name) => placeNotice(option, resolvePlace(name, option)) ?? []);
+export function placeNotices(shownAs: string, names: readonly string[], parameter = 'marks'): string[] {
+  return names.flatMap((name) => placeNotice(shownAs, resolvePlace(name, parameter)) ?? []);
+}
+
+/** A position's label, e.g. "33.87°S 151.21°E". */
+export function positionName([lonDeg, latDeg]: readonly [number, number]): string {
+  return `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? 'N' : 'S'} ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? 'E' : 'W'}`;
 }
 
 /**
- * --place NAME or --at LAT,LON (one of them), and the time zone: --tz, else
- * the zone at that point. `placeOption` names where the name came from
- * (--place, --mark, a style file's field), for errors and the notice.
+ * A place by name or position (one of them), and its time zone: `zone`, else
+ * the zone at that point. `parameter` names where the name came from
+ * (`place`, `marks`, a style file's field), for errors; `shownAs` names it in
+ * the notice. Without either, undefined when the place is optional.
  */
-export function choosePlace(options: PlaceChoice, required = true, placeOption = '--place'): { place: PlaceLabel; clock: CivilClock; notice?: string } | undefined {
-  if (options.place !== undefined && options.at !== undefined) throw new InputError('--at', 'either --place or --at, not both', options.at);
+export function choosePlace(choice: PlaceChoice, required: true, parameter?: string, shownAs?: string): ChosenPlace;
+export function choosePlace(choice: PlaceChoice, required: boolean, parameter?: string, shownAs?: string): ChosenPlace | undefined;
+export function choosePlace(choice: PlaceChoice, required: boolean, parameter = 'place', shownAs = parameter): ChosenPlace | undefined {
+  if (choice.place !== undefined && choice.at !== undefined) throw new InputError('at', (name) => `either ${name('place')} or ${name('at')}, not both`, `${choice.at[1]},${choice.at[0]}`);
   let place: Omit<PlaceLabel, 'tz'>;
   let country: string | undefined;
   let notice: string | undefined;
-  if (options.place !== undefined) {
-    const match = resolvePlace(options.place, placeOption);
+  if (choice.place !== undefined) {
+    const match = resolvePlace(choice.place, parameter);
     const found = match.place;
     place = { name: found.name, latDeg: found.latDeg, lonDeg: found.lonDeg };
     country = found.country;
-    notice = placeNotice(placeOption, match);
-  } else if (options.at !== undefined) {
-    const [lonDeg, latDeg] = parseLatLon('--at', options.at);
-    place = { name: `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? 'N' : 'S'} ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? 'E' : 'W'}`, latDeg, lonDeg };
+    notice = placeNotice(shownAs, match);
+  } else if (choice.at !== undefined) {
+    if (!isLonLat(choice.at)) throw new InputError('at', LAT_LON_EXPECTED, `${choice.at[1]},${choice.at[0]}`);
+    const [lonDeg, latDeg] = choice.at;
+    place = { name: positionName(choice.at), latDeg, lonDeg };
   } else {
-    if (required) throw new InputError('--place', 'a place: --place NAME or --at LAT,LON', undefined);
+    if (required) throw new InputError('place', (name) => `a place: ${name('place')} NAME or ${name('at')} LAT,LON`, undefined);
     return undefined;
   }
-  const tz = options.tz !== undefined ? options.tz.trim()
+  const tz = choice.zone !== undefined ? choice.zone.trim()
     : country !== undefined ? timeZoneOfPlace({ ...place, country }) : timeZoneAt(place.latDeg, place.lonDeg);
-  const clock = civilClock(tz, '--tz');
+  const clock = civilClock(tz, 'zone');
   return { place: { ...place, tz: clock.zone }, clock, ...(notice !== undefined ? { notice } : {}) };
 }

@@ -1,45 +1,45 @@
 /**
- * Map settings from options (the command line's or a house style's), parsed
- * and checked: shared by `umbracast map`, `umbracast sky` and the batch
- * workers, which load no command-line machinery.
+ * Map settings from typed choices — the command line's flags read
+ * (src/cli/mapFlags.ts) or a house style's fields (src/batch/style.ts) —
+ * checked together: shared by `umbracast map`, `umbracast sky` and the batch
+ * workers, which load no command-line machinery. Errors name the library's
+ * parameters (`bbox`, `size`, `zone`, `marks`…).
  */
 import { InputError } from '../errors.ts';
 import { civilClock } from '../ephemeris/civilTime.ts';
-import { BORDER_STYLES } from '../sphere/world.ts';
-import { PROJECTION_NAMES, type View } from '../figures/projection.ts';
-import { THEME_NAMES, THEMES } from '../figures/theme.ts';
-import { MARK_CLOCKS } from '../figures/markClock.ts';
-import { AREA_NAMES_CHOICES } from '../figures/areaNames.ts';
+import type { LonLat } from '../ephemeris/earth.ts';
+import type { PlaceLabel } from '../places/label.ts';
+import { BORDER_STYLES, type BorderStyle } from '../sphere/world.ts';
+import { PROJECTION_NAMES, type BoundingBox, type ProjectionName, type View } from '../figures/projection.ts';
+import { THEME_NAMES, THEMES, type ThemeName } from '../figures/theme.ts';
+import { MARK_CLOCKS, type MarkClock } from '../figures/markClock.ts';
+import { AREA_NAMES_CHOICES, type AreaNamesChoice } from '../figures/areaNames.ts';
 import type { MapStyle } from '../figures/map.ts';
-import type { PlaceLabel } from '../outputs/localFormats.ts';
-import type { HouseStyle } from '../batch/style.ts';
-import { checkPixelSize, parseBoundingBox, parseChoice, parseLatLon, parseNumber, parseSize, type PixelSize } from '../cli/options.ts';
-import { choosePlace, type EclipseChoice } from './choose.ts';
-
-export interface MapOptions extends SizeOptions, EclipseChoice {
-  projection: string;
-  bbox?: string;
-  centre?: string;
-  span?: string;
-  tz: string;
-  borders: string;
-  title?: string;
-  theme: string;
-  output?: string;
-  format?: string;
-  mark: string[];
-  markClock?: string;
-  areaNames?: string;
-  style?: string;
-}
+import { BBOX_EXPECTED, checkNumber, checkPixelSize, isBoundingBox, isLonLat, LAT_LON_EXPECTED, type PixelSize } from './read.ts';
+import { choosePlace } from './choose.ts';
 
 /** A title longer than this would not fit any page we draw. */
 export const MAX_TITLE_CHARS = 300;
+/** More marks than this crowd any map. */
+export const MAX_MARKS = 20;
 
-/** --title, checked: some text, at most MAX_TITLE_CHARS characters. */
-export function checkTitle(title: string | undefined): string | undefined {
-  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError('--title', `some text, at most ${MAX_TITLE_CHARS} characters`, title);
+/** The limits of the numbers a map takes, as the command line, a style and a library call read them. */
+export const SPAN_LIMITS = { min: 2, max: 180, unit: 'degrees' };
+export const DPI_LIMITS = { min: 36, max: 1200, unit: 'pixels per inch' };
+export const WIDTH_MM_LIMITS = { min: 20, max: 2000, unit: 'millimetres' };
+export const DEFAULT_SPAN_DEG = 60;
+export const DEFAULT_WIDTH_MM = 180;
+
+/** `title`, checked: some text, at most MAX_TITLE_CHARS characters. */
+export function checkTitle(title: string | undefined, parameter = 'title'): string | undefined {
+  if (title !== undefined && (title.trim() === '' || [...title].length > MAX_TITLE_CHARS)) throw new InputError(parameter, `some text, at most ${MAX_TITLE_CHARS} characters`, title);
   return title;
+}
+
+/** A value typed as one of a list, checked (a library caller in plain JavaScript may pass anything). */
+function checkChoice<T extends string>(parameter: string, value: T, choices: readonly T[]): T {
+  if (!choices.includes(value)) throw new InputError(parameter, `one of ${choices.join(', ')}`, value);
+  return value;
 }
 
 export type SizePreset = 'card' | 'square' | 'print';
@@ -52,40 +52,77 @@ const PRESET_SIZES: Record<'card' | 'square', PixelSize> = {
 /** Print pages are 0.62 as tall as wide: a world map with its title and legend. */
 const PRINT_ASPECT = 0.62;
 
-function parseView(options: MapOptions): View {
-  const projection = parseChoice('--projection', options.projection, PROJECTION_NAMES);
-  if (options.bbox !== undefined && options.centre !== undefined) throw new InputError('--bbox', 'either --bbox or --centre, not both', options.bbox);
-  if (options.bbox !== undefined) return { projection: 'region', bbox: parseBoundingBox(options.bbox) };
-  if (options.centre !== undefined && projection === 'globe') return { projection, centre: parseLatLon('--centre', options.centre) };
-  if (options.centre !== undefined) {
-    return { projection: 'region', centre: parseLatLon('--centre', options.centre), spanDeg: parseNumber('--span', options.span ?? '60', { min: 2, max: 180, unit: 'degrees' }) };
+/** The page: a size in pixels or a preset (print: a width in millimetres), and the density to record. */
+export interface PageChoice {
+  readonly size?: PixelSize;
+  readonly preset?: SizePreset;
+  /** With the print preset; default DEFAULT_WIDTH_MM. */
+  readonly widthMm?: number;
+  /** Pixels per inch; default 300 for print, else 72. */
+  readonly dpi?: number;
+}
+
+const sizeText = (size: PixelSize) => `${size.widthPx}x${size.heightPx}`;
+
+export function pageSize(choice: PageChoice, defaultSize: PixelSize = DEFAULT_SIZE): { size: PixelSize; dpi: number } {
+  const dpiOf = (fallback: number) => (choice.dpi === undefined ? fallback : checkNumber('dpi', choice.dpi, DPI_LIMITS));
+  if (choice.size !== undefined && choice.preset !== undefined) throw new InputError('size', (name) => `either ${name('size')} or ${name('preset')}, not both`, sizeText(choice.size));
+  if (choice.size !== undefined) return { size: checkPixelSize('size', choice.size, sizeText(choice.size)), dpi: dpiOf(72) };
+  if (choice.preset === undefined) return { size: defaultSize, dpi: dpiOf(72) };
+  const preset = checkChoice('preset', choice.preset, SIZE_PRESETS);
+  if (preset !== 'print') return { size: PRESET_SIZES[preset], dpi: dpiOf(72) };
+  const dpi = dpiOf(300);
+  const widthMm = checkNumber('widthMm', choice.widthMm ?? DEFAULT_WIDTH_MM, WIDTH_MM_LIMITS);
+  const widthPx = Math.round((widthMm / 25.4) * dpi);
+  const size = { widthPx, heightPx: Math.round(widthPx * PRINT_ASPECT) };
+  return { size: checkPixelSize('widthMm', size, `${widthMm} mm at ${dpi} dpi = ${size.widthPx}x${size.heightPx} px`), dpi };
+}
+
+/** Where the map looks: a projection, or a box, or a centre (a region with its span, or the point a globe faces). */
+export interface ViewChoice {
+  readonly projection: ProjectionName;
+  /** [west, south, east, north], degrees: a regional view of exactly this box. */
+  readonly bbox?: BoundingBox;
+  /** [lon, lat], degrees. */
+  readonly centre?: LonLat;
+  /** Width of a centred regional view, degrees; default DEFAULT_SPAN_DEG. */
+  readonly spanDeg?: number;
+}
+
+export function viewOf(choice: ViewChoice): View {
+  const projection = checkChoice('projection', choice.projection, PROJECTION_NAMES);
+  if (choice.bbox !== undefined && choice.centre !== undefined) throw new InputError('bbox', (name) => `either ${name('bbox')} or ${name('centre')}, not both`, choice.bbox.join(','));
+  if (choice.bbox !== undefined) {
+    if (!isBoundingBox(choice.bbox)) throw new InputError('bbox', BBOX_EXPECTED, choice.bbox.join(','));
+    return { projection: 'region', bbox: choice.bbox };
   }
-  if (projection === 'region') throw new InputError('--projection', 'region together with --bbox W,S,E,N or --centre LAT,LON', 'region alone');
+  if (choice.centre !== undefined && !isLonLat(choice.centre)) throw new InputError('centre', LAT_LON_EXPECTED, `${choice.centre[1]},${choice.centre[0]}`);
+  if (choice.centre !== undefined && projection === 'globe') return { projection, centre: choice.centre };
+  if (choice.centre !== undefined) return { projection: 'region', centre: choice.centre, spanDeg: checkNumber('spanDeg', choice.spanDeg ?? DEFAULT_SPAN_DEG, SPAN_LIMITS) };
+  if (projection === 'region') throw new InputError('projection', (name) => `region together with ${name('bbox')} W,S,E,N or ${name('centre')} LAT,LON`, 'region alone');
   return { projection };
 }
 
-export interface SizeOptions {
-  size?: string;
-  preset?: string;
-  widthMm?: string;
-  dpi?: string;
+/** Everything a map is asked for besides the eclipse. */
+export interface MapChoices extends ViewChoice, PageChoice {
+  readonly theme: ThemeName;
+  readonly borders: BorderStyle;
+  /** IANA zone of the map's times. */
+  readonly zone: string;
+  /** Replaces the generated title. */
+  readonly title?: string;
+  /** Places to mark, by name (at most MAX_MARKS). */
+  readonly marks: readonly string[];
+  readonly markClock: MarkClock;
+  readonly areaNames: AreaNamesChoice;
 }
 
-export function parseSizeAndDpi(options: SizeOptions, defaultSize: PixelSize = DEFAULT_SIZE): { size: PixelSize; dpi: number } {
-  const dpiOf = (fallback: number) => (options.dpi === undefined ? fallback : parseNumber('--dpi', options.dpi, { min: 36, max: 1200, unit: 'pixels per inch' }));
-  if (options.size !== undefined && options.preset !== undefined) throw new InputError('--size', 'either --size or --preset, not both', options.size);
-  if (options.size !== undefined) return { size: parseSize(options.size), dpi: dpiOf(72) };
-  if (options.preset === undefined) return { size: defaultSize, dpi: dpiOf(72) };
-  const preset = parseChoice('--preset', options.preset, SIZE_PRESETS);
-  if (preset !== 'print') return { size: PRESET_SIZES[preset], dpi: dpiOf(72) };
-  const dpi = dpiOf(300);
-  const widthMm = parseNumber('--width-mm', options.widthMm ?? '180', { min: 20, max: 2000, unit: 'millimetres' });
-  const widthPx = Math.round((widthMm / 25.4) * dpi);
-  const size = { widthPx, heightPx: Math.round(widthPx * PRINT_ASPECT) };
-  return { size: checkPixelSize('--width-mm', size, `${widthMm} mm at ${dpi} dpi = ${size.widthPx}x${size.heightPx} px`), dpi };
-}
+/** The defaults of what a map is asked for (the command line's and the house style's). */
+export const DEFAULT_MAP_CHOICES: MapChoices = {
+  projection: 'equal-earth', theme: 'light', borders: 'countries', zone: 'UTC', marks: [], markClock: 'map', areaNames: 'auto',
+};
 
-/** Everything a map needs besides the eclipse, parsed and checked (shared by map and batch). */
+/** Everything a map needs besides the eclipse, checked (shared by map and batch). */
 export interface MapSettings {
   readonly style: MapStyle;
   readonly size: PixelSize;
@@ -93,40 +130,18 @@ export interface MapSettings {
   readonly marks: readonly PlaceLabel[];
 }
 
-export function mapSettings(options: MapOptions): MapSettings {
-  const view = parseView(options);
-  const { size, dpi } = parseSizeAndDpi(options);
-  const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
-  const borders = parseChoice('--borders', options.borders, BORDER_STYLES);
-  const clock = civilClock(options.tz.trim(), '--tz');
-  const title = checkTitle(options.title);
-  if (options.mark.length > 20) throw new InputError('--mark', 'at most 20 places', `${options.mark.length} places`);
-  const marks = options.mark.map((name) => choosePlace({ place: name }, true, '--mark')!.place);
-  const markClock = parseChoice('--mark-clock', options.markClock ?? 'map', MARK_CLOCKS);
+export function mapSettings(choices: MapChoices): MapSettings {
+  const view = viewOf(choices);
+  const { size, dpi } = pageSize(choices);
+  const theme = THEMES[checkChoice('theme', choices.theme, THEME_NAMES)];
+  const borders = checkChoice('borders', choices.borders, BORDER_STYLES);
+  const clock = civilClock(choices.zone.trim(), 'zone');
+  const title = checkTitle(choices.title);
+  if (choices.marks.length > MAX_MARKS) throw new InputError('marks', `at most ${MAX_MARKS} places`, `${choices.marks.length} places`);
+  const marks = choices.marks.map((name) => choosePlace({ place: name }, true, 'marks').place);
+  const markClock = checkChoice('markClock', choices.markClock, MARK_CLOCKS);
   // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
-  const namesChoice = parseChoice('--area-names', options.areaNames ?? 'auto', AREA_NAMES_CHOICES);
-  const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && options.preset !== 'card' : namesChoice === 'on';
+  const namesChoice = checkChoice('areaNames', choices.areaNames, AREA_NAMES_CHOICES);
+  const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && choices.preset !== 'card' : namesChoice === 'on';
   return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
-}
-
-/** A house style as map options, for whatever the command line leaves unset. */
-export function optionsFromStyle(style: HouseStyle): Partial<MapOptions> {
-  return {
-    theme: style.theme,
-    projection: style.bbox || (style.centre && style.projection !== 'globe') ? 'region' : style.projection,
-    ...(style.bbox ? { bbox: style.bbox.join(',') } : {}),
-    ...(style.centre ? { centre: style.centre.join(','), span: String(style.span ?? 60) } : {}),
-    ...(style.size ? { size: style.size } : {}),
-    ...(style.preset ? { preset: style.preset } : {}),
-    ...(style.widthMm !== undefined ? { widthMm: String(style.widthMm) } : {}),
-    ...(style.dpi !== undefined ? { dpi: String(style.dpi) } : {}),
-    tz: style.tz,
-    borders: style.borders,
-    ...(style.title !== undefined ? { title: style.title } : {}),
-    mark: style.marks,
-    markClock: style.markClock,
-    areaNames: style.areaNames,
-    convention: style.convention,
-    ...(style.deltaT !== undefined ? { deltaT: String(style.deltaT) } : {}),
-  };
 }

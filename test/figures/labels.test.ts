@@ -129,15 +129,16 @@ test('times on another calendar day than the title\'s carry a day mark, in subti
 });
 
 test('continent and ocean names: on world views by default, off on cards and regional views, switchable; never on a label, a mark or a line (names placed on Natural Earth\'s continents)', async () => {
-  const { mapSettings } = await import('../../src/settings/mapSettings.ts');
-  const base = { projection: 'equal-earth', tz: 'UTC', borders: 'countries', theme: 'light', mark: [] as string[], convention: 'danjon' };
+  const { mapSettings, DEFAULT_MAP_CHOICES } = await import('../../src/settings/mapSettings.ts');
+  const base = DEFAULT_MAP_CHOICES;
   assert.equal(mapSettings({ ...base }).style.areaNames, true);
   assert.equal(mapSettings({ ...base, projection: 'globe' }).style.areaNames, true);
   assert.equal(mapSettings({ ...base, preset: 'card' }).style.areaNames, false);
-  assert.equal(mapSettings({ ...base, bbox: '-20,30,45,72' }).style.areaNames, false);
+  assert.equal(mapSettings({ ...base, bbox: [-20, 30, 45, 72] }).style.areaNames, false);
   assert.equal(mapSettings({ ...base, preset: 'card', areaNames: 'on' }).style.areaNames, true);
   assert.equal(mapSettings({ ...base, areaNames: 'off' }).style.areaNames, false);
-  assert.throws(() => mapSettings({ ...base, areaNames: 'maybe' }), /--area-names/);
+  // A plain-JavaScript caller may pass anything: the library's parameter is named.
+  assert.throws(() => mapSettings({ ...base, areaNames: 'maybe' as 'auto' }), /areaNames: expected one of auto, on, off, received "maybe"/);
 
   const { visibilityOf } = await import('../../src/visibility/lunar/visibility.ts');
   const { fieldLines } = await import('../../src/visibility/lunar/fieldLines.ts');

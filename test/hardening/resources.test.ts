@@ -36,7 +36,7 @@ test('13. a refused range makes no folder; the limit applies per shard, so the a
   const halves = [1, 2].map((index) => planBatch({ ...range, shard: { index, count: 2 } }).mine.length);
   assert.ok(halves.every((n) => n <= 500));
   assert.equal(halves[0]! + halves[1]!, total);
-  assert.throws(() => planBatch({ ...range, shard: { index: 1, count: 1 } }), (e: unknown) => e instanceof InputError && e.parameter === '--shard');
+  assert.throws(() => planBatch({ ...range, shard: { index: 1, count: 1 } }), (e: unknown) => e instanceof InputError && e.parameter === 'shard');
   assertOneLine(await run(['batch', '--from', '1000', '--to', '1300', '--shard', '1/1', '--style', style, '--out', out]), /^umbracast: --shard: expected at most 500 eclipses .* received shard 1\/1: \d+ of \d+ eclipses from 1000-01-01$/);
   assert.ok(!existsSync(out));
 });

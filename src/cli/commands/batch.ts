@@ -13,7 +13,9 @@ import { printable } from '../../batch/printable.ts';
 import { MAX_FILE_NAME_BYTES } from '../../outputs/files.ts';
 import { DEFAULT_STYLE, loadStyle, type HouseStyle } from '../../batch/style.ts';
 import { choosePlace } from '../../settings/choose.ts';
-import { mapSettings, optionsFromStyle, type MapOptions } from '../../settings/mapSettings.ts';
+import { mapSettings } from '../../settings/mapSettings.ts';
+import { mapChoicesOf, STYLE_FIELDS } from '../../batch/styleSettings.ts';
+import { asFlags } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import { toolVersion } from '../version.ts';
@@ -59,7 +61,10 @@ export function registerBatch(program: Command, context: CommandContext): void {
         await batchAction(options, context);
       } catch (error) {
         // What came from outside (paths, file names, style keys) is shown escaped, on one line.
-        if (error instanceof InputError) throw new InputError(printable(error.parameter), printable(error.expected), printable(error.received), true);
+        if (error instanceof InputError) {
+          const flagged = asFlags(error);
+          throw new InputError(printable(flagged.parameter), printable(flagged.expected), printable(flagged.received), true);
+        }
         if (error instanceof Error && !(error instanceof BatchInterrupted)) throw new Error(printable(error.message));
         throw error;
       }
@@ -112,11 +117,6 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
   }
 }
 
-const OPTION_FIELDS: Record<string, string> = {
-  '--size': 'size', '--preset': 'preset', '--width-mm': 'widthMm', '--dpi': 'dpi', '--bbox': 'bbox', '--centre': 'centre',
-  '--span': 'span', '--tz': 'tz', '--title': 'title', '--mark': 'marks', '--mark-clock': 'markClock', '--area-names': 'areaNames', '--delta-t': 'deltaT', '--projection': 'projection',
-};
-
 /**
  * Check a style as its maps will read it — sizes, views, zones, every place
  * named — before any worker starts, so that a bad value is one usage error
@@ -124,20 +124,20 @@ const OPTION_FIELDS: Record<string, string> = {
  * the lines saying which place each name not matched as written was taken for.
  */
 export function checkStyleSettings(style: HouseStyle, file: string): string[] {
-  const field = (error: unknown, name: string) =>
-    error instanceof InputError ? new InputError(`${file}: ${name}`, error.expected, error.received, true) : error;
   const notices: string[] = [];
   const named = (names: readonly string[], key: string) =>
     names.forEach((name, i) => {
-      const notice = choosePlace({ place: name }, true, `${file}: ${key}[${i}]`)!.notice;
+      const notice = choosePlace({ place: name }, true, `${file}: ${key}[${i}]`).notice;
       if (notice) notices.push(notice);
     });
   named(style.marks, 'marks');
   named(style.places, 'places');
   try {
-    mapSettings(optionsFromStyle(style) as MapOptions);
+    mapSettings(mapChoicesOf(style));
   } catch (error) {
-    throw field(error, error instanceof InputError ? (OPTION_FIELDS[error.parameter] ?? (error.parameter === '--place' ? 'marks' : error.parameter)) : '');
+    if (!(error instanceof InputError)) throw error;
+    // The style's field is named; other settings the text mentions read as the command line's flags.
+    throw new InputError(`${file}: ${STYLE_FIELDS[error.parameter] ?? error.parameter}`, asFlags(error).expected, error.received, true);
   }
   // Each place gets file names of its own (two Springfields are told apart by country and region), short enough to write.
   let places: ReturnType<typeof stylePlaces>;

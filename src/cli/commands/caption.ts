@@ -1,11 +1,14 @@
 /** `umbracast caption [WHEN]`: a publication caption and alt text, written from the geometry. */
 import type { Command } from 'commander';
 import { civilClock } from '../../ephemeris/civilTime.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
+import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
+import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { WHEN_EXPECTED } from '../options.ts';
+import { withEclipseOptions } from '../declare.ts';
+import { parseWhen, WHEN_EXPECTED } from '../options.ts';
+import { eclipseChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 
-interface CaptionOptions extends PlaceChoice, EclipseChoice {
+interface CaptionOptions extends PlaceFlags, EclipseFlags {
   /** The caption's zone (default UTC), which also serves the place's own summary. */
   tz: string;
 }
@@ -20,10 +23,10 @@ export function registerCaption(program: Command, context: CommandContext): void
     .option('--at <LAT,LON>', 'add what is seen from this point');
   withEclipseOptions(command)
     .action(async (whenText: string | undefined, options: CaptionOptions) => {
-      const clock = civilClock(options.tz.trim(), '--tz');
+      const clock = civilClock(options.tz.trim(), 'zone');
       // The place's own summary uses the caption's zone, so that one text reads in one time.
-      const chosen = choosePlace({ ...options, tz: options.tz }, false);
-      const eclipse = chooseEclipse(whenText, options, context.now());
+      const chosen = choosePlace(placeChoiceFromFlags(options), false, 'place', flagOf('place'));
+      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
       // The geometry (world data, the visibility model) loads when a caption is written.
       const [{ eclipseCaption, captionText }, { visibilityOf }, { localReport }] = await Promise.all([

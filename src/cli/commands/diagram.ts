@@ -3,15 +3,18 @@ import type { Command } from 'commander';
 import { THEME_NAMES, THEMES } from '../../figures/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
 import { SKY_FORMATS } from '../../outputs/formatNames.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
-import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../../settings/mapSettings.ts';
+import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
+import { checkTitle, pageSize } from '../../settings/mapSettings.ts';
+import { flagOf } from '../flags.ts';
+import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { eclipseChoiceFromFlags, pageChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags, type SizeFlags } from '../readFlags.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import type { CommandContext } from '../context.ts';
-import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { toolVersion } from '../version.ts';
 import { captionPathFor, parseOutput, withSizeOptions } from './map.ts';
 
-interface DiagramOptions extends SizeOptions, PlaceChoice, EclipseChoice {
+interface DiagramOptions extends SizeFlags, PlaceFlags, EclipseFlags {
   theme: string;
   title?: string;
   output?: string;
@@ -34,12 +37,12 @@ export function registerDiagram(program: Command, context: CommandContext): void
     .option('--format <name>', SKY_FORMATS.join(', ')))
     .action(async (whenText: string | undefined, options: DiagramOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
-      const { size, dpi } = parseSizeAndDpi(options, DEFAULT_SIZE);
+      const { size, dpi } = pageSize(pageChoiceFromFlags(options), DEFAULT_SIZE);
       checkTitle(options.title);
       // Times in UTC unless a zone is given, or a place whose zone is taken.
-      const chosen = choosePlace(options, false);
-      const clock = chosen?.clock ?? civilClock(options.tz === undefined ? 'UTC' : options.tz.trim(), '--tz');
-      const eclipse = chooseEclipse(whenText, options, context.now());
+      const chosen = choosePlace(placeChoiceFromFlags(options), false, 'place', flagOf('place'));
+      const clock = chosen?.clock ?? civilClock(options.tz === undefined ? 'UTC' : options.tz.trim());
+      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-diagram`, SKY_FORMATS);
       if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
       // The drawing code loads when a figure is drawn, not with the command line.

@@ -1,9 +1,8 @@
 /** `umbracast list`: the catalogue for a range, as a table, json or csv. */
 import type { Command } from 'commander';
-import { findLunarEclipses } from '../../eclipses/lunar/catalogue.ts';
 import { SHADOW_CONVENTIONS } from '../../eclipses/lunar/conventions.ts';
 import { ECLIPSE_KINDS } from '../../eclipses/lunar/types.ts';
-import { fixedDeltaTModel, standardDeltaTModel } from '../../ephemeris/deltaT.ts';
+import { deltaTModelOf, findEclipses, OUTPUT_BODY } from '../../settings/catalogues.ts';
 import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
 import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
@@ -34,10 +33,9 @@ export function registerList(program: Command, context: CommandContext): void {
       const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
       const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
       const format = parseChoice('--format', options.format, CATALOGUE_FORMATS);
-      const deltaT = options.deltaT === undefined
-        ? standardDeltaTModel()
-        : fixedDeltaTModel(parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS));
-      const eclipses = findLunarEclipses({ ...range, convention, deltaT }).filter((e) => kinds.includes(e.kind));
+      const choice = { convention, ...(options.deltaT === undefined ? {} : { deltaTSeconds: parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS) }) };
+      const deltaT = deltaTModelOf(choice);
+      const eclipses = findEclipses(OUTPUT_BODY, range, choice).filter((e) => kinds.includes(e.kind));
       const doc = catalogueDocument(eclipses, { convention, deltaTModel: deltaT.name, ...range });
       const render = { table: catalogueTable, json: catalogueJson, csv: catalogueCsv }[format];
       context.stdout(render(doc));

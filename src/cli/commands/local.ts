@@ -2,12 +2,15 @@
 import type { Command } from 'commander';
 import type { LunarEclipse } from '../../eclipses/lunar/types.ts';
 import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localReport, localTable } from '../../outputs/localFormats.ts';
+import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
-import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/choose.ts';
+import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
+import { eclipseChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 
-interface LocalOptions extends PlaceChoice, EclipseChoice {
+interface LocalOptions extends PlaceFlags, EclipseFlags {
   format: string;
 }
 
@@ -19,14 +22,14 @@ export function registerLocal(program: Command, context: CommandContext): void {
   withEclipseOptions(withPlaceOptions(command).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
     .action((whenText: string | undefined, options: LocalOptions) => {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
-      const chosen = choosePlace(options)!;
-      const eclipse = chooseEclipse(whenText, options, context.now());
+      const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
+      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);
       context.stdout(renderLocal(eclipse, chosen, format));
     });
 }
 
-function renderLocal(eclipse: LunarEclipse, chosen: NonNullable<ReturnType<typeof choosePlace>>, format: (typeof LOCAL_FORMATS)[number]): string {
+function renderLocal(eclipse: LunarEclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number]): string {
   const report = localReport(eclipse, chosen);
   switch (format) {
     case 'table': return localTable(report);

@@ -9,12 +9,14 @@ import { THEME_NAMES } from '../../figures/theme.ts';
 import { MARK_CLOCKS } from '../../figures/markClock.ts';
 import { AREA_NAMES_CHOICES } from '../../figures/areaNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
-import { MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
+import { EXTENSION_FORMATS, MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
-import { parseChoice, WHEN_EXPECTED } from '../options.ts';
-import { chooseEclipse, placeNotices, withEclipseOptions } from '../../settings/choose.ts';
-import { DEFAULT_SIZE, mapSettings, optionsFromStyle, type MapOptions } from '../../settings/mapSettings.ts';
+import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
+import { withEclipseOptions } from '../declare.ts';
+import { eclipseChoiceFromFlags, mapChoicesFromFlags, type MapFlags, type Underlay } from '../readFlags.ts';
+import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
+import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
 export function withSizeOptions(command: Command, defaultSize: string): Command {
@@ -46,26 +48,24 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
     .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
-    .action(async (whenText: string | undefined, options: MapOptions, self: Command) => {
+    .action(async (whenText: string | undefined, options: MapFlags, self: Command) => {
+      let style: StyleUnderlay | undefined;
       if (options.style !== undefined) {
-        const { loadStyle } = await import('../../batch/style.ts');
-        const fromStyle = optionsFromStyle(loadStyle(options.style)) as Record<string, unknown>;
-        const given = options as unknown as Record<string, unknown>;
-        for (const [key, value] of Object.entries(fromStyle)) {
+        const [{ loadStyle }, { mapChoicesOf, eclipseChoiceOf }] = await Promise.all([import('../../batch/style.ts'), import('../../batch/styleSettings.ts')]);
+        const loaded = loadStyle(options.style);
+        // Options typed here win; the style gives the rest.
+        const typed = (key: string) => {
           const source = self.getOptionValueSource(key);
-          if (source === undefined || source === 'default') given[key] = value;
-        }
+          return source !== undefined && source !== 'default';
+        };
+        style = { map: { base: mapChoicesOf(loaded), typed }, eclipse: { base: eclipseChoiceOf(loaded), typed } };
       }
       // The path written, on stdout, so that scripts can pick it up.
-      context.stdout(`${await runMap(whenText, options, context)}\n`);
+      context.stdout(`${await runMap(whenText, options, context, style)}\n`);
     });
 }
 
 const listOr = (items: string[]) => (items.length > 1 ? `${items.slice(0, -1).join(', ')} or ${items[items.length - 1]}` : items.join(''));
-
-const EXTENSION_FORMATS: Record<string, MapFormat> = {
-  '.png': 'png', '.svg': 'svg', '.webp': 'webp', '.jpg': 'jpg', '.jpeg': 'jpg', '.geojson': 'geojson', '.json': 'geojson',
-};
 
 /**
  * Where a picture goes: --output (its extension picks the format; its folder
@@ -80,7 +80,7 @@ export function parseOutput<F extends MapFormat>(options: { output?: string; for
     return { path: resolve(folder, `${defaultStem}.${chosen}`), format: chosen };
   }
   const extension = extname(options.output).toLowerCase();
-  const fromExtension = EXTENSION_FORMATS[extension] as F | undefined;
+  const fromExtension = (Object.hasOwn(EXTENSION_FORMATS, extension) ? EXTENSION_FORMATS[extension] : undefined) as F | undefined;
   if (!fromExtension || !formats.includes(fromExtension)) {
     throw new InputError('--output', `a file name ending in ${listOr(formats.map((f) => `.${f}`))}`, options.output);
   }
@@ -113,12 +113,20 @@ export function viewStem(view: View): string {
   return `-${view.projection}`;
 }
 
+/** A house style under the flags: the map's choices and the eclipse's. */
+interface StyleUnderlay {
+  readonly map: Underlay<MapChoices>;
+  readonly eclipse: Underlay<EclipseChoice>;
+}
+
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
-export async function runMap(whenText: string | undefined, options: MapOptions, context: CommandContext): Promise<string> {
-  const settings = mapSettings(options);
-  const eclipse = chooseEclipse(whenText, options, context.now());
+export async function runMap(whenText: string | undefined, options: MapFlags, context: CommandContext, style?: StyleUnderlay): Promise<string> {
+  const choices = mapChoicesFromFlags(options, style?.map);
+  const settings = mapSettings(choices);
+  const when = parseWhen(whenText);
+  const eclipse = chooseEclipse(when, eclipseChoiceFromFlags(options, style?.eclipse), context.now());
   const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}${viewStem(settings.style.view)}`, MAP_FORMATS);
-  for (const notice of placeNotices('--mark', options.mark)) context.stderr(`${notice}\n`);
+  for (const notice of placeNotices('--mark', choices.marks)) context.stderr(`${notice}\n`);
   // The drawing code (fonts, world data, sharp) loads when a map is drawn, not with the command line.
   const [{ renderMapFile }, { captionText }] = await Promise.all([import('../../outputs/mapFile.ts'), import('../../outputs/caption.ts')]);
   const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });

@@ -4,14 +4,17 @@ import { placeSlug } from '../../places/gazetteer.ts';
 import { THEME_NAMES, THEMES } from '../../figures/theme.ts';
 import { writeFileAtomic } from '../../outputs/files.ts';
 import { SKY_FORMATS } from '../../outputs/formatNames.ts';
-import { chooseEclipse, choosePlace, withEclipseOptions, withPlaceOptions, type EclipseChoice, type PlaceChoice } from '../../settings/choose.ts';
+import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
+import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { parseChoice, WHEN_EXPECTED } from '../options.ts';
+import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
+import { eclipseChoiceFromFlags, pageChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags, type SizeFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 import { captionPathFor, parseOutput, withSizeOptions } from './map.ts';
-import { checkTitle, parseSizeAndDpi, type SizeOptions } from '../../settings/mapSettings.ts';
+import { checkTitle, pageSize } from '../../settings/mapSettings.ts';
 
-interface SkyOptions extends SizeOptions, PlaceChoice, EclipseChoice {
+interface SkyOptions extends SizeFlags, PlaceFlags, EclipseFlags {
   theme: string;
   title?: string;
   output?: string;
@@ -32,10 +35,10 @@ export function registerSky(program: Command, context: CommandContext): void {
     .option('--format <name>', SKY_FORMATS.join(', ')))
     .action(async (whenText: string | undefined, options: SkyOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
-      const { size, dpi } = parseSizeAndDpi(options, { widthPx: 1600, heightPx: 900 });
+      const { size, dpi } = pageSize(pageChoiceFromFlags(options), { widthPx: 1600, heightPx: 900 });
       checkTitle(options.title);
-      const chosen = choosePlace(options)!;
-      const eclipse = chooseEclipse(whenText, options, context.now());
+      const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
+      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       const slug = placeSlug(chosen.place.name);
       const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}-sky-${slug}`, SKY_FORMATS);
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);

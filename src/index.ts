@@ -39,4 +39,5 @@ export { solarEclipseRecord, type SolarEclipseRecord } from './eclipses/solar/re
 export { solarSafetyText, safetyScopeForEclipse, safetyScopeForPlace, type SolarSafetyForm, type SolarSafetyScope } from './words/solar/caution.ts';
 export { mapSettings, pageSize, viewOf, DEFAULT_MAP_CHOICES, type MapChoices, type MapSettings, type PageChoice, type ViewChoice } from './settings/mapSettings.ts';
 export { chooseEclipse, choosePlace, type ChosenPlace, type EclipseChoice, type PlaceChoice } from './settings/choose.ts';
-export { CATALOGUES, findEclipses, RENDERED_BODIES, type EclipseOf } from './settings/catalogues.ts';
+export { deltaTModelOf, searchOptionsOf, type EclipseOf } from './settings/catalogues.ts';
+export { findEclipses, eclipseById, eclipseNear, nextEclipse, BODY_CHOICES, type BodyChoice, type Eclipse, type EclipseRangeOptions, type EclipseSearchOptions } from './eclipses/kinds.ts';

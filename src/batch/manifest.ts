@@ -59,9 +59,10 @@ const finite = z.number();
 const lonLat = z.tuple([finite.min(-180).max(180), finite.min(-90).max(90)]);
 const contactNames = CONTACT_ORDER as readonly string[];
 
-/** The catalogue record (umbracast.catalogue/1) as the contact sheet and the csv read it. */
+/** The lunar catalogue record (umbracast.catalogue/2; /1 had no `body`) as the contact sheet and the csv read it. */
 const recordSchema = z
   .object({
+    body: z.literal('lunar').optional(),
     id: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'an eclipse id YYYY-MM-DD'),
     kind: z.enum(ECLIPSE_KINDS as [string, ...string[]]),
     greatest: isoSeconds,

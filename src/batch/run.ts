@@ -14,7 +14,8 @@ import { setMaxListeners } from 'node:events';
 import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
-import { findEclipses, OUTPUT_BODY } from '../settings/catalogues.ts';
+import { findEclipses } from '../eclipses/kinds.ts';
+import { ofBody, searchOptionsOf } from '../settings/catalogues.ts';
 import type { Eclipse } from '../eclipses/kinds.ts';
 import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
@@ -119,7 +120,8 @@ export function removeLeftovers(outDir: string): number {
 /** What a batch call will do: every eclipse of the range and kinds, this shard's part, within the ceiling. */
 export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: LunarEclipse[]; mine: LunarEclipse[] } {
   const { style } = options;
-  const all = findEclipses(OUTPUT_BODY, options, eclipseChoiceOf(style)).filter((e) => options.kinds.includes(e.kind));
+  // The batch draws lunar eclipses only, so far.
+  const all = ofBody('lunar', findEclipses({ ...searchOptionsOf(eclipseChoiceOf(style), 'lunar'), from: options.from, to: options.to })).filter((e) => options.kinds.includes(e.kind));
   const mine = shardOf(all, options.shard);
   if (mine.length > MAX_BATCH_ECLIPSES) {
     const which = options.shard ? `shard ${options.shard.index}/${options.shard.count}: ${mine.length} of ${all.length} eclipses` : `${all.length} eclipses`;

@@ -4,8 +4,14 @@
  */
 import type { Command } from 'commander';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
+import { ECLIPSE_BODIES, type EclipseBody } from '../eclipses/common/record.ts';
+import { ECLIPSE_KINDS } from '../eclipses/lunar/types.ts';
+import { SOLAR_ECLIPSE_KINDS } from '../eclipses/solar/types.ts';
 
 export { DELTA_T_LIMITS } from '../settings/read.ts';
+
+/** The kinds of eclipse each body has, as --kind names them. */
+export const KINDS_OF_BODY: { readonly [B in EclipseBody]: readonly string[] } = { lunar: ECLIPSE_KINDS, solar: SOLAR_ECLIPSE_KINDS };
 
 /** --convention and --delta-t, as every command that computes eclipses declares them. */
 export function withEclipseOptions(command: Command): Command {
@@ -20,4 +26,18 @@ export function withPlaceOptions(command: Command): Command {
     .option('--place <name>', 'a place from the GeoNames gazetteer: "Adelaide", "Springfield, US-IL"')
     .option('--at <LAT,LON>', 'any point, degrees (east positive)')
     .option('--tz <zone>', 'IANA time zone (default: the zone at the place)');
+}
+
+/**
+ * --body (lunar, solar or all; default all) and --kind (checked against the
+ * body by `bodyFromFlags`/`kindsFromFlags` in readFlags.ts), as list, local,
+ * map, caption and batch declare them. `withKind` false leaves --kind out
+ * (the one-eclipse commands).
+ */
+export function withBodyOptions(command: Command, withKind = true): Command {
+  command.option('--body <body>', `which eclipses: ${[...ECLIPSE_BODIES, 'all'].join(', ')}`, 'all');
+  if (withKind) {
+    command.option('--kind <kinds>', `only these kinds, comma-separated: lunar ${KINDS_OF_BODY.lunar.join(',')}; solar ${KINDS_OF_BODY.solar.join(',')}`);
+  }
+  return command;
 }

@@ -7,6 +7,8 @@
  */
 import { InputError } from '../errors.ts';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
+import { BODY_CHOICES, type BodyChoice } from '../eclipses/kinds.ts';
+import { KINDS_OF_BODY } from './declare.ts';
 import { PROJECTION_NAMES } from '../figures/projection.ts';
 import { THEME_NAMES } from '../figures/theme.ts';
 import { MARK_CLOCKS } from '../figures/markClock.ts';
@@ -15,6 +17,35 @@ import { BORDER_STYLES } from '../sphere/world.ts';
 import type { EclipseChoice, PlaceChoice } from '../settings/choose.ts';
 import { DPI_LIMITS, SIZE_PRESETS, SPAN_LIMITS, WIDTH_MM_LIMITS, type MapChoices, type PageChoice } from '../settings/mapSettings.ts';
 import { DELTA_T_LIMITS, parseBoundingBox, parseChoice, parseLatLon, parseNumber, parseSize } from '../settings/read.ts';
+
+export interface BodyFlags {
+  body?: string;
+  kind?: string;
+}
+
+/** --body: lunar, solar or all (the default). */
+export function bodyFromFlags(flags: BodyFlags): BodyChoice {
+  return flags.body === undefined ? 'all' : parseChoice('--body', flags.body, BODY_CHOICES);
+}
+
+/** The kinds --kind may name for a body: with `all`, a kind of either. */
+export function kindsOfBody(body: BodyChoice): readonly string[] {
+  return body === 'all' ? [...new Set([...KINDS_OF_BODY.lunar, ...KINDS_OF_BODY.solar])] : KINDS_OF_BODY[body];
+}
+
+/**
+ * --kind read against the body: the kinds chosen, or undefined for every kind.
+ * A kind the body has not (annular for lunar, penumbral for solar) is one error
+ * line naming --kind and the kinds allowed for that body.
+ */
+export function kindsFromFlags(flags: BodyFlags, body: BodyChoice = bodyFromFlags(flags)): readonly string[] | undefined {
+  if (flags.kind === undefined) return undefined;
+  const allowed = kindsOfBody(body);
+  const parts = flags.kind.split(',').map((p) => p.trim().toLowerCase()).filter((p) => p.length > 0);
+  const bad = parts.length === 0 || parts.some((p) => !allowed.includes(p));
+  if (bad) throw new InputError('--kind', `a comma-separated list of the kinds of ${body === 'all' ? 'lunar or solar' : body} eclipses: ${allowed.join(', ')}`, flags.kind);
+  return [...new Set(parts)];
+}
 
 export interface EclipseFlags {
   convention: string;

@@ -1,10 +1,18 @@
-/** The catalogue as json, csv (both keep seconds) and a table for people (minutes, UTC labelled). */
+/**
+ * The catalogue as json, csv (both keep seconds) and a table for people
+ * (minutes, UTC labelled). A catalogue holding a solar eclipse carries the
+ * eye-safety caution in every format: `safety` in JSON, a `safety` column on
+ * each solar row of the CSV, the first line of the table. A lunar-only
+ * catalogue keeps the lunar table and columns.
+ */
 import { stringify } from 'csv-stringify/sync';
 import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
+import { fixed, PRINTED_PLACES } from '../eclipses/lunar/figures.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
-import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
+import type { CatalogueDocument, CatalogueRecord, EclipseRecord, SolarEclipseRecord } from './catalogueRecord.ts';
 import { formatDuration } from '../words/common.ts';
 import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
+import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
 export const CATALOGUE_FORMATS: readonly CatalogueFormat[] = ['table', 'json', 'csv'];
@@ -13,52 +21,115 @@ export function catalogueJson(doc: CatalogueDocument): string {
   return `${JSON.stringify(doc, null, 2)}\n`;
 }
 
+const isSolar = (e: CatalogueRecord): e is SolarEclipseRecord => e.body === 'solar';
+
+/** Lunar and solar contacts share their names (P1, U1…U4, P4): one column each. */
 const CSV_COLUMNS = [
-  'id', 'kind', 'greatest', 'greatestTT', 'deltaT', 'deltaTSource', 'gamma', 'umbralMagnitude', 'penumbralMagnitude', 'saros',
+  'body', 'id', 'kind', 'greatest', 'greatestTT', 'deltaT', 'deltaTSource', 'gamma', 'umbralMagnitude', 'penumbralMagnitude', 'magnitude', 'saros',
   ...CONTACT_ORDER,
-  'penumbralSeconds', 'partialSeconds', 'totalSeconds',
-  'subLunarLon', 'subLunarLat', 'calendar',
+  'penumbralSeconds', 'partialSeconds', 'totalSeconds', 'centralSeconds',
+  'subLunarLon', 'subLunarLat', 'greatestPointLon', 'greatestPointLat', 'sunAltitude', 'pathWidthKm', 'moonRadiusPenumbra', 'moonRadiusUmbra',
+  'calendar', 'safety',
 ] as const;
 
+/** The caution on a solar row: short form, scoped to that eclipse. */
+const rowSafety = (e: SolarEclipseRecord): string => solarSafetyText('short', safetyScopeForEclipse(e.kind));
+
 export function catalogueCsv(doc: CatalogueDocument): string {
-  const rows = doc.eclipses.map((e) => [
-    e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, e.umbralMagnitude, e.penumbralMagnitude, e.saros,
-    ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
-    e.durations.penumbral, e.durations.partial ?? '', e.durations.total ?? '',
-    e.subLunar.greatest[0], e.subLunar.greatest[1], doc.calendar,
-  ]);
+  const rows = doc.eclipses.map((e) => {
+    if (isSolar(e)) {
+      return [
+        e.body, e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, '', '', e.magnitude, e.saros,
+        ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
+        '', e.durations.partial, '', e.durations.central ?? '',
+        '', '', e.greatestPoint[0], e.greatestPoint[1], e.sunAltitude, e.pathWidthKm ?? '', e.moonRadius.penumbra, e.moonRadius.umbra,
+        doc.calendar, rowSafety(e),
+      ];
+    }
+    return [
+      e.body, e.id, e.kind, e.greatest, e.greatestTT, e.deltaT, e.deltaTSource, e.gamma, e.umbralMagnitude, e.penumbralMagnitude, '', e.saros,
+      ...CONTACT_ORDER.map((name) => e.contacts[name] ?? ''),
+      e.durations.penumbral, e.durations.partial ?? '', e.durations.total ?? '', '',
+      e.subLunar.greatest[0], e.subLunar.greatest[1], '', '', '', '', '', '',
+      doc.calendar, '',
+    ];
+  });
   return stringify(rows, { header: true, columns: [...CSV_COLUMNS] });
 }
 
-export function catalogueTable(doc: CatalogueDocument): string {
+/**
+ * The words of a catalogue holding both kinds (the lunar ones come from the
+ * lunar catalogue of words). The columns read across both kinds: the
+ * magnitude is the umbral one for a lunar eclipse and the fraction of the
+ * Sun's diameter covered for a solar one.
+ */
+const BOTH = {
+  header: ['Date', 'Body', 'Kind', 'Greatest (UTC)', 'Magnitude', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Central', 'Path', 'Saros'],
+  numeric: [false, false, false, false, true, true, true, true, true, true, true, true],
+  body: { lunar: 'Moon', solar: 'Sun' },
+  solarKind: { total: 'total', annular: 'annular', hybrid: 'hybrid', partial: 'partial' },
+  eclipses: (lunar: number, solar: number) => `${lunar} lunar and ${solar} solar ${lunar + solar === 1 ? 'eclipse' : 'eclipses'}`,
+  solarEclipses: (count: number) => `${count} solar ${count === 1 ? 'eclipse' : 'eclipses'}`,
+  magnitudeNote: 'Magnitude: of the umbra for the Moon; of the Sun\'s diameter covered, at the greatest point, for the Sun.',
+  solarNote: (k1: number, k2: number) =>
+    `Sun: central = totality or annularity on the central line at greatest eclipse, path = its width there; Moon radius k1 = ${k1} (penumbra), k2 = ${k2} (umbra and antumbra).`,
+  centralSeconds: (seconds: number) => `${Math.floor(seconds / 60)}m ${String(seconds % 60).padStart(2, '0')}s`,
+} as const;
+
+/** `bodies`: which kinds were searched (lunar, solar or all), for the heading's count when none was found. */
+export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar' | 'all' = 'lunar'): string {
   const words = LUNAR_ENGLISH;
   const w = words.table;
-  const header = w.catalogueHeader;
+  const solar = doc.eclipses.filter(isSolar);
+  const both = solar.length > 0;
+  const header = both ? BOTH.header : w.catalogueHeader;
+  const numeric = both ? BOTH.numeric : [false, false, false, true, true, true, true, true, true];
   const minutes = (value: number | undefined) => (value !== undefined ? formatDuration(value * 60, 'compact', words.common) : w.absent);
-  // Every figure as printed elsewhere: rounded once, from the full value (record.printed).
-  const rows = doc.eclipses.map((e: EclipseRecord) => [
-    julianDateOfIsoDate(e.id) ? w.julianBeside(e.id, julianDateOfIsoDate(e.id)!) : e.id,
-    words.kind[e.kind],
-    e.printed.greatestUtc,
-    e.printed.umbralMagnitude,
-    e.printed.penumbralMagnitude,
-    e.printed.gamma,
-    minutes(e.printed.minutes.partial),
-    minutes(e.printed.minutes.total),
+  const date = (id: string) => (julianDateOfIsoDate(id) ? w.julianBeside(id, julianDateOfIsoDate(id)!) : id);
+  // Every lunar figure as printed elsewhere: rounded once, from the full value (record.printed).
+  const lunarRow = (e: EclipseRecord): string[] => {
+    const figures = [e.printed.umbralMagnitude, e.printed.penumbralMagnitude, e.printed.gamma, minutes(e.printed.minutes.partial), minutes(e.printed.minutes.total)];
+    return both
+      ? [date(e.id), BOTH.body.lunar, words.kind[e.kind], e.printed.greatestUtc, ...figures, w.absent, w.absent, String(e.saros)]
+      : [date(e.id), words.kind[e.kind], e.printed.greatestUtc, ...figures, String(e.saros)];
+  };
+  const solarRow = (e: SolarEclipseRecord): string[] => [
+    date(e.id), BOTH.body.solar, BOTH.solarKind[e.kind], isoMinute(e.greatest),
+    fixed(e.magnitude, PRINTED_PLACES.magnitude), w.absent, fixed(e.gamma, PRINTED_PLACES.gamma), w.absent, w.absent,
+    e.durations.central !== undefined ? BOTH.centralSeconds(e.durations.central) : w.absent,
+    e.pathWidthKm !== undefined ? `${Math.round(e.pathWidthKm)} km` : w.absent,
     String(e.saros),
-  ]);
-  const numeric = [false, false, false, true, true, true, true, true, true];
+  ];
+  const rows = doc.eclipses.map((e) => (isSolar(e) ? solarRow(e) : lunarRow(e)));
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (numeric[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
   const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].join(', ');
   const deltaTs = doc.eclipses.map((e) => e.deltaT);
-  const title = w.catalogueTitle(w.eclipses(doc.eclipses.length), doc.range.from.slice(0, 10), doc.range.to.slice(0, 10));
+  const counted = bodies === 'solar' ? BOTH.solarEclipses(solar.length)
+    : bodies === 'all' ? BOTH.eclipses(doc.eclipses.length - solar.length, solar.length) : w.eclipses(doc.eclipses.length);
+  const title = w.catalogueTitle(counted, doc.range.from.slice(0, 10), doc.range.to.slice(0, 10));
   const julian = doc.eclipses.some((e) => julianDateOfIsoDate(e.id)) ? w.catalogueJulian : '';
+  const radii = solar[0]?.moonRadius;
   const notes = [
     w.catalogueTimes(words.convention[doc.convention], julian),
     deltaTs.length > 0 ? w.deltaTNote(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)]), sources, doc.deltaTModel) : w.deltaTModelOnly(doc.deltaTModel),
+    ...(both ? [BOTH.magnitudeNote, BOTH.solarNote(radii!.penumbra, radii!.umbra)] : []),
   ];
+  // The caution first, whenever a solar eclipse is listed.
+  const caution = both ? [catalogueCaution(solar), ''] : [];
   if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;
-  return [title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');
+  return [...caution, title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');
+}
+
+/** The short caution for the solar records of a table: totality somewhere among them or not. */
+function catalogueCaution(solar: readonly SolarEclipseRecord[]): string {
+  return solarSafetyText('short', solar.some((e) => safetyScopeForEclipse(e.kind) === 'whole-eclipse') ? 'whole-eclipse' : 'no-totality');
+}
+
+/** "2024-04-08 18:17" from an ISO instant with seconds, rounded to the minute as the lunar rows are. */
+function isoMinute(iso: string): string {
+  const ms = Date.parse(iso);
+  const rounded = new Date(Math.round(ms / 60_000) * 60_000).toISOString();
+  return `${rounded.slice(0, 10)} ${rounded.slice(11, 16)}`;
 }

@@ -5,22 +5,30 @@
  * `at`, `zone`); the CLI shows its flags instead, a style its fields.
  */
 import { InputError } from '../errors.ts';
-import type { EclipseBody } from '../eclipses/kinds.ts';
+import { eclipseNear, nextEclipse, type BodyChoice } from '../eclipses/kinds.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
 import type { PlaceLabel } from '../places/label.ts';
 import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
 import { isLonLat, LAT_LON_EXPECTED, WHEN_EXPECTED, type When } from './read.ts';
-import { eclipseNear, nextEclipse, OUTPUT_BODY, type EclipseChoice, type EclipseOf } from './catalogues.ts';
+import { searchOptionsOf, type EclipseChoice, type EclipseOf } from './catalogues.ts';
 
 export { DELTA_T_LIMITS } from './read.ts';
 export { deltaTModelOf, type EclipseChoice } from './catalogues.ts';
 
-/** One eclipse of a body (by default the one the outputs render): the next after `now`, or the one within a week of a date. */
-export function chooseEclipse<B extends EclipseBody = typeof OUTPUT_BODY>(when: When, choice: EclipseChoice, now: Date, body: B = OUTPUT_BODY as B): EclipseOf[B] {
-  const found = when.kind === 'next' ? nextEclipse(body, now, choice) : eclipseNear(body, when.date, 7.5, choice);
+/**
+ * One eclipse of a body (lunar, solar or `all`), through src/eclipses/kinds.ts:
+ * the next after `now`, or the one a date names: its own eclipse for an id
+ * (the UTC date of greatest), else the one within a week; with `all`, a date
+ * near both a lunar and a solar eclipse is an InputError naming both and
+ * `body`. A command that renders one body only (sky, diagram) leaves `body`
+ * out and gets a lunar eclipse.
+ */
+export function chooseEclipse<B extends BodyChoice = 'lunar'>(when: When, choice: EclipseChoice, now: Date, body: B = 'lunar' as B): EclipseOf[B] {
+  const options = searchOptionsOf(choice, body);
+  const found = when.kind === 'next' ? nextEclipse(now, options) : eclipseNear(when.date, 7.5, options);
   if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
-  return found;
+  return found as EclipseOf[B];
 }
 
 /** A place by name, or a position [lon, lat] in degrees; `zone` (IANA) overrides the zone found there. */

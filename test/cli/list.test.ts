@@ -16,7 +16,10 @@ const badInputs: [string, string[], RegExp][] = [
   ['--from after --to', ['list', '--from', '2030', '--to', '2029'], /^umbracast: --to: expected a date after --from \(2030-01-01\), received "2029"$/],
   ['a year out of range', ['list', '--from', '0999'], /^umbracast: --from: expected .* year in 1000–3000, received "0999"$/],
   ['a year past the range', ['list', '--to', '3001'], /^umbracast: --to: expected .* year in 1000–3000, received "3001"$/],
-  ['an unknown kind', ['list', '--kind', 'total,annular'], /^umbracast: --kind: expected a comma-separated list of penumbral, partial, total, received "total,annular"$/],
+  ['a solar kind for the lunar body', ['list', '--body', 'lunar', '--kind', 'total,annular'], /^umbracast: --kind: expected a comma-separated list of the kinds of lunar eclipses: penumbral, partial, total, received "total,annular"$/],
+  ['a lunar kind for the solar body', ['list', '--body', 'solar', '--kind', 'penumbral'], /^umbracast: --kind: expected a comma-separated list of the kinds of solar eclipses: total, annular, hybrid, partial, received "penumbral"$/],
+  ['a kind of neither body', ['list', '--kind', 'umbral'], /^umbracast: --kind: expected a comma-separated list of the kinds of lunar or solar eclipses: penumbral, partial, total, annular, hybrid, received "umbral"$/],
+  ['an unknown body', ['list', '--body', 'sun'], /^umbracast: --body: expected one of lunar, solar, all, received "sun"$/],
   ['an unknown format', ['list', '--format', 'xml'], /^umbracast: --format: expected one of table, json, csv, received "xml"$/],
   ['a non-numeric ΔT', ['list', '--delta-t', '69s'], /^umbracast: --delta-t: expected a number of seconds from -86400 to 86400, received "69s"$/],
   ['an unknown convention', ['list', '--convention', 'plain'], /^umbracast: --convention: expected one of danjon, chauvenet, received "plain"$/],
@@ -35,7 +38,7 @@ for (const [label, args, pattern] of badInputs) {
 }
 
 test('a bare year range covers whole years: --from 2026 --to 2035 is 2026-01-01 to 2035-12-31', async () => {
-  const { code, stdout } = await run(['list', '--from', '2026', '--to', '2035', '--format', 'json']);
+  const { code, stdout } = await run(['list', '--from', '2026', '--to', '2035', '--format', 'json', '--body', 'lunar']);
   assert.equal(code, 0);
   const doc = JSON.parse(stdout);
   assert.deepEqual(doc.range, { from: '2026-01-01T00:00:00Z', to: '2036-01-01T00:00:00Z' });
@@ -44,8 +47,8 @@ test('a bare year range covers whole years: --from 2026 --to 2035 is 2026-01-01 
 });
 
 test('a full date in --to is exclusive: --to 2025-03-14 leaves out the eclipse of that day; 2025-03-15 keeps it', async () => {
-  const without = JSON.parse((await run(['list', '--from', '2025-01-01', '--to', '2025-03-14', '--format', 'json'])).stdout);
-  const withIt = JSON.parse((await run(['list', '--from', '2025-01-01', '--to', '2025-03-15', '--format', 'json'])).stdout);
+  const without = JSON.parse((await run(['list', '--from', '2025-01-01', '--to', '2025-03-14', '--format', 'json', '--body', 'lunar'])).stdout);
+  const withIt = JSON.parse((await run(['list', '--from', '2025-01-01', '--to', '2025-03-15', '--format', 'json', '--body', 'lunar'])).stdout);
   assert.equal(without.eclipses.length, 0);
   assert.deepEqual(withIt.eclipses.map((e: { id: string }) => e.id), ['2025-03-14']);
 });
@@ -55,9 +58,11 @@ test('the default range is today (UTC) for ten years', async () => {
   assert.deepEqual(doc.range, { from: '2026-12-01T00:00:00Z', to: '2036-12-01T00:00:00Z' });
 });
 
-test('json follows umbracast.catalogue/1: seconds kept, absent contacts and durations left out', async () => {
-  const doc = JSON.parse((await run(['list', '--from', '2026', '--to', '2027', '--format', 'json'])).stdout);
-  assert.equal(doc.schema, 'umbracast.catalogue/1');
+test('json follows umbracast.catalogue/2: seconds kept, absent contacts and durations left out, every record with its body', async () => {
+  const doc = JSON.parse((await run(['list', '--from', '2026', '--to', '2027', '--format', 'json', '--body', 'lunar'])).stdout);
+  assert.equal(doc.schema, 'umbracast.catalogue/2');
+  assert.ok(doc.eclipses.every((e: { body: string }) => e.body === 'lunar'));
+  assert.equal(doc.safety, undefined, 'no solar eclipse, no solar caution');
   assert.equal(doc.convention, 'danjon');
   const total = doc.eclipses.find((e: { id: string }) => e.id === '2026-03-03');
   assert.deepEqual(Object.keys(total.contacts), ['P1', 'U1', 'U2', 'U3', 'U4', 'P4']);
@@ -75,22 +80,22 @@ test('json follows umbracast.catalogue/1: seconds kept, absent contacts and dura
 });
 
 test('--kind filters, --convention and --delta-t show in the output', async () => {
-  const doc = JSON.parse((await run(['list', '--from', '2026', '--to', '2030', '--kind', 'total', '--convention', 'chauvenet', '--delta-t', '70', '--format', 'json'])).stdout);
+  const doc = JSON.parse((await run(['list', '--from', '2026', '--to', '2030', '--body', 'lunar', '--kind', 'total', '--convention', 'chauvenet', '--delta-t', '70', '--format', 'json'])).stdout);
   assert.ok(doc.eclipses.length > 0);
   assert.ok(doc.eclipses.every((e: { kind: string; deltaT: number; deltaTSource: string }) => e.kind === 'total' && e.deltaT === 70 && e.deltaTSource === 'user'));
   assert.equal(doc.convention, 'chauvenet');
 });
 
 test('csv keeps seconds and has one row per eclipse under a header', async () => {
-  const { stdout } = await run(['list', '--from', '2025', '--to', '2025', '--format', 'csv']);
+  const { stdout } = await run(['list', '--from', '2025', '--to', '2025', '--format', 'csv', '--body', 'lunar']);
   const lines = stdout.trimEnd().split('\n');
-  assert.equal(lines[0]!.split(',').slice(0, 4).join(','), 'id,kind,greatest,greatestTT');
+  assert.equal(lines[0]!.split(',').slice(0, 5).join(','), 'body,id,kind,greatest,greatestTT');
   assert.equal(lines.length, 3);
-  assert.match(lines[1]!, /^2025-03-14,total,2025-03-14T06:58:\d\dZ,/);
+  assert.match(lines[1]!, /^lunar,2025-03-14,total,2025-03-14T06:58:\d\dZ,/);
 });
 
 test('the table is for people: minutes, UTC labelled, convention and ΔT stated', async () => {
-  const { stdout } = await run(['list', '--from', '2025', '--to', '2025']);
+  const { stdout } = await run(['list', '--from', '2025', '--to', '2025', '--body', 'lunar']);
   assert.match(stdout, /Greatest \(UTC\)/);
   assert.match(stdout, /2025-03-14 06:59 /);
   assert.doesNotMatch(stdout, /06:58:\d\d/);
@@ -128,7 +133,7 @@ test('the table\'s heading agrees in number: "1 lunar eclipse", "2 lunar eclipse
   for (const [from, to, words] of [['2027-02-01', '2027-03-01', '1 lunar eclipse from'], ['2026-01', '2026-09', '2 lunar eclipses from'], ['2026-04-01', '2026-05-01', '0 lunar eclipses from']] as const) {
     const toDate = to.length === 7 ? `${to}-01` : to;
     assert.equal(Number(words[0]), countIn(`${from.length === 7 ? `${from}-01` : from}T00:00:00Z`, to.length === 7 ? new Date(Date.UTC(Number(to.slice(0, 4)), Number(to.slice(5)), 1)).toISOString() : `${toDate}T00:00:00Z`), `premise for ${from}`);
-    const { code, stdout } = await run(['list', '--from', from, '--to', to]);
+    const { code, stdout } = await run(['list', '--from', from, '--to', to, '--body', 'lunar']);
     assert.equal(code, 0);
     assert.ok(stdout.startsWith(words), stdout.split('\n')[0]);
   }

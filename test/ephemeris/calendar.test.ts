@@ -127,8 +127,9 @@ test('data outputs name their calendar: catalogue JSON and CSV, GeoJSON, local J
   const doc = catalogueDocument([old], { convention: 'danjon', deltaTModel: 'test', from: new Date('1100-01-01T00:00:00Z'), to: new Date('1101-01-01T00:00:00Z') });
   assert.equal(JSON.parse(catalogueJson(doc)).calendar, 'proleptic Gregorian');
   const csv = catalogueCsv(doc).trimEnd().split('\n');
-  assert.ok(csv[0]!.endsWith(',calendar'));
-  assert.ok(csv[1]!.endsWith(',proleptic Gregorian'));
+  // catalogue/2: the calendar, then the (solar) caution, empty on a lunar row.
+  assert.ok(csv[0]!.endsWith(',calendar,safety'));
+  assert.ok(csv[1]!.endsWith(',proleptic Gregorian,'));
   assert.equal(visibilityGeoJson(visibilityOf(old)).umbracast.calendar, 'proleptic Gregorian');
   const report = localReport(old, { place: { name: 'Kestrel Ridge', latDeg: 52.52, lonDeg: 13.41, tz: 'UTC' }, clock: civilClock('UTC') });
   assert.equal(JSON.parse(localJson(report)).calendar, 'proleptic Gregorian');

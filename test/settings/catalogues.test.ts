@@ -1,41 +1,35 @@
 /**
- * Eclipses are found through one table keyed by body, not by a body's function called by name: each entry
- * finds the eclipses astronomy-engine's own searches find (SearchLunarEclipse, SearchGlobalSolarEclipse: an
- * independent library), `eclipseNear` and `nextEclipse` dispatch the same way, and the outputs render the
- * lunar body only until solar output arrives.
+ * Settings find eclipses through src/eclipses/kinds.ts only: the typed choice maps onto its options, and
+ * `chooseEclipse` resolves a body's eclipse as astronomy-engine's own searches find it (SearchLunarEclipse,
+ * SearchGlobalSolarEclipse: an independent library).
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import { SearchGlobalSolarEclipse, SearchLunarEclipse } from 'astronomy-engine';
-import { CATALOGUES, eclipseNear, findEclipses, nextEclipse, OUTPUT_BODY, RENDERED_BODIES } from '../../src/settings/catalogues.ts';
+import * as settings from '../../src/settings/catalogues.ts';
 import { chooseEclipse } from '../../src/settings/choose.ts';
+import { InputError } from '../../src/errors.ts';
 
 const choice = { convention: 'danjon' } as const;
-const range = { from: new Date('2024-01-01T00:00:00Z'), to: new Date('2025-01-01T00:00:00Z') };
+const from = new Date('2024-01-01T00:00:00Z');
 const day = (date: Date) => date.toISOString().slice(0, 10);
 
-test('each body\'s entry finds what astronomy-engine\'s search finds first in 2024 (its own search, an independent check)', () => {
-  const solar = findEclipses('solar', range, choice);
-  const lunar = findEclipses('lunar', range, choice);
-  assert.ok(solar.every((e) => e.body === 'solar') && lunar.every((e) => e.body === 'lunar'));
-  assert.equal(solar[0]!.id, day(SearchGlobalSolarEclipse(range.from).peak.date));
-  assert.equal(lunar[0]!.id, day(SearchLunarEclipse(range.from).peak.date));
-  assert.equal(solar[0]!.kind, 'total');
+test('settings keep no second catalogue: only the mapping onto kinds.ts (common practice: one dispatch)', () => {
+  assert.deepEqual(Object.keys(settings).sort(), ['deltaTModelOf', 'ofBody', 'searchOptionsOf']);
+  const options = settings.searchOptionsOf({ convention: 'chauvenet', deltaTSeconds: 70 }, 'solar');
+  assert.equal(options.body, 'solar');
+  assert.equal(options.convention, 'chauvenet');
+  assert.equal(options.deltaT!.at(2024.5).seconds, 70); // a fixed ΔT is that value at every instant
 });
 
-test('nearest and next dispatch on the body (astronomy-engine\'s searches)', () => {
-  const solarPeak = SearchGlobalSolarEclipse(range.from).peak.date;
-  const lunarPeak = SearchLunarEclipse(range.from).peak.date;
-  assert.equal(eclipseNear('solar', new Date(solarPeak.getTime() + 3 * 86_400_000), 7.5, choice)!.id, day(solarPeak));
-  assert.equal(eclipseNear('lunar', new Date(solarPeak.getTime() + 3 * 86_400_000), 7.5, choice), undefined, 'no lunar eclipse within 7.5 days of that solar one');
-  assert.equal(nextEclipse('lunar', range.from, choice)!.id, day(lunarPeak));
-  assert.equal(chooseEclipse({ kind: 'next' }, choice, range.from, 'solar').id, day(solarPeak));
-  // By default the body the outputs render.
-  assert.equal(chooseEclipse({ kind: 'next' }, choice, range.from).body, OUTPUT_BODY);
-});
-
-test('the outputs render the lunar body only, for now; every body has a catalogue (common practice: dispatch, not a fork)', () => {
-  assert.deepEqual(RENDERED_BODIES, ['lunar']);
-  assert.equal(OUTPUT_BODY, 'lunar');
-  assert.deepEqual(Object.keys(CATALOGUES).sort(), ['lunar', 'solar']);
+test('next and near resolve per body as astronomy-engine\'s searches find them', () => {
+  const solarPeak = SearchGlobalSolarEclipse(from).peak.date;
+  const lunarPeak = SearchLunarEclipse(from).peak.date;
+  assert.equal(chooseEclipse({ kind: 'next' }, choice, from, 'solar').id, day(solarPeak));
+  assert.equal(chooseEclipse({ kind: 'next' }, choice, from, 'lunar').id, day(lunarPeak));
+  // 2024-03-25 (lunar) comes before 2024-04-08 (solar): with `all`, the lunar one is next.
+  assert.equal(chooseEclipse({ kind: 'next' }, choice, from, 'all').id, day(lunarPeak));
+  const threeDaysAfter = new Date(solarPeak.getTime() + 3 * 86_400_000);
+  assert.equal(chooseEclipse({ kind: 'date', date: threeDaysAfter, text: day(threeDaysAfter) }, choice, from, 'solar').id, day(solarPeak));
+  assert.throws(() => chooseEclipse({ kind: 'date', date: threeDaysAfter, text: day(threeDaysAfter) }, choice, from, 'lunar'), InputError);
 });

@@ -5,7 +5,7 @@ import { dirname, join, resolve } from 'node:path';
 import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
 import { describeReceived, InputError } from '../../errors.ts';
-import { ECLIPSE_KINDS } from '../../eclipses/lunar/types.ts';
+import { ECLIPSE_KINDS, type EclipseKind } from '../../eclipses/lunar/types.ts';
 import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
 import { MAX_MERGE_MANIFESTS, mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
 import { longestStemBytes, placeSuffixBytes, SamePlace, stylePlaces } from '../../batch/naming.ts';
@@ -17,14 +17,15 @@ import { mapSettings } from '../../settings/mapSettings.ts';
 import { mapChoicesOf, STYLE_FIELDS } from '../../batch/styleSettings.ts';
 import { asFlags } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { parseChoiceList, parseNumber, parseRange } from '../options.ts';
+import { parseNumber, parseRange } from '../options.ts';
+import { withBodyOptions } from '../declare.ts';
+import { bodyFromFlags, kindsFromFlags, type BodyFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 import { counted } from '../../outputs/counted.ts';
 
-interface BatchCommandOptions {
+interface BatchCommandOptions extends BodyFlags {
   from?: string;
   to?: string;
-  kind?: string;
   style?: string;
   out: string;
   jobs?: string;
@@ -43,13 +44,29 @@ export function parseShard(text: string): Shard {
 
 export const MAX_JOBS = 64;
 
+/** What the batch draws so far: lunar eclipses. */
+const DRAWN_SO_FAR = 'the batch draws lunar eclipses only, so far; solar eclipses: list and local';
+
+/**
+ * The lunar kinds a batch draws: --body and --kind read as every command reads them, then held to the
+ * lunar eclipses, which are all the batch draws so far (a solar body or kind is one clear error line).
+ */
+function batchKinds(options: BodyFlags): EclipseKind[] {
+  const body = bodyFromFlags(options);
+  if (body === 'solar') throw new InputError('--body', `lunar or all (${DRAWN_SO_FAR})`, options.body);
+  const kinds = kindsFromFlags(options, body) ?? ECLIPSE_KINDS;
+  const lunar = ECLIPSE_KINDS.filter((kind) => kinds.includes(kind));
+  if (lunar.length < kinds.length) throw new InputError('--kind', `a comma-separated list of ${ECLIPSE_KINDS.join(', ')} (${DRAWN_SO_FAR})`, options.kind);
+  return lunar;
+}
+
 export function registerBatch(program: Command, context: CommandContext): void {
-  program
+  const command = program
     .command('batch')
-    .description('render every eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable')
+    .description('render every lunar eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable (solar eclipses: not yet)')
     .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
-    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
-    .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
+    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)');
+  withBodyOptions(command)
     .option('--style <file>', 'house style, JSON or YAML (see README)')
     .option('--out <dir>', 'output folder (made if its parent exists)', 'out')
     .option('--jobs <n>', 'worker processes (default: the number of cores)')
@@ -90,7 +107,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
     return;
   }
   const range = parseRange(options.from, options.to, context.now());
-  const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
+  const kinds = batchKinds(options);
   const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
   for (const notice of checkStyleSettings(style, options.style ?? 'the default style')) context.stderr(`${printable(notice)}\n`);
   const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });

@@ -1,43 +1,36 @@
-/** `umbracast list`: the catalogue for a range, as a table, json or csv. */
+/** `umbracast list`: the catalogue for a range, lunar and solar eclipses in time order, as a table, json or csv. */
 import type { Command } from 'commander';
-import { SHADOW_CONVENTIONS } from '../../eclipses/lunar/conventions.ts';
-import { ECLIPSE_KINDS } from '../../eclipses/lunar/types.ts';
-import { deltaTModelOf, findEclipses, OUTPUT_BODY } from '../../settings/catalogues.ts';
+import { findEclipses } from '../../eclipses/kinds.ts';
+import { searchOptionsOf } from '../../settings/catalogues.ts';
 import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
-import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
+import { parseChoice, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
-import { DELTA_T_LIMITS, withEclipseOptions } from '../declare.ts';
+import { withBodyOptions, withEclipseOptions } from '../declare.ts';
+import { bodyFromFlags, eclipseChoiceFromFlags, kindsFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
 
-interface ListOptions {
+interface ListOptions extends BodyFlags, EclipseFlags {
   from?: string;
   to?: string;
-  kind?: string;
-  convention: string;
-  deltaT?: string;
   format: string;
 }
-
 
 export function registerList(program: Command, context: CommandContext): void {
   const command = program
     .command('list')
-    .description('list the lunar eclipses in a date range (default: from today, ten years)')
+    .description('list the lunar and solar eclipses in a date range (default: from today, ten years)')
     .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
-    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
-    .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
-    .option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table');
-  withEclipseOptions(command)
+    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)');
+  withEclipseOptions(withBodyOptions(command).option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table'))
     .action((options: ListOptions) => {
       const range = parseRange(options.from, options.to, context.now());
-      const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
-      const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
+      const body = bodyFromFlags(options);
+      const kinds = kindsFromFlags(options, body);
       const format = parseChoice('--format', options.format, CATALOGUE_FORMATS);
-      const choice = { convention, ...(options.deltaT === undefined ? {} : { deltaTSeconds: parseNumber('--delta-t', options.deltaT, DELTA_T_LIMITS) }) };
-      const deltaT = deltaTModelOf(choice);
-      const eclipses = findEclipses(OUTPUT_BODY, range, choice).filter((e) => kinds.includes(e.kind));
-      const doc = catalogueDocument(eclipses, { convention, deltaTModel: deltaT.name, ...range });
-      const render = { table: catalogueTable, json: catalogueJson, csv: catalogueCsv }[format];
-      context.stdout(render(doc));
+      const choice = eclipseChoiceFromFlags(options);
+      const search = searchOptionsOf(choice, body);
+      const eclipses = findEclipses({ ...search, ...range }).filter((e) => kinds === undefined || kinds.includes(e.kind));
+      const doc = catalogueDocument(eclipses, { convention: choice.convention, deltaTModel: search.deltaT!.name, ...range });
+      context.stdout(format === 'table' ? catalogueTable(doc, body) : format === 'json' ? catalogueJson(doc) : catalogueCsv(doc));
     });
 }

@@ -1,35 +1,48 @@
 /** `umbracast local [WHEN] --place NAME | --at LAT,LON`: what one town sees, in its own time. */
 import type { Command } from 'commander';
-import type { LunarEclipse } from '../../eclipses/lunar/types.ts';
+import type { Eclipse } from '../../eclipses/kinds.ts';
 import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localReport, localTable } from '../../outputs/localFormats.ts';
+import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solarLocalReport, solarLocalTable } from '../../outputs/solarLocal.ts';
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/choose.ts';
-import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { withBodyOptions, withEclipseOptions, withPlaceOptions } from '../declare.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
-import { eclipseChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
+import { bodyFromFlags, eclipseChoiceFromFlags, placeChoiceFromFlags, type BodyFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 
-interface LocalOptions extends PlaceFlags, EclipseFlags {
+interface LocalOptions extends PlaceFlags, EclipseFlags, BodyFlags {
   format: string;
 }
 
 export function registerLocal(program: Command, context: CommandContext): void {
   const command = program
     .command('local')
-    .description('local circumstances for one place: contacts in local time, Moon altitude and azimuth, the sky, a summary')
+    .description('local circumstances for one place: contacts in local time, the Moon or the Sun in its sky, a summary (solar: with the eye-safety caution)')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
-  withEclipseOptions(withPlaceOptions(command).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
+  withEclipseOptions(withBodyOptions(withPlaceOptions(command), false).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
     .action((whenText: string | undefined, options: LocalOptions) => {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
       const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
-      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
+      const body = bodyFromFlags(options);
+      const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), body);
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);
       context.stdout(renderLocal(eclipse, chosen, format));
     });
 }
 
-function renderLocal(eclipse: LunarEclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number]): string {
+/** One place's report in a format, for an eclipse of either body: each body's own renderers, never the other's words. */
+function renderLocal(eclipse: Eclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number]): string {
+  if (eclipse.body === 'solar') {
+    const solar = solarLocalReport(eclipse, chosen);
+    switch (format) {
+      case 'table': return solarLocalTable(solar);
+      case 'markdown': return solarLocalMarkdown(solar);
+      case 'csv': return solarLocalCsv(solar);
+      case 'json': return solarLocalJson(solar);
+      case 'ics': return solarLocalIcs(solar, `umbracast ${toolVersion()}`);
+    }
+  }
   const report = localReport(eclipse, chosen);
   switch (format) {
     case 'table': return localTable(report);

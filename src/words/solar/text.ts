@@ -6,7 +6,9 @@
  * outputs, from caution.ts, never written here. Shaped for translation: one
  * catalogue per language (English below).
  */
-import type { SolarLocalEventName, SolarLocalKind } from '../../local/solar.ts';
+import type { CivilClock } from '../../ephemeris/civilTime.ts';
+import { LOW_SUN_DEG, NEAR_EDGE_KM } from '../../eclipses/solar/constants.ts';
+import type { SolarLocalCircumstances, SolarLocalEventName, SolarLocalKind } from '../../local/solar.ts';
 import { ENGLISH, listWords, type CommonWords } from '../common.ts';
 
 export type SolarKindWord = 'total' | 'annular' | 'hybrid' | 'partial';
@@ -84,9 +86,47 @@ export function minutesAndSeconds(seconds: number): string {
 /** A fraction as a whole percentage: "74 %". */
 export const percentWords = (fraction: number): string => `${Math.round(fraction * 100)} %`;
 
+/** A wall-clock time to the second with its own zone's name: "13:27:10 CDT". */
+export function clockSeconds(clock: CivilClock, utDays: number): string {
+  return `${clock.rfc3339(utDays).slice(11, 19)} ${clock.abbreviation(utDays)}`;
+}
+
 /** What one local event is, in words, given what the place sees. */
 export function solarEventWords(kind: SolarLocalKind, event: SolarLocalEventName, words: SolarTextWords = SOLAR_TEXT_ENGLISH): string {
   if (event !== 'C2' && event !== 'C3') return words.events[event];
   const central = kind === 'total' || kind === 'annular' ? words.central[kind] : 'central phase (Sun below the horizon)';
   return `${central} ${event === 'C2' ? 'begins' : 'ends'}`;
+}
+
+/** What the place sees, in two or three sentences, from the circumstances alone. */
+export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilClock, placeName: string): string {
+  const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
+  const c1 = find('C1');
+  const c4 = find('C4');
+  if (!c1 || !c4) return `From ${placeName} the Moon's shadow misses: no eclipse of the Sun is seen on ${local.eclipse.id}.`;
+  if (local.kind === 'none') {
+    return `From ${placeName} the Sun is below the horizon for the whole eclipse (${clock.range(c1.moment.utDays, c4.moment.utDays)}): nothing is seen.`;
+  }
+  const sentences: string[] = [];
+  const c2 = find('C2');
+  const c3 = find('C3');
+  const maximum = find('maximum')!;
+  if ((local.kind === 'total' || local.kind === 'annular') && c2 && c3 && local.centralSeconds !== undefined) {
+    const what = local.kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,';
+    sentences.push(`From ${placeName} ${what} for ${minutesAndSeconds(local.centralSeconds)}, ${clockSeconds(clock, c2.moment.utDays)} to ${clockSeconds(clock, c3.moment.utDays)}.`);
+  } else {
+    sentences.push(`From ${placeName} the Sun is partly eclipsed: at most ${percentWords(local.obscurationSeen)} of its disc covered.`);
+  }
+  // The local date is named where it is not the eclipse's UTC date (across the date line, or late in the UTC day).
+  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? '' : ` on ${clock.date(c1.moment.utDays)}`;
+  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays)}${localDate}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
+  const rise = find('sunrise');
+  const set = find('sunset');
+  if (rise) sentences.push(`The Sun rises already eclipsed, at ${clock.stamp(rise.moment.utDays)}.`);
+  if (set) sentences.push(`The Sun sets still eclipsed, at ${clock.stamp(set.moment.utDays)}.`);
+  if (local.nearPathEdge) {
+    sentences.push(`This place lies within ${NEAR_EDGE_KM} km of the path's edge: the Moon's uneven limb and the uncertainty of ΔT can move the edge by a kilometre or more, so the central phase may be shorter or missed.`);
+  }
+  if (local.lowSun) sentences.push(`The Sun stands below ${LOW_SUN_DEG}° at best: a clear, low horizon in its direction is needed.`);
+  return sentences.join(' ');
 }

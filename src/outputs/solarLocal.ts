@@ -2,10 +2,11 @@
  * What one place sees of a solar eclipse, as a table, markdown, CSV
  * (RFC 4180), an iCalendar file (RFC 5545) and the `umbracast.local/1` JSON
  * contract for `body: 'solar'`. Every format carries the eye-safety caution
- * (src/words/solar/caution.ts, long form; the summary and event words from src/words/solar/text.ts, scoped to whether the place sees
+ * (src/words/solar/caution.ts, long form, scoped to whether the place sees
  * totality): the first line of the table and markdown, the first row of the
  * CSV, `safety` in JSON, every VEVENT's description. The lunar naked-eye
- * line is never written here.
+ * line is never written here. The summary and the event words come from
+ * src/words/solar/text.ts.
  *
  * Times are in the place's zone through the same clock as the lunar side
  * (`civilClock`); the table and markdown print them to the second, since a

@@ -310,7 +310,7 @@ export function solarCaption(eclipse: SolarEclipse, options: SolarCaptionOptions
   }
   const scope = safetyScopeForEclipse(eclipse.kind);
   const text = [...facts, ...(options.extra ? [options.extra] : []), words.common.predictions, solarSafetyText('long', scope)].join(' ');
-  const alt = [w.altText(title, pathSentence, partialSentence), solarSafetyText('short', scope)].join(' ');
+  const alt = [w.altText(eclipse.kind, clock.date(at), pathSentence, partialSentence), solarSafetyText('short', scope)].join(' ');
   return { text, alt, crossed, partialContinents: continents, cities };
 }
 

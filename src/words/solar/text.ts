@@ -32,7 +32,7 @@ export interface SolarTextWords {
     readonly citiesIntro: string;
     readonly cityCentral: (city: string, kind: 'total' | 'annular', duration: string, from: string) => string;
     readonly cityPartial: (city: string, percent: string, at: string, when: 'maximum' | 'sunrise' | 'sunset') => string;
-    readonly altText: (title: string, path: string | undefined, partial: string | undefined) => string;
+    readonly altText: (kind: SolarKindWord, date: string, path: string | undefined, partial: string | undefined) => string;
     readonly file: (caption: string, alt: string) => string;
   };
 }
@@ -71,8 +71,8 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
     cityCentral: (city, kind, duration, from) => `${city} sees ${kind === 'total' ? 'totality' : 'the ring'} for ${duration} from ${from}`,
     cityPartial: (city, percent, at, when) =>
       `${city} sees ${percent} of the Sun covered ${when === 'maximum' ? `at ${at}` : when === 'sunrise' ? `as the Sun rises at ${at}` : `as the Sun sets at ${at}`}`,
-    altText: (title, path, partial) => [`Map: ${title}`, path, partial].filter((p) => p).join(' '),
-    file: (caption, alt) => `Caption:\n${caption}\n\nAlt text:\n${alt}\n`,
+    altText: (kind, date, path, partial) => [`Map of the ${kind} solar eclipse of ${date}.`, path, partial].filter((p) => p).join(' '),
+    file: (caption, alt) => `${caption}\n\nAlt text: ${alt}\n`,
   },
 };
 

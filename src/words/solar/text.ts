@@ -35,6 +35,16 @@ export interface SolarTextWords {
     readonly altText: (kind: SolarKindWord, date: string, path: string | undefined, partial: string | undefined) => string;
     readonly file: (caption: string, alt: string) => string;
   };
+  /** The contact sheet's words for a solar eclipse's card, and its title when solar eclipses are in the batch. */
+  readonly sheet: {
+    readonly title: (lunarToo: boolean, from: string, last: string) => string;
+    readonly kind: Readonly<Record<SolarKindWord, string>>;
+    readonly magnitude: (value: string) => string;
+    readonly central: (kind: 'total' | 'annular' | 'hybrid', duration: string) => string;
+    readonly width: (km: string) => string;
+    readonly saros: (n: number) => string;
+    readonly noMap: string;
+  };
 }
 
 const KIND_TITLE: Record<SolarKindWord, string> = { total: 'Total', annular: 'Annular', hybrid: 'Hybrid (total and annular)', partial: 'Partial' };
@@ -73,6 +83,15 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
       `${city} sees ${percent} of the Sun covered ${when === 'maximum' ? `at ${at}` : when === 'sunrise' ? `as the Sun rises at ${at}` : `as the Sun sets at ${at}`}`,
     altText: (kind, date, path, partial) => [`Map of the ${kind} solar eclipse of ${date}.`, path, partial].filter((p) => p).join(' '),
     file: (caption, alt) => `${caption}\n\nAlt text: ${alt}\n`,
+  },
+  sheet: {
+    title: (lunarToo, from, last) => `${lunarToo ? 'Lunar and solar' : 'Solar'} eclipses ${from} to ${last}`,
+    kind: { total: 'total solar', annular: 'annular solar', hybrid: 'hybrid solar', partial: 'partial solar' },
+    magnitude: (value) => `magnitude ${value}`,
+    central: (kind, duration) => `${kind === 'total' ? 'totality' : kind === 'annular' ? 'annularity' : 'central phase'} ${duration} at greatest`,
+    width: (km) => `path ${km} km wide`,
+    saros: (n) => `saros ${n}`,
+    noMap: 'Caption and GeoJSON geometry; no map picture yet.',
   },
 };
 

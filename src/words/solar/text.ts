@@ -64,7 +64,7 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
   central: { total: 'totality', annular: 'annularity' },
   caption: {
     title: (kind, date) => `${KIND_TITLE[kind]} solar eclipse of ${date}.`,
-    greatest: (stamp, where, alt) => `Greatest eclipse at ${stamp} near ${where}, the Sun ${Math.round(alt)}° up there.`,
+    greatest: (stamp, where, alt) => `Greatest eclipse at ${stamp} near ${where}, ${Math.round(alt) <= 0 ? 'with the Sun on the horizon there' : `the Sun ${Math.round(alt)}° up there`}.`,
     centralFacts: (kind, duration, width) => {
       const what = kind === 'annular' ? 'the ring of sunlight lasts' : kind === 'total' ? 'totality lasts' : 'the central phase lasts';
       const parts = [duration ? `${what} ${duration}` : undefined, width !== undefined ? `the path is ${Math.round(width)} km wide` : undefined].filter((p) => p !== undefined);

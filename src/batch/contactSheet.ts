@@ -6,12 +6,23 @@
 import { civilClock } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../figures/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
+import type { SolarEclipseRecord } from '../eclipses/solar/record.ts';
+import type { EclipseBody } from '../eclipses/kinds.ts';
+import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
+import { minutesAndSeconds, SOLAR_TEXT_ENGLISH } from '../words/solar/text.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
 import { formatDuration, roundToMinute } from '../words/common.ts';
 import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
 import type { Manifest } from './manifest.ts';
 
 const WORDS = LUNAR_ENGLISH;
+/** After a lunar kind on a sheet that holds solar eclipses too. */
+const WORDS_LUNAR_SUFFIX = ' lunar';
+
+/** Solar cards: a warm rule on top, the caution boxed so that it cannot be missed (only on sheets holding a solar eclipse). */
+const SOLAR_CARD_STYLE = `
+  article.solar { border-top: 4px solid #b5541c; } article.solar.annular { border-top-style: double; } article.solar.partial { border-top-color: #d99a5b; }
+  p.caution { margin: .4rem 0; padding: .4rem .5rem; border-left: 3px solid #b5541c; background: #fbeee4; font-size: .9em; }`;
 
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
@@ -28,10 +39,28 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
   };
 }
 
-/** The sheet's heading for a range whose end is exclusive: "Lunar eclipses 2026-01-01 to 2035-12-31", both days included. */
-export function sheetTitle(fromIso: string, toIsoExclusive: string): string {
+/**
+ * The sheet's heading for a range whose end is exclusive: "Lunar eclipses
+ * 2026-01-01 to 2035-12-31", both days included; the bodies of the batch
+ * name it ("Lunar and solar eclipses …" when both).
+ */
+export function sheetTitle(fromIso: string, toIsoExclusive: string, bodies: readonly EclipseBody[] = ['lunar']): string {
   const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
-  return WORDS.sheet.title(fromIso.slice(0, 10), lastDay);
+  if (!bodies.includes('solar')) return WORDS.sheet.title(fromIso.slice(0, 10), lastDay);
+  return SOLAR_TEXT_ENGLISH.sheet.title(bodies.includes('lunar'), fromIso.slice(0, 10), lastDay);
+}
+
+/** A solar card's facts: greatest, magnitude, the central phase and path width at greatest, saros. */
+function solarFacts(r: SolarEclipseRecord, clock: ReturnType<typeof civilClock>, greatestUtDays: number): string[] {
+  const s = SOLAR_TEXT_ENGLISH.sheet;
+  const minute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(11, 16);
+  return [
+    clock.zone === 'UTC' ? WORDS.sheet.greatestUtc(minute) : WORDS.sheet.greatestLocal(clock.stamp(greatestUtDays)),
+    s.magnitude(r.magnitude.toFixed(3)),
+    ...(r.durations.central !== undefined && r.kind !== 'partial' ? [s.central(r.kind, minutesAndSeconds(r.durations.central))] : []),
+    ...(r.pathWidthKm !== undefined ? [s.width(r.pathWidthKm.toFixed(0))] : []),
+    s.saros(r.saros),
+  ];
 }
 
 /** Width and height of a PNG from its IHDR chunk (PNG specification, §11.2.2): bytes 16–23. */
@@ -51,18 +80,23 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
   const clock = civilClock(tz);
   const w = WORDS.sheet;
   const duration = (minutes: number) => formatDuration(minutes * 60, 'long', WORDS.common);
+  // On a sheet holding both kinds, a lunar card says so too ("total lunar").
+  const mixed = manifest.eclipses.some((e) => e.body === 'solar') && manifest.eclipses.some((e) => e.body !== 'solar');
   const cards = manifest.eclipses.map((listed) => {
     // Only plain relative paths inside the folder become links: never "../", "/", "//host" or a URL.
     const entry = { ...listed, files: listed.files.filter((f) => isPlainRelativePath(f.path)) };
-    const r = entry.record;
     const thumb = entry.files.find((f) => f.role === 'thumbnail');
-    // The figures as the maps print them: rounded once, from the full value (record.printed).
-    const p = r.printed ?? figuresFromRecord(r);
     // utDays count from J2000.0, 2000-01-01 12:00 UT.
-    const greatestUtDays = (Date.parse(r.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
+    const greatestUtDays = (Date.parse(entry.record.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
+    const solar = entry.body === 'solar' ? entry.record : undefined;
     // A kind this version does not know (a manifest from another) is printed as it stands.
-    const kind = (WORDS.kind as Readonly<Record<string, string>>)[r.kind] ?? r.kind;
-    const facts = [
+    const kind = solar
+      ? (SOLAR_TEXT_ENGLISH.sheet.kind as Readonly<Record<string, string>>)[solar.kind] ?? solar.kind
+      : `${(WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind}${mixed ? WORDS_LUNAR_SUFFIX : ''}`;
+    const r = entry.record;
+    // The figures as the maps print them: rounded once, from the full value (record.printed).
+    const p = entry.body !== 'solar' ? entry.record.printed ?? figuresFromRecord(entry.record) : undefined;
+    const facts = solar ? solarFacts(solar, clock, greatestUtDays) : !p ? [] : [
       clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
       r.kind === 'penumbral' ? w.penumbralMagnitude(p.penumbralMagnitude) : w.umbralMagnitude(p.umbralMagnitude),
       ...(p.minutes.total !== undefined ? [w.totality(duration(p.minutes.total))] : []),
@@ -79,10 +113,13 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const image = thumb
       ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
       : '';
-    return `    <article class="${escapeXml(r.kind)}" id="${escapeXml(r.id)}">
-      ${image}
-      <h2>${escapeXml(date)} <small>${escapeXml(kind)}</small></h2>
-      <p>${facts.map(escapeXml).join(' · ')}</p>
+    // Beside every solar eclipse, the eye-safety caution (short form, scoped to the eclipse's kind); nothing else of it is lunar.
+    const caution = solar
+      ? `\n      <p class="caution"><strong>${escapeXml(solarSafetyText('short', safetyScopeForEclipse(solar.kind)))}</strong></p>${thumb ? '' : `\n      <p>${escapeXml(SOLAR_TEXT_ENGLISH.sheet.noMap)}</p>`}`
+      : '';
+    return `    <article class="${solar ? `solar ${escapeXml(r.kind)}` : escapeXml(r.kind)}" id="${escapeXml(r.id)}">
+      ${image ? `${image}\n      ` : ''}<h2>${escapeXml(date)} <small>${escapeXml(kind)}</small></h2>
+      <p>${facts.map(escapeXml).join(' · ')}</p>${caution}
       <ul>
         ${links}
       </ul>
@@ -102,7 +139,7 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
   header p { margin: 0; color: var(--muted); }
   main { display: grid; grid-template-columns: repeat(auto-fill, minmax(300px, 1fr)); gap: 1.25rem; }
   article { background: #fff; border: 1px solid var(--rule); border-radius: 6px; padding: .75rem; }
-  article.total { border-top: 4px solid #27366b; } article.partial { border-top: 4px solid #6d78b0; } article.penumbral { border-top: 4px solid #a9c4d6; }
+  article.total { border-top: 4px solid #27366b; } article.partial { border-top: 4px solid #6d78b0; } article.penumbral { border-top: 4px solid #a9c4d6; }${manifest.eclipses.some((e) => e.body === 'solar') ? SOLAR_CARD_STYLE : ''}
   img { width: 100%; height: auto; display: block; border-radius: 3px; }
   h2 { font-size: 1.05rem; margin: .6rem 0 .2rem; } h2 small { font-weight: normal; color: var(--muted); }
   p { margin: 0 0 .4rem; } ul { margin: 0; padding-left: 1.1rem; } li span { color: var(--muted); font-size: .85em; }

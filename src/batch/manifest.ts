@@ -1,8 +1,10 @@
 /**
- * The batch manifest, `umbracast.manifest/1`: what is in an output folder —
- * per eclipse its catalogue record, the key of the inputs it was made from,
+ * The batch manifest, `umbracast.manifest/2`: what is in an output folder —
+ * per eclipse its body (lunar or solar), its catalogue record, the key of the inputs it was made from,
  * and every file with its size and SHA-256 — plus the style's hash and the
- * tool's version. Written atomically after every finished eclipse.
+ * tool's version. Written atomically after every finished eclipse. A
+ * `umbracast.manifest/1` manifest (lunar eclipses only, no `body`) is still
+ * read, its entries taken as lunar, and rewritten as /2.
  *
  * A manifest is read as untrusted data: from a regular file only (not
  * through a link), at most MAX_MANIFEST_BYTES, and checked field by field
@@ -17,12 +19,16 @@ import { z } from 'zod';
 import { InputError } from '../errors.ts';
 import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { ECLIPSE_KINDS } from '../eclipses/lunar/types.ts';
+import { SOLAR_CONTACT_ORDER, SOLAR_ECLIPSE_KINDS } from '../eclipses/solar/types.ts';
+import type { SolarEclipseRecord } from '../eclipses/solar/record.ts';
 import { isPlainRelativePath, openRegularInside, readRegularFile, ReadRefused, writeFileAtomic } from '../outputs/files.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { printable } from './printable.ts';
 import type { WrittenFile } from './written.ts';
 
-export const MANIFEST_SCHEMA = 'umbracast.manifest/1';
+export const MANIFEST_SCHEMA = 'umbracast.manifest/2';
+/** The schema before solar eclipses: read, never written. */
+export const MANIFEST_SCHEMA_V1 = 'umbracast.manifest/1';
 export const MANIFEST_NAME = 'manifest.json';
 /** Every eclipse of years 1000–3000 (4854) with room to spare. */
 export const MAX_MANIFEST_ECLIPSES = 5000;
@@ -33,14 +39,19 @@ export const MAX_OUTPUT_FILE_BYTES = 1024 * 1024 * 1024;
 /** The most files one eclipse writes: 5 map formats, caption, thumbnail, 20 places × (5 local formats + a figure). */
 const MAX_FILES_PER_ECLIPSE = 5 + 2 + 20 * 6;
 
-export interface ManifestEntry {
+/** A lunar record (umbracast.catalogue/1's) or a solar one (with `body: 'solar'`). */
+export type BatchRecord = EclipseRecord | SolarEclipseRecord;
+
+interface EntryCommon {
   id: string;
   kind: string;
   /** Hash of everything the files were made from: record, style, tool version. */
   key: string;
-  record: EclipseRecord;
   files: WrittenFile[];
 }
+
+/** `body` is written for every entry; a lunar entry made by hand or by an older version may lack it. */
+export type ManifestEntry = (EntryCommon & { body?: 'lunar'; record: EclipseRecord }) | (EntryCommon & { body: 'solar'; record: SolarEclipseRecord });
 
 export interface Manifest {
   schema: typeof MANIFEST_SCHEMA;
@@ -90,6 +101,31 @@ const recordSchema = z
   })
   .strict();
 
+const solarContactNames = SOLAR_CONTACT_ORDER as readonly string[];
+
+/** The solar record (src/eclipses/solar/record.ts) as the contact sheet reads it. */
+const solarRecordSchema = z
+  .object({
+    body: z.literal('solar'),
+    id: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'an eclipse id YYYY-MM-DD'),
+    kind: z.enum(SOLAR_ECLIPSE_KINDS as [string, ...string[]]),
+    central: z.boolean(),
+    greatest: isoSeconds,
+    greatestTT: isoSeconds,
+    deltaT: finite,
+    deltaTSource: z.enum(['observed', 'historical', 'forecast', 'long-term', 'user']),
+    gamma: finite,
+    magnitude: finite,
+    saros: z.number().int().min(-1000).max(1000),
+    greatestPoint: lonLat,
+    sunAltitude: finite.min(-90).max(90),
+    pathWidthKm: finite.nonnegative().optional(),
+    contacts: z.record(z.string(), isoSeconds).refine((c) => Object.keys(c).every((k) => solarContactNames.includes(k)), 'contacts named P1, U1, U2, U3, U4, P4'),
+    durations: z.object({ partial: finite.nonnegative(), central: finite.nonnegative().optional() }).strict(),
+    moonRadius: z.object({ penumbra: finite.positive(), umbra: finite.positive() }).strict(),
+  })
+  .strict();
+
 const fileSchema = z
   .object({
     path: z.string().max(300).refine(isPlainRelativePath, 'a plain relative path inside the folder (letters, digits, . _ -; at most one folder; no "..", no leading dot)'),
@@ -99,15 +135,20 @@ const fileSchema = z
   })
   .strict();
 
+const entryFields = { id: z.string(), kind: z.string(), key: z.string().regex(/^[0-9a-f]{32}$/), files: z.array(fileSchema).max(MAX_FILES_PER_ECLIPSE) };
+// A /1 entry has no body: it is lunar.
 const entrySchema = z
-  .object({ id: z.string(), kind: z.string(), key: z.string().regex(/^[0-9a-f]{32}$/), record: recordSchema, files: z.array(fileSchema).max(MAX_FILES_PER_ECLIPSE) })
-  .strict()
+  .union([
+    z.object({ ...entryFields, body: z.literal('lunar').default('lunar'), record: recordSchema }).strict(),
+    z.object({ ...entryFields, body: z.literal('solar'), record: solarRecordSchema }).strict(),
+  ])
   .refine((e) => e.id === e.record.id && e.kind === e.record.kind, 'an entry whose id and kind are its record\'s')
   .refine((e) => new Set(e.files.map((f) => f.path)).size === e.files.length, 'an entry that lists each file once');
 
 const manifestSchema = z
   .object({
-    schema: z.literal(MANIFEST_SCHEMA),
+    // A /1 manifest is read as /2: its entries are lunar.
+    schema: z.union([z.literal(MANIFEST_SCHEMA), z.literal(MANIFEST_SCHEMA_V1)]).transform(() => MANIFEST_SCHEMA),
     tool: text,
     styleHash: z.string().regex(/^[0-9a-f]{16}$/),
     style: z.record(z.string(), z.unknown()),

@@ -15,9 +15,11 @@ import { join } from 'node:path';
 import { Tinypool } from 'tinypool';
 import { InputError } from '../errors.ts';
 import { findEclipses } from '../eclipses/kinds.ts';
-import { ofBody, searchOptionsOf } from '../settings/catalogues.ts';
-import type { Eclipse } from '../eclipses/kinds.ts';
-import type { EclipseKind, LunarEclipse } from '../eclipses/lunar/types.ts';
+import { searchOptionsOf } from '../settings/catalogues.ts';
+import type { Eclipse, EclipseBody } from '../eclipses/kinds.ts';
+import { ECLIPSE_KINDS, type LunarEclipse } from '../eclipses/lunar/types.ts';
+import { SOLAR_ECLIPSE_KINDS } from '../eclipses/solar/types.ts';
+import { solarEclipseRecord } from '../eclipses/solar/record.ts';
 import { catalogueDocument, eclipseRecord, type EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
@@ -30,7 +32,7 @@ import { printable } from './printable.ts';
 import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
 import { contactSheet, pngSize, sheetTitle } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
-import { fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
+import { type BatchRecord, MANIFEST_SCHEMA, fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
 import { styleHash, type HouseStyle } from './style.ts';
 import { sha256, type TaskInput, type TaskResult, type WrittenFile } from './written.ts';
 
@@ -39,10 +41,14 @@ export interface Shard {
   readonly count: number;
 }
 
+/** The kinds of each body, as --kind and the library name them. */
+export { KINDS_OF_BODY, kindsOfBodies } from '../eclipses/kinds.ts';
+
 export interface BatchOptions {
   readonly from: Date;
   readonly to: Date;
-  readonly kinds: readonly EclipseKind[];
+  /** Only eclipses of these kinds (a kind names eclipses of every body that has it: `total` lunar and solar); absent, every kind. */
+  readonly kinds?: readonly Eclipse['kind'][];
   readonly style: HouseStyle;
   readonly outDir: string;
   readonly jobs: number;
@@ -82,7 +88,7 @@ export function shardOf<T>(items: readonly T[], shard: Shard | null): T[] {
   return shard ? items.filter((_, k) => k % shard.count === shard.index - 1) : [...items];
 }
 
-export function entryKey(record: EclipseRecord, hash: string, tool: string): string {
+export function entryKey(record: BatchRecord, hash: string, tool: string): string {
   return sha256(JSON.stringify({ tool, style: hash, record })).slice(0, 32);
 }
 
@@ -117,11 +123,23 @@ export function removeLeftovers(outDir: string): number {
   return removed;
 }
 
-/** What a batch call will do: every eclipse of the range and kinds, this shard's part, within the ceiling. */
-export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: LunarEclipse[]; mine: LunarEclipse[] } {
+/** The manifest's record of an eclipse, whatever its body. */
+export function batchRecord(eclipse: Eclipse): BatchRecord {
+  return eclipse.body === 'solar' ? solarEclipseRecord(eclipse) : eclipseRecord(eclipse);
+}
+
+/**
+ * What a batch call will do: every eclipse of the style's bodies, range and
+ * kinds, in time order of greatest eclipse, this shard's part, within the ceiling.
+ */
+export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 'style' | 'shard'>): { all: Eclipse[]; mine: Eclipse[] } {
   const { style } = options;
-  // The batch draws lunar eclipses only, so far.
-  const all = ofBody('lunar', findEclipses({ ...searchOptionsOf(eclipseChoiceOf(style), 'lunar'), from: options.from, to: options.to })).filter((e) => options.kinds.includes(e.kind));
+  const kinds = options.kinds;
+  const bodies = style.bodies ?? ['lunar'];
+  const all = bodies
+    .flatMap((body): Eclipse[] => findEclipses({ ...searchOptionsOf(eclipseChoiceOf(style), body), from: options.from, to: options.to }))
+    .filter((e) => !kinds || kinds.includes(e.kind))
+    .sort((a, b) => a.greatest.utDays - b.greatest.utDays);
   const mine = shardOf(all, options.shard);
   if (mine.length > MAX_BATCH_ECLIPSES) {
     const which = options.shard ? `shard ${options.shard.index}/${options.shard.count}: ${mine.length} of ${all.length} eclipses` : `${all.length} eclipses`;
@@ -170,7 +188,7 @@ function makeOutDir(outDir: string): boolean {
 
 function emptyManifest(options: BatchOptions, hash: string): Manifest {
   return {
-    schema: 'umbracast.manifest/1',
+    schema: MANIFEST_SCHEMA,
     tool: options.tool,
     styleHash: hash,
     style: options.style as unknown as Record<string, unknown>,
@@ -195,7 +213,9 @@ export function indexFiles(outDir: string, manifest: Manifest, title: string): [
     }
   };
   const convention = (SHADOW_CONVENTIONS as readonly unknown[]).includes(manifest.style.convention) ? (manifest.style.convention as ShadowConventionName) : 'danjon';
-  const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
+  // catalogue.csv holds the lunar records (umbracast.catalogue/1's columns); solar records are in the manifest.
+  const lunar = records.flatMap((e) => (e.body !== 'solar' ? [e.record] : []));
+  const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: lunar };
   const [csv, html] = indexNamesFor(manifest.shard);
   return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title, thumbSize)]];
 }
@@ -206,13 +226,22 @@ function indexNamesFor(shard: string | null): [string, string] {
   return [`catalogue${suffix}.csv`, `index${suffix}.html`];
 }
 
+/** The bodies a manifest's eclipses and style hold, lunar first: what its contact sheet's title names. */
+export function bodiesOf(manifest: Manifest): EclipseBody[] {
+  const styled = Array.isArray(manifest.style.bodies) ? (manifest.style.bodies as unknown[]) : [];
+  const held = new Set<unknown>([...styled, ...manifest.eclipses.map((e) => e.body ?? 'lunar')]);
+  return (['lunar', 'solar'] as const).filter((b) => held.has(b));
+}
+
 /** Refresh catalogue.csv and index.html from a manifest. */
 export async function writeIndexes(outDir: string, manifest: Manifest, title: string): Promise<void> {
   for (const [name, text] of indexFiles(outDir, manifest, title)) await writeFileAtomic(join(outDir, name), text);
 }
 
-/** Relative drawing cost of an eclipse by kind: totals draw the most (totality's zones and minute lines), penumbrals the least. */
+/** Relative drawing cost of a lunar eclipse by kind: totals draw the most (totality's zones and minute lines), penumbrals the least. */
 const KIND_COST: Record<LunarEclipse['kind'], number> = { total: 3, partial: 2, penumbral: 1 };
+/** A solar eclipse's task (caption with its city and path searches, GeoJSON) costs about as much as a lunar total's. */
+const costOf = (eclipse: Eclipse): number => (eclipse.body === 'solar' ? 3 : KIND_COST[eclipse.kind]);
 
 export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
   const started = performance.now();
@@ -241,10 +270,10 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     const manifest = emptyManifest(options, hash);
     const known = new Map((previous?.eclipses ?? []).map((e) => [e.id, e]));
 
-    const todo: { eclipse: LunarEclipse; record: EclipseRecord; key: string }[] = [];
+    const todo: { eclipse: Eclipse; record: BatchRecord; key: string }[] = [];
     let skipped = 0;
     for (const eclipse of mine) {
-      const record = eclipseRecord(eclipse);
+      const record = batchRecord(eclipse);
       const key = entryKey(record, hash, options.tool);
       const old = known.get(eclipse.id);
       if (!options.force && old && old.key === key && filesIntact(outDir, old)) {
@@ -295,12 +324,12 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
       try {
         await Promise.all(
           // Longest first, so that the last task to finish is a short one: totals draw the most lines, penumbrals the fewest.
-          [...todo].sort((a, b) => KIND_COST[b.eclipse.kind] - KIND_COST[a.eclipse.kind]).map(async ({ eclipse, record, key }) => {
+          [...todo].sort((a, b) => costOf(b.eclipse) - costOf(a.eclipse)).map(async ({ eclipse, record, key }) => {
             try {
               const input: TaskInput = { eclipse, style, outDir, generator: options.tool };
               const { files, seconds } = (await pool.run(input, { signal: abort.signal })) as TaskResult;
               if (interrupted) return;
-              const entry: ManifestEntry = { id: eclipse.id, kind: eclipse.kind, key, record, files };
+              const entry = { id: eclipse.id, body: eclipse.body, kind: eclipse.kind, key, record, files } as ManifestEntry;
               manifest.eclipses = [...manifest.eclipses.filter((e) => e.id !== eclipse.id), entry];
               rendered++;
               await saveManifest();
@@ -322,7 +351,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     }
     if (interrupted) removeLeftovers(outDir);
     await saveManifest();
-    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString()));
+    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString(), bodiesOf(manifest)));
     const files = manifest.eclipses.reduce((n, e) => n + e.files.length, 0);
     const bytes = manifest.eclipses.reduce((n, e) => n + e.files.reduce((m, f) => m + f.bytes, 0), 0);
     return { planned: mine.length, rendered, skipped, failed, files, bytes, seconds: (performance.now() - started) / 1000, interrupted };
@@ -376,7 +405,7 @@ export async function mergeManifests(outDir: string, manifests: readonly Manifes
     const from = manifests.map((m) => m.range.from).sort()[0]!;
     const to = manifests.map((m) => m.range.to).sort().at(-1)!;
     const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
-    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(outDir, merged, sheetTitle(from, to))];
+    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(outDir, merged, sheetTitle(from, to, bodiesOf(merged)))];
     checkFolderEntries(outDir, files.map(([name]) => name));
     for (const [name, text] of files) await writeFileAtomic(join(outDir, name), text);
     return merged;

@@ -8,6 +8,7 @@ import { extname } from 'node:path';
 import { parseDocument } from 'yaml';
 import { z } from 'zod';
 import { InputError, describeReceived } from '../errors.ts';
+import { ECLIPSE_BODIES } from '../eclipses/common/record.ts';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
 import { isKnownTimeZone } from '../ephemeris/civilTime.ts';
 import { BORDER_STYLES } from '../sphere/world.ts';
@@ -58,6 +59,8 @@ const styleObject = z
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),
     sky: z.boolean().default(true),
     naming: namingTemplate.default(DEFAULT_NAMING),
+    // Which kinds of eclipse a batch takes: lunar, solar or both (the default).
+    bodies: z.array(enumOf(ECLIPSE_BODIES)).min(1).max(ECLIPSE_BODIES.length).refine((b) => new Set(b).size === b.length, 'each of lunar, solar at most once').default([...ECLIPSE_BODIES]),
     // Lunar only: the shadow's enlargement (Danjon, Chauvenet); a solar eclipse has no such convention.
     convention: enumOf(SHADOW_CONVENTIONS).default('danjon'),
     deltaT: z.number().min(-86_400).max(86_400).optional(),
@@ -199,9 +202,16 @@ function loadStyleUnescaped(path: string): HouseStyle {
   return validateStyle(data, path);
 }
 
-/** A stable hash of a style's effective settings (key order does not matter). */
+/**
+ * Fields that choose which eclipses a batch takes, not how any of them is
+ * drawn: left out of the hash, which keys each eclipse's files (so a batch
+ * made before `bodies` existed stays up to date, and gains the solar eclipses).
+ */
+const SELECTION_FIELDS: readonly string[] = ['bodies'];
+
+/** A stable hash of a style's effective settings (key order does not matter; the selection fields aside). */
 export function styleHash(style: HouseStyle): string {
-  const sorted = JSON.stringify(style, Object.keys(style).sort());
+  const sorted = JSON.stringify(style, Object.keys(style).filter((key) => !SELECTION_FIELDS.includes(key)).sort());
   return createHash('sha256').update(sorted).digest('hex').slice(0, 16);
 }
 

@@ -1,13 +1,23 @@
 /**
  * One eclipse of a batch, in a worker process: every file the house style
  * asks for, each written atomically (into folders runBatch has made); returns
- * what it wrote, with sizes and hashes.
+ * what it wrote, with sizes and hashes. Dispatches on the eclipse's body:
+ * a lunar eclipse gets maps, caption, thumbnail, local tables and sky
+ * figures; a solar eclipse, until maps draw solar eclipses, its caption
+ * (with the eye-safety caution), its GeoJSON geometry and the local tables
+ * of the style's places (each with the caution).
  */
 import sharp from 'sharp';
 import { THEMES } from '../figures/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
 import { captionText } from '../outputs/caption.ts';
+import { solarCaption, solarCaptionText } from '../outputs/solarCaption.ts';
+import { solarGeoJson } from '../outputs/solarGeojson.ts';
+import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solarLocalReport, solarLocalTable } from '../outputs/solarLocal.ts';
+import { civilClock } from '../ephemeris/civilTime.ts';
+import type { LunarEclipse } from '../eclipses/lunar/types.ts';
+import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../settings/choose.ts';
@@ -24,19 +34,44 @@ sharp.cache(false);
 sharp.concurrency(1);
 const LOCAL_EXTENSIONS: Record<LocalFormat, string> = { table: 'txt', markdown: 'md', csv: 'csv', ics: 'ics', json: 'json' };
 
+type Write = (relative: string, role: FileRole, data: Uint8Array | string) => Promise<void>;
+
 export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
   const started = performance.now();
-  const { eclipse, style, outDir, generator } = input;
+  const { eclipse, style, outDir } = input;
   const stem = fileStem(style.naming, eclipse);
-  const settings = mapSettings(mapChoicesOf(style));
   const written: WrittenFile[] = [];
-  const write = async (relative: string, role: FileRole, data: Uint8Array | string) => {
+  const write: Write = async (relative, role, data) => {
     // Each file once: two outputs of one name would overwrite each other and never settle.
     if (written.some((w) => w.path === relative)) throw new Error(`two outputs named ${JSON.stringify(relative)}`);
     const bytes = typeof data === 'string' ? Buffer.from(data) : data;
     await writeFileAtomic(pathInside(outDir, relative), bytes);
     written.push({ path: relative, role, bytes: bytes.byteLength, sha256: sha256(bytes) });
   };
+  if (eclipse.body === 'solar') await renderSolar({ ...input, eclipse }, stem, write);
+  else await renderLunar({ ...input, eclipse }, stem, write);
+  return { files: written, seconds: (performance.now() - started) / 1000 };
+}
+
+/** A solar eclipse: caption and alt text, the geometry as GeoJSON, the places' local tables; every one with the caution. */
+async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: string, write: Write): Promise<void> {
+  const { eclipse, style, generator } = input;
+  const clock = civilClock(style.tz);
+  await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock })));
+  await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse))}\n`);
+  const slugs = stylePlaces(style.places).map((p) => p.slug);
+  for (const [i, name] of style.places.entries()) {
+    const report = solarLocalReport(eclipse, choosePlace({ place: name }, true, 'places'));
+    for (const format of style.localFormats) {
+      const text = { table: solarLocalTable, markdown: solarLocalMarkdown, csv: solarLocalCsv, json: solarLocalJson, ics: (r: typeof report) => solarLocalIcs(r, generator) }[format](report);
+      await write(`${stem}-${slugs[i]!}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
+    }
+  }
+}
+
+async function renderLunar(input: TaskInput & { eclipse: LunarEclipse }, stem: string, write: Write): Promise<void> {
+  const { eclipse, style, generator } = input;
+  const settings = mapSettings(mapChoicesOf(style));
 
   const { files, caption, thumbnail } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats, THUMBNAIL_WIDTH_PX);
   for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
@@ -60,7 +95,6 @@ export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
       await write(`${stem}-${slug}-sky.txt`, 'caption', sky.caption);
     }
   }
-  return { files: written, seconds: (performance.now() - started) / 1000 };
 }
 
 export default renderEclipse;

@@ -1,10 +1,11 @@
 /** What a batch task is given and what it reports back: plain data, safe to send between processes. */
 import { createHash } from 'node:crypto';
-import type { LunarEclipse } from '../eclipses/lunar/types.ts';
+import type { Eclipse } from '../eclipses/kinds.ts';
 import type { HouseStyle } from './style.ts';
 
 export interface TaskInput {
-  readonly eclipse: LunarEclipse;
+  /** A lunar or a solar eclipse: the task dispatches on `body`. */
+  readonly eclipse: Eclipse;
   readonly style: HouseStyle;
   readonly outDir: string;
   readonly generator: string;

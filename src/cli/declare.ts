@@ -5,13 +5,12 @@
 import type { Command } from 'commander';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
 import { ECLIPSE_BODIES, type EclipseBody } from '../eclipses/common/record.ts';
-import { ECLIPSE_KINDS } from '../eclipses/lunar/types.ts';
-import { SOLAR_ECLIPSE_KINDS } from '../eclipses/solar/types.ts';
 
 export { DELTA_T_LIMITS } from '../settings/read.ts';
 
 /** The kinds of eclipse each body has, as --kind names them. */
-export const KINDS_OF_BODY: { readonly [B in EclipseBody]: readonly string[] } = { lunar: ECLIPSE_KINDS, solar: SOLAR_ECLIPSE_KINDS };
+export { KINDS_OF_BODY } from '../eclipses/kindNames.ts';
+import { KINDS_OF_BODY } from '../eclipses/kindNames.ts';
 
 /** --convention and --delta-t, as every command that computes eclipses declares them. */
 export function withEclipseOptions(command: Command): Command {

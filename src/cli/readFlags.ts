@@ -7,8 +7,7 @@
  */
 import { InputError } from '../errors.ts';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
-import { BODY_CHOICES, type BodyChoice } from '../eclipses/kinds.ts';
-import { KINDS_OF_BODY } from './declare.ts';
+import { BODY_CHOICES, kindsOfBodies, type BodyChoice, type EclipseKindName } from '../eclipses/kinds.ts';
 import { PROJECTION_NAMES } from '../figures/projection.ts';
 import { THEME_NAMES } from '../figures/theme.ts';
 import { MARK_CLOCKS } from '../figures/markClock.ts';
@@ -29,8 +28,8 @@ export function bodyFromFlags(flags: BodyFlags): BodyChoice {
 }
 
 /** The kinds --kind may name for a body: with `all`, a kind of either. */
-export function kindsOfBody(body: BodyChoice): readonly string[] {
-  return body === 'all' ? [...new Set([...KINDS_OF_BODY.lunar, ...KINDS_OF_BODY.solar])] : KINDS_OF_BODY[body];
+export function kindsOfBody(body: BodyChoice): readonly EclipseKindName[] {
+  return kindsOfBodies(body);
 }
 
 /**
@@ -38,13 +37,13 @@ export function kindsOfBody(body: BodyChoice): readonly string[] {
  * A kind the body has not (annular for lunar, penumbral for solar) is one error
  * line naming --kind and the kinds allowed for that body.
  */
-export function kindsFromFlags(flags: BodyFlags, body: BodyChoice = bodyFromFlags(flags)): readonly string[] | undefined {
+export function kindsFromFlags(flags: BodyFlags, body: BodyChoice = bodyFromFlags(flags)): readonly EclipseKindName[] | undefined {
   if (flags.kind === undefined) return undefined;
   const allowed = kindsOfBody(body);
   const parts = flags.kind.split(',').map((p) => p.trim().toLowerCase()).filter((p) => p.length > 0);
-  const bad = parts.length === 0 || parts.some((p) => !allowed.includes(p));
+  const bad = parts.length === 0 || parts.some((p) => !(allowed as readonly string[]).includes(p));
   if (bad) throw new InputError('--kind', `a comma-separated list of the kinds of ${body === 'all' ? 'lunar or solar' : body} eclipses: ${allowed.join(', ')}`, flags.kind);
-  return [...new Set(parts)];
+  return [...new Set(parts)] as EclipseKindName[];
 }
 
 export interface EclipseFlags {

@@ -22,6 +22,8 @@ export type Eclipse = LunarEclipse | SolarEclipse;
 export type BodyChoice = EclipseBody | 'all';
 export const BODY_CHOICES: readonly BodyChoice[] = [...ECLIPSE_BODIES, 'all'];
 
+export { KINDS_OF_BODY, kindsOfBodies, type EclipseKindName } from './kindNames.ts';
+
 /** How eclipses are computed and which kinds are wanted; shared by every entry point here. */
 export interface EclipseSearchOptions {
   /** Which kinds: `lunar`, `solar` or `all` (the default). */

@@ -2,10 +2,11 @@
  * What one place sees of a solar eclipse, as a table, markdown, CSV
  * (RFC 4180), an iCalendar file (RFC 5545) and the `umbracast.local/1` JSON
  * contract for `body: 'solar'`. Every format carries the eye-safety caution
- * (src/words/solar.ts, long form, scoped to whether the place sees
+ * (src/words/solar/caution.ts, long form, scoped to whether the place sees
  * totality): the first line of the table and markdown, the first row of the
  * CSV, `safety` in JSON, every VEVENT's description. The lunar naked-eye
- * line is never written here.
+ * line is never written here. The summary and the event words come from
+ * src/words/solar/text.ts.
  *
  * Times are in the place's zone through the same clock as the lunar side
  * (`civilClock`); the table and markdown print them to the second, since a
@@ -15,10 +16,14 @@ import { stringify } from 'csv-stringify/sync';
 import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
-import { K_PENUMBRA, K_UMBRA, LOW_SUN_DEG, NEAR_EDGE_KM } from '../eclipses/solar/constants.ts';
+import { K_PENUMBRA, K_UMBRA } from '../eclipses/solar/constants.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { solarLocalCircumstances, type SolarLocalCircumstances, type SolarLocalEvent, type SolarLocalEventName } from '../local/solar.ts';
 import { safetyScopeForPlace, solarSafetyText, type SolarSafetyScope } from '../words/solar/caution.ts';
+import { clockSeconds, percentWords as percent, SOLAR_TEXT_ENGLISH, solarEventWords, solarLocalSummary } from '../words/solar/text.ts';
+
+/** The summary and the duration words live with the solar reader text; re-exported for the library's face. */
+export { minutesAndSeconds, solarLocalSummary } from '../words/solar/text.ts';
 import { foldIcsLine, icsText, icsTime } from './icalendar.ts';
 import { altitude2, ICS_STAMP, LOCAL_SCHEMA, localIso, type PlaceLabel } from './localFormats.ts';
 
@@ -38,73 +43,6 @@ export function solarLocalReport(eclipse: SolarEclipse, chosen: { place: PlaceLa
   const local = solarLocalCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
   const safetyScope = safetyScopeForPlace(local.kind === 'total');
   return { local, place, clock, summary: solarLocalSummary(local, clock, place.name), safetyScope, safety: solarSafetyText('long', safetyScope) };
-}
-
-// ---- words (to move to src/words/solar/ with the caution) ------------------------------------
-
-export const SOLAR_EVENT_WORDS: Record<SolarLocalEventName, string> = {
-  C1: 'the Moon begins to cover the Sun',
-  C2: 'central phase begins',
-  maximum: 'maximum eclipse',
-  C3: 'central phase ends',
-  C4: 'the Moon leaves the Sun',
-  sunrise: 'sunrise',
-  sunset: 'sunset',
-};
-
-const CENTRAL_WORDS = { total: 'totality', annular: 'annularity' } as const;
-
-function eventWords(local: SolarLocalCircumstances, event: SolarLocalEventName): string {
-  if (event !== 'C2' && event !== 'C3') return SOLAR_EVENT_WORDS[event];
-  const central = local.kind === 'total' || local.kind === 'annular' ? CENTRAL_WORDS[local.kind] : 'central phase (Sun below the horizon)';
-  return `${central} ${event === 'C2' ? 'begins' : 'ends'}`;
-}
-
-/** "4 min 28 s", "52 s": central durations to the second. */
-export function minutesAndSeconds(seconds: number): string {
-  const whole = Math.round(seconds);
-  const minutes = Math.floor(whole / 60);
-  return minutes === 0 ? `${whole} s` : `${minutes} min ${String(whole % 60).padStart(2, '0')} s`;
-}
-
-const percent = (fraction: number) => `${Math.round(fraction * 100)} %`;
-
-/** A wall-clock time to the second with its own zone's name: "13:27:10 CDT". */
-function clockSeconds(clock: CivilClock, utDays: number): string {
-  return `${clock.rfc3339(utDays).slice(11, 19)} ${clock.abbreviation(utDays)}`;
-}
-
-/** What the place sees, in two or three sentences, from the circumstances alone. */
-export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilClock, placeName: string): string {
-  const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
-  const c1 = find('C1');
-  const c4 = find('C4');
-  if (!c1 || !c4) return `From ${placeName} the Moon's shadow misses: no eclipse of the Sun is seen on ${local.eclipse.id}.`;
-  if (local.kind === 'none') {
-    return `From ${placeName} the Sun is below the horizon for the whole eclipse (${clock.range(c1.moment.utDays, c4.moment.utDays)}): nothing is seen.`;
-  }
-  const sentences: string[] = [];
-  const c2 = find('C2');
-  const c3 = find('C3');
-  const maximum = find('maximum')!;
-  if ((local.kind === 'total' || local.kind === 'annular') && c2 && c3 && local.centralSeconds !== undefined) {
-    const what = local.kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,';
-    sentences.push(`From ${placeName} ${what} for ${minutesAndSeconds(local.centralSeconds)}, ${clockSeconds(clock, c2.moment.utDays)} to ${clockSeconds(clock, c3.moment.utDays)}.`);
-  } else {
-    sentences.push(`From ${placeName} the Sun is partly eclipsed: at most ${percent(local.obscurationSeen)} of its disc covered.`);
-  }
-  // The local date is named where it is not the eclipse's UTC date (across the date line, or late in the UTC day).
-  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? '' : ` on ${clock.date(c1.moment.utDays)}`;
-  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays)}${localDate}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
-  const rise = find('sunrise');
-  const set = find('sunset');
-  if (rise) sentences.push(`The Sun rises already eclipsed, at ${clock.stamp(rise.moment.utDays)}.`);
-  if (set) sentences.push(`The Sun sets still eclipsed, at ${clock.stamp(set.moment.utDays)}.`);
-  if (local.nearPathEdge) {
-    sentences.push(`This place lies within ${NEAR_EDGE_KM} km of the path's edge: the Moon's uneven limb and the uncertainty of ΔT can move the edge by a kilometre or more, so the central phase may be shorter or missed.`);
-  }
-  if (local.lowSun) sentences.push(`The Sun stands below ${LOW_SUN_DEG}° at best: a clear, low horizon in its direction is needed.`);
-  return sentences.join(' ');
 }
 
 // ---- data ---------------------------------------------------------------------------------------
@@ -176,7 +114,7 @@ function rows(report: SolarLocalReport): string[][] {
   const { clock, local } = report;
   return local.events.map((ev: SolarLocalEvent) => [
     ev.event === 'maximum' ? 'Maximum' : ev.event === 'sunrise' ? 'Sunrise' : ev.event === 'sunset' ? 'Sunset' : ev.event,
-    eventWords(local, ev.event),
+    solarEventWords(local.kind, ev.event),
     `${clock.rfc3339(ev.moment.utDays).slice(0, 10)} ${clockSeconds(clock, ev.moment.utDays)}`,
     isoSeconds(ev.moment.utDays).slice(11, 19),
     `${fixed(ev.sunAltitudeDeg, 1)}°`,
@@ -312,7 +250,7 @@ export function solarLocalIcs(report: SolarLocalReport, generator: string): stri
       'TRANSP:TRANSPARENT',
       'END:VEVENT',
     );
-  const central = local.kind === 'total' || local.kind === 'annular' ? CENTRAL_WORDS[local.kind] : undefined;
+  const central = local.kind === 'total' || local.kind === 'annular' ? SOLAR_TEXT_ENGLISH.central[local.kind] : undefined;
   const phases = [
     { key: 'partial', title: 'Partial phases of the solar eclipse', start: find('C1'), end: find('C4') },
     ...(central ? [{ key: central, title: central === 'totality' ? 'Totality' : 'Annularity', start: find('C2'), end: find('C3') }] : []),

@@ -27,7 +27,8 @@ function styleFile(dir: string, text: string, name = 'style.yaml'): string {
   return path;
 }
 
-const SMALL_STYLE = 'preset: card\nformats: [png, svg]\nplaces: [Dakar]\nlocalFormats: [ics]\nnaming: "{id}-{kind}"\n';
+// These batches are of lunar eclipses (a style takes both kinds unless it says): test/batch/solarBatch.test.ts has both.
+const SMALL_STYLE = 'preset: card\nformats: [png, svg]\nplaces: [Dakar]\nlocalFormats: [ics]\nnaming: "{id}-{kind}"\nbodies: [lunar]\n';
 
 async function decodes(path: string): Promise<void> {
   const bytes = readFileSync(path);
@@ -59,7 +60,7 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
   assert.match(stdout, /^umbracast batch: \d+ eclipses — .* s in all → /);
   const expected = findLunarEclipses({ from: new Date('2026-01-01T00:00:00Z'), to: new Date('2029-01-01T00:00:00Z') }).map((e) => `${e.id}-${e.kind}`);
   const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8'));
-  assert.equal(manifest.schema, 'umbracast.manifest/1');
+  assert.equal(manifest.schema, 'umbracast.manifest/2');
   assert.match(manifest.tool, /^umbracast \d+\.\d+\.\d+$/);
   assert.match(manifest.styleHash, /^[0-9a-f]{16}$/);
   assert.deepEqual(manifest.eclipses.map((e: { id: string; kind: string }) => `${e.id}-${e.kind}`), expected);
@@ -86,7 +87,7 @@ test('a three-year batch: every eclipse of the catalogue has its files, each dec
 test('kill a batch midway (SIGKILL), rerun: it completes, no file is partial, nothing finished before is redone', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-kill-'));
   const out = join(dir, 'atlas');
-  const style = styleFile(dir, 'preset: card\nformats: [png, svg]\n');
+  const style = styleFile(dir, 'preset: card\nformats: [png, svg]\nbodies: [lunar]\n');
   const child = spawn(process.execPath, [BIN, 'batch', '--from', '2026', '--to', '2029', '--style', style, '--out', out, '--jobs', '1'], { stdio: 'ignore' });
   const manifestPath = join(out, 'manifest.json');
   const deadline = Date.now() + 60_000;
@@ -124,7 +125,7 @@ test('kill a batch midway (SIGKILL), rerun: it completes, no file is partial, no
 test('shards 1/3, 2/3 and 3/3 together equal the unsharded set, with no overlap; --merge joins their manifests', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-shard-'));
   const out = join(dir, 'atlas');
-  const style = styleFile(dir, 'preset: card\nformats: [svg]\n');
+  const style = styleFile(dir, 'preset: card\nformats: [svg]\nbodies: [lunar]\n');
   const ids: string[][] = [];
   for (const shard of ['1/3', '2/3', '3/3']) {
     const { code } = await run(['batch', '--from', '2026', '--to', '2030', '--style', style, '--out', out, '--shard', shard, '--jobs', '2']);

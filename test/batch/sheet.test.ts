@@ -17,7 +17,7 @@ import { main } from '../../src/cli/main.ts';
 test('contact sheet: card dates match the map titles (Asia/Tokyo, where the 2027-02-20 eclipse falls on the 21st), the range heading includes its last day, <img> sizes are the thumbnails\'', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-sheet-words-'));
   const out = join(dir, 'atlas');
-  writeFileSync(join(dir, 'style.yaml'), 'preset: card\ntz: Asia/Tokyo\nformats: [png]\nsky: false\n');
+  writeFileSync(join(dir, 'style.yaml'), 'preset: card\ntz: Asia/Tokyo\nformats: [png]\nsky: false\nbodies: [lunar]\n');
   let stderr = '';
   const code = await main(['batch', '--from', '2027-02', '--to', '2027-02', '--style', join(dir, 'style.yaml'), '--out', out, '--jobs', '1'], {
     stdout: () => undefined, stderr: (t) => (stderr += t), now: () => new Date('2026-01-10T00:00:00Z'),

@@ -11,7 +11,7 @@ import { pathInside } from '../../src/outputs/files.ts';
 import { assertContract, hostile, run, SETTINGS } from './support.ts';
 
 const BIN = new URL('../../src/cli/bin.mjs', import.meta.url).pathname;
-const RANGE = ['--from', '2026-03-01', '--to', '2026-09-01'];
+const RANGE = ['--from', '2026-03-01', '--to', '2026-09-01', '--body', 'lunar'];
 
 function setup(style = 'preset: card\nformats: [svg]\nsky: false\n') {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-hard-'));
@@ -64,7 +64,7 @@ test('two batches on one --out: the second refuses with a clear line while the f
   const code = await new Promise((r) => first.once('exit', r));
   assert.equal(code, 0);
   const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8'));
-  assert.equal(manifest.schema, 'umbracast.manifest/1');
+  assert.equal(manifest.schema, 'umbracast.manifest/2');
   assert.ok(!existsSync(join(out, '.umbracast.lock')), 'the lock is released');
   const again = await run(['batch', '--from', '2026', '--to', '2028', '--style', style, '--out', out]);
   assert.match(again.stdout, / 0 rendered, \d+ up to date, 0 failed/);

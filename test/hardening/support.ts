@@ -62,7 +62,8 @@ export function batchSetup(style = 'preset: card\nformats: [svg]\nsky: false\n',
 }
 
 /** Two eclipses: 2026-03-03 (total) and 2026-08-28 (partial). */
-export const TWO_ECLIPSES = ['--from', '2026-03-01', '--to', '2026-09-01'];
+/** Two lunar eclipses (the range holds a solar one too, which a batch takes unless told: --body lunar). */
+export const TWO_ECLIPSES = ['--from', '2026-03-01', '--to', '2026-09-01', '--body', 'lunar'];
 
 /** Every file under a folder (not following links) with its bytes: to show that a refused run changed nothing. */
 export function snapshot(dir: string): Record<string, string> {

@@ -5,9 +5,9 @@ import { dirname, join, resolve } from 'node:path';
 import cliProgress from 'cli-progress';
 import type { Command } from 'commander';
 import { describeReceived, InputError } from '../../errors.ts';
-import { ECLIPSE_KINDS, type EclipseKind } from '../../eclipses/lunar/types.ts';
+import { BODY_CHOICES, ECLIPSE_BODIES, type EclipseBody } from '../../eclipses/kinds.ts';
 import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
-import { MAX_MERGE_MANIFESTS, mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
+import { kindsOfBodies, KINDS_OF_BODY, MAX_MERGE_MANIFESTS, mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
 import { longestStemBytes, placeSuffixBytes, SamePlace, stylePlaces } from '../../batch/naming.ts';
 import { printable } from '../../batch/printable.ts';
 import { MAX_FILE_NAME_BYTES } from '../../outputs/files.ts';
@@ -18,14 +18,15 @@ import { mapChoicesOf, STYLE_FIELDS } from '../../batch/styleSettings.ts';
 import { asFlags } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { parseNumber, parseRange } from '../options.ts';
-import { withBodyOptions } from '../declare.ts';
-import { bodyFromFlags, kindsFromFlags, type BodyFlags } from '../readFlags.ts';
+import { kindsFromFlags, type BodyFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 import { counted } from '../../outputs/counted.ts';
 
 interface BatchCommandOptions extends BodyFlags {
   from?: string;
   to?: string;
+  kind?: string;
+  body?: string;
   style?: string;
   out: string;
   jobs?: string;
@@ -44,20 +45,12 @@ export function parseShard(text: string): Shard {
 
 export const MAX_JOBS = 64;
 
-/** What the batch draws so far: lunar eclipses. */
-const DRAWN_SO_FAR = 'the batch draws lunar eclipses only, so far; solar eclipses: list and local';
-
-/**
- * The lunar kinds a batch draws: --body and --kind read as every command reads them, then held to the
- * lunar eclipses, which are all the batch draws so far (a solar body or kind is one clear error line).
- */
-function batchKinds(options: BodyFlags): EclipseKind[] {
-  const body = bodyFromFlags(options);
-  if (body === 'solar') throw new InputError('--body', `lunar or all (${DRAWN_SO_FAR})`, options.body);
-  const kinds = kindsFromFlags(options, body) ?? ECLIPSE_KINDS;
-  const lunar = ECLIPSE_KINDS.filter((kind) => kinds.includes(kind));
-  if (lunar.length < kinds.length) throw new InputError('--kind', `a comma-separated list of ${ECLIPSE_KINDS.join(', ')} (${DRAWN_SO_FAR})`, options.kind);
-  return lunar;
+/** The bodies a batch takes: --body if given (all: both), else the style's `bodies`. */
+export function bodiesFrom(text: string | undefined, style: HouseStyle): EclipseBody[] {
+  if (text === undefined) return [...style.bodies];
+  const body = text.trim().toLowerCase();
+  if (!(BODY_CHOICES as readonly string[]).includes(body)) throw new InputError('--body', BODY_CHOICES.join(', '), text);
+  return body === 'all' ? [...ECLIPSE_BODIES] : [body as EclipseBody];
 }
 
 export function registerBatch(program: Command, context: CommandContext): void {
@@ -65,27 +58,29 @@ export function registerBatch(program: Command, context: CommandContext): void {
     .command('batch')
     .description('render every lunar eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable (solar eclipses: not yet)')
     .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
-    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)');
-  withBodyOptions(command)
+    .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
+    .option('--kind <kinds>', `only these kinds, comma-separated: lunar ${KINDS_OF_BODY.lunar.join(',')}; solar ${KINDS_OF_BODY.solar.join(',')}`)
     .option('--style <file>', 'house style, JSON or YAML (see README)')
     .option('--out <dir>', 'output folder (made if its parent exists)', 'out')
     .option('--jobs <n>', 'worker processes (default: the number of cores)')
     .option('--force', 'redo everything, even what is up to date')
     .option('--shard <I/N>', 'render only the I-th of N disjoint parts of the range')
-    .option('--merge <dirs...>', 'combine the shard manifests found in these folders into --out/manifest.json')
-    .action(async (options: BatchCommandOptions) => {
-      try {
-        await batchAction(options, context);
-      } catch (error) {
-        // What came from outside (paths, file names, style keys) is shown escaped, on one line.
-        if (error instanceof InputError) {
-          const flagged = asFlags(error);
-          throw new InputError(printable(flagged.parameter), printable(flagged.expected), printable(flagged.received), true);
-        }
-        if (error instanceof Error && !(error instanceof BatchInterrupted)) throw new Error(printable(error.message));
-        throw error;
+    .option('--merge <dirs...>', 'combine the shard manifests found in these folders into --out/manifest.json');
+  // --body is declared with the eclipse options once every command takes it; until then, here.
+  if (!command.options.some((o) => o.long === '--body')) command.option('--body <body>', `which eclipses: ${BODY_CHOICES.join(', ')} (default: the style's bodies, both unless it says)`);
+  command.action(async (options: BatchCommandOptions) => {
+    try {
+      await batchAction(options, context);
+    } catch (error) {
+      // What came from outside (paths, file names, style keys) is shown escaped, on one line.
+      if (error instanceof InputError) {
+        const flagged = asFlags(error);
+        throw new InputError(printable(flagged.parameter), printable(flagged.expected), printable(flagged.received), true);
       }
-    });
+      if (error instanceof Error && !(error instanceof BatchInterrupted)) throw new Error(printable(error.message));
+      throw error;
+    }
+  });
 }
 
 async function batchAction(options: BatchCommandOptions, context: CommandContext): Promise<void> {
@@ -107,8 +102,10 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
     return;
   }
   const range = parseRange(options.from, options.to, context.now());
-  const kinds = batchKinds(options);
-  const style = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
+  const styled = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
+  const style: HouseStyle = { ...styled, bodies: bodiesFrom(options.body, styled) };
+  // Kinds are checked against the bodies taken: annular and hybrid are solar, penumbral lunar, total and partial both.
+  const kinds = kindsFromFlags({ kind: options.kind }, style.bodies.length === 1 ? style.bodies[0]! : 'all');
   for (const notice of checkStyleSettings(style, options.style ?? 'the default style')) context.stderr(`${printable(notice)}\n`);
   const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });
   if (!Number.isInteger(jobs)) throw new InputError('--jobs', `a whole number of worker processes from 1 to ${MAX_JOBS}`, options.jobs);
@@ -119,7 +116,7 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
   process.once('SIGINT', onSignal);
   process.once('SIGTERM', onSignal);
   try {
-    const summary = await runBatch({ ...range, kinds, style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
+    const summary = await runBatch({ ...range, ...(kinds ? { kinds } : {}), style, outDir, jobs, force: options.force === true, shard, tool: `umbracast ${toolVersion()}`, signal: controller.signal, onProgress: progress.report });
     progress.stop();
     const size = `${(summary.bytes / 1e6).toFixed(1)} MB`;
     context.stdout(`umbracast batch: ${counted(summary.planned, 'eclipse')} — ${summary.rendered} rendered, ${summary.skipped} up to date, ${summary.failed.length} failed; ${counted(summary.files, 'file')}, ${size}, ${summary.seconds.toFixed(1)} s in all → ${outDir}\n`);

@@ -213,9 +213,8 @@ export function indexFiles(outDir: string, manifest: Manifest, title: string): [
     }
   };
   const convention = (SHADOW_CONVENTIONS as readonly unknown[]).includes(manifest.style.convention) ? (manifest.style.convention as ShadowConventionName) : 'danjon';
-  // catalogue.csv holds the lunar records (umbracast.catalogue/1's columns); solar records are in the manifest.
-  const lunar = records.flatMap((e) => (e.body !== 'solar' ? [e.record] : []));
-  const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: lunar };
+  // catalogue.csv holds every record of the batch, both kinds (umbracast.catalogue/2's columns, the caution on solar rows).
+  const doc = { ...catalogueDocument([], { convention, deltaTModel: '', from: new Date(manifest.range.from), to: new Date(manifest.range.to) }), eclipses: records.map((e) => e.record) };
   const [csv, html] = indexNamesFor(manifest.shard);
   return [[csv, catalogueCsv(doc)], [html, contactSheet({ ...manifest, eclipses: records }, title, thumbSize)]];
 }

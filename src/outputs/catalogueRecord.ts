@@ -110,8 +110,8 @@ export function catalogueRecord(eclipse: Eclipse): CatalogueRecord {
  * scoped to its eclipses (a total or hybrid one among them: viewers come off
  * in totality only; else: at no time without a filter).
  */
-export function catalogueSafety(eclipses: readonly Eclipse[], form: 'short' | 'long' = 'long'): string | undefined {
-  const solar = eclipses.filter((e) => e.body === 'solar');
+export function catalogueSafety(eclipses: readonly (Eclipse | CatalogueRecord)[], form: 'short' | 'long' = 'long'): string | undefined {
+  const solar = eclipses.flatMap((e) => (e.body === 'solar' ? [e] : []));
   if (solar.length === 0) return undefined;
   const totality = solar.some((e) => safetyScopeForEclipse(e.kind) === 'whole-eclipse');
   return solarSafetyText(form, totality ? 'whole-eclipse' : 'no-totality');

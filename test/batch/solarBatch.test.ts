@@ -105,8 +105,11 @@ test('a batch of both bodies: the caution in every solar output and on its card,
   assert.match(cards.get('2026-02-17')!, /<p class="caution"><strong>Eye safety: [^<]*ISO 12312-2/);
   assert.doesNotMatch(cards.get('2026-02-17')!, NAKED_EYE);
   assert.doesNotMatch(cards.get('2026-03-03')!, CAUTION);
-  // catalogue.csv keeps the lunar catalogue's columns and rows.
-  assert.deepEqual(readFileSync(join(out, 'catalogue.csv'), 'utf8').trim().split('\n').slice(1).map((l) => l.split(',')[0]), ['2026-03-03']);
+  // catalogue.csv (umbracast.catalogue/2's columns: body, then id) holds both eclipses, the caution on the solar row only.
+  const rows = readFileSync(join(out, 'catalogue.csv'), 'utf8').trim().split('\n').slice(1);
+  assert.deepEqual(rows.map((l) => l.split(',').slice(0, 2).join(',')), ['solar,2026-02-17', 'lunar,2026-03-03']);
+  assert.match(rows[0]!, /ISO 12312-2/);
+  assert.doesNotMatch(rows[1]!, CAUTION);
 });
 
 test('the contact sheet of a total solar eclipse: the caution with totality\'s scope; a /1 manifest entry without body reads as lunar', () => {

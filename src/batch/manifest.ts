@@ -136,12 +136,15 @@ const fileSchema = z
   .strict();
 
 const entryFields = { id: z.string(), kind: z.string(), key: z.string().regex(/^[0-9a-f]{32}$/), files: z.array(fileSchema).max(MAX_FILES_PER_ECLIPSE) };
-// A /1 entry has no body: it is lunar.
+// A /1 entry has no body: it is lunar. The body picks the record's schema, so that an error names the field at fault.
 const entrySchema = z
-  .union([
-    z.object({ ...entryFields, body: z.literal('lunar').default('lunar'), record: recordSchema }).strict(),
-    z.object({ ...entryFields, body: z.literal('solar'), record: solarRecordSchema }).strict(),
-  ])
+  .preprocess(
+    (entry) => (entry && typeof entry === 'object' && !Array.isArray(entry) && !('body' in entry) ? { ...entry, body: 'lunar' } : entry),
+    z.discriminatedUnion('body', [
+      z.object({ ...entryFields, body: z.literal('lunar'), record: recordSchema }).strict(),
+      z.object({ ...entryFields, body: z.literal('solar'), record: solarRecordSchema }).strict(),
+    ]),
+  )
   .refine((e) => e.id === e.record.id && e.kind === e.record.kind, 'an entry whose id and kind are its record\'s')
   .refine((e) => new Set(e.files.map((f) => f.path)).size === e.files.length, 'an entry that lists each file once');
 

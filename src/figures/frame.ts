@@ -35,6 +35,12 @@ export interface PageSpec {
   readonly id: string;
   readonly title: string;
   readonly subtitle: string;
+  /**
+   * A notice printed in the header band under the subtitle, in full ink (a
+   * solar map's eye-safety caution): part of the band, so that no custom
+   * title or trimmed footer can drop it.
+   */
+  readonly notice?: string;
   /** The SVG's description, for screen readers. */
   readonly description: string;
   readonly smallPrint: string;
@@ -74,7 +80,12 @@ export function pageFrame(spec: PageSpec): PageFrame {
   const subtitleLines = wrapText(spec.subtitle, layout.subtitleStyle, contentWidth);
   const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
   const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
-  const headerBottom = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + spec.headerGapUnits * unit;
+  const noticeStyle = { ...layout.subtitleStyle, weight: 'semibold' as const };
+  const noticeLines = spec.notice === undefined ? [] : wrapText(spec.notice, noticeStyle, contentWidth);
+  const noticeBaseline = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + noticeStyle.sizePx * 1.55;
+  const headerBottom = noticeLines.length === 0
+    ? subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + spec.headerGapUnits * unit
+    : noticeBaseline + (noticeLines.length - 1) * noticeStyle.sizePx * 1.35 + spec.headerGapUnits * unit;
 
   const { swatchUnits, gapUnits, gapInWidth } = spec.legendSetting;
   const swatch = swatchUnits * unit;
@@ -106,6 +117,9 @@ export function pageFrame(spec: PageSpec): PageFrame {
       out.push(textElement(titleText, margin, titleBaseline + headerShiftPx, layout.titleStyle, theme.text));
       subtitleLines.forEach((line, i) => {
         out.push(textElement(line, margin, subtitleBaseline + headerShiftPx + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
+      });
+      noticeLines.forEach((line, i) => {
+        out.push(textElement(line, margin, noticeBaseline + headerShiftPx + i * noticeStyle.sizePx * 1.35, noticeStyle, theme.text));
       });
 
       // Legend, then small print.

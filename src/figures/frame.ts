@@ -8,7 +8,7 @@
  */
 import { flowRows, layoutFor, textElement, type Layout, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
-import { escapeXml, fitText, measureText, wrapText } from './typography.ts';
+import { escapeXml, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
 
 /** A legend entry: a swatch drawn by the layer it explains (same stroke and fill specs), and its words. */
 export interface LegendEntry {
@@ -60,6 +60,9 @@ export interface PageFrame {
   readonly headerBottom: number;
   /** The footer's height (legend rows, a gap, small print): a body ends above it. */
   readonly footerHeight: number;
+  /** The notice's lines in the header band, with their baselines (before any header shift) and type. */
+  readonly noticeLines: readonly { readonly text: string; readonly baselinePx: number }[];
+  readonly noticeStyle: TextStyle;
   /**
    * The whole page as SVG: the body's `defs` and layers between the paper
    * and the header; `headerShiftPx` moves the header down (a map shorter
@@ -80,7 +83,7 @@ export function pageFrame(spec: PageSpec): PageFrame {
   const subtitleLines = wrapText(spec.subtitle, layout.subtitleStyle, contentWidth);
   const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
   const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
-  const noticeStyle = { ...layout.subtitleStyle, weight: 'semibold' as const };
+  const noticeStyle: TextStyle = { ...layout.subtitleStyle, weight: 'semibold' };
   const noticeLines = spec.notice === undefined ? [] : wrapText(spec.notice, noticeStyle, contentWidth);
   const noticeBaseline = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + noticeStyle.sizePx * 1.55;
   const headerBottom = noticeLines.length === 0
@@ -103,6 +106,8 @@ export function pageFrame(spec: PageSpec): PageFrame {
     contentWidth,
     headerBottom,
     footerHeight,
+    noticeLines: noticeLines.map((text, i) => ({ text, baselinePx: noticeBaseline + i * noticeStyle.sizePx * 1.35 })),
+    noticeStyle,
     render({ defs, layers, headerShiftPx = 0, footer }) {
       const out: string[] = [
         `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="${spec.id}-title ${spec.id}-desc">`,
@@ -119,7 +124,7 @@ export function pageFrame(spec: PageSpec): PageFrame {
         out.push(textElement(line, margin, subtitleBaseline + headerShiftPx + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
       });
       noticeLines.forEach((line, i) => {
-        out.push(textElement(line, margin, noticeBaseline + headerShiftPx + i * noticeStyle.sizePx * 1.35, noticeStyle, theme.text));
+        out.push(textElement(line, margin, noticeBaseline + i * noticeStyle.sizePx * 1.35 + headerShiftPx, noticeStyle, theme.text));
       });
 
       // Legend, then small print.

@@ -59,6 +59,8 @@ export interface SolarScene {
   readonly smallPrint: string;
   readonly project: (place: LonLat) => [number, number] | null;
   readonly frame: Frame;
+  /** The caution's lines as drawn in the header band: text, start and baseline (page px), type. */
+  readonly cautionLines: readonly { readonly text: string; readonly x: number; readonly y: number; readonly style: TextStyle }[];
   /** The header band's lower edge on the page (the caution lies above it). */
   readonly headerBottom: number;
   readonly basemapDetail: BasemapDetail;
@@ -306,6 +308,7 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     smallPrint: texts.smallPrint,
     project: (p) => projection([p[0], p[1]]),
     frame,
+    cautionLines: page.noticeLines.map((l) => ({ text: l.text, x: margin, y: l.baselinePx + slack, style: page.noticeStyle })),
     headerBottom: headerBottom + slack,
     basemapDetail: basemap.detail,
     view,

@@ -13,7 +13,7 @@ import { geoPath, type GeoProjection } from 'd3-geo';
 import type { MultiLineString, MultiPolygon, Position } from 'geojson';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { K_PENUMBRA, K_UMBRA } from '../eclipses/solar/constants.ts';
-import { centralLine, equalObscurationCurves, partialLimits, pathLimits, riseSetCurves, type TimedLine } from '../eclipses/solar/curves.ts';
+import { centralLine, partialLimits, pathLimits, riseSetCurves, type TimedLine } from '../eclipses/solar/curves.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { angularDistanceDeg } from '../sphere/circles.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail } from '../sphere/world.ts';
@@ -187,8 +187,8 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     return xy !== null && angularDistanceDeg(focus, p) < 150 && xy[0] > frame.x - reach && xy[0] < frame.x + frame.width + reach && xy[1] > frame.y - reach && xy[1] < frame.y + frame.height + reach;
   };
   const field = obscurationField(eclipse, step, wanted);
-  SOLAR_RAMP_LEVELS.forEach((level, k) => {
-    const region = fieldRegion(field, level === 0 ? SHADED_FLOOR : level);
+  const regions = SOLAR_RAMP_LEVELS.map((level) => fieldRegion(field, level === 0 ? SHADED_FLOOR : level));
+  regions.forEach((region, k) => {
     if (region.length > 0) base.push(`<path d="${path(sphericalRegion(region)) ?? ''}" fill="${theme.solar.ramp[k]}"/>`);
   });
   for (const polygon of pathPolygons(eclipse)) base.push(`<path d="${path(polygon) ?? ''}" fill="${theme.solar.path}"/>`);
@@ -196,10 +196,9 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
 
   // Lines.
   const multi = (lines: readonly (readonly LonLat[])[]): MultiLineString => ({ type: 'MultiLineString', coordinates: lines.map((l) => l.map(([lon, lat]) => [lon, lat])) });
-  const contours = SOLAR_RAMP_LEVELS.filter((level) => level > 0).map((level) => {
-    const curves = equalObscurationCurves(eclipse, level);
-    return { level, lines: [...curves.north, ...curves.south] };
-  });
+  // The contours are the steps' own edges, so that line and shading agree (curves.ts's equal-obscuration curves
+  // follow the obscuration at maximum, Sun up or not, and part from the shading where the Sun rises or sets).
+  const contours = SOLAR_RAMP_LEVELS.flatMap((level, k) => (level > 0 ? [{ level, lines: regionEdges(regions[k]!) }] : []));
   for (const c of contours) overlay.push(strokedPath(path(multi(c.lines)) ?? '', strokes.contour, unit));
   const partial = partialLimits(eclipse);
   const partialLines = [...partial.north, ...partial.south];
@@ -314,6 +313,31 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     view,
     labelPlates: { lines: linePlates, marks: marked.plates },
   };
+}
+
+/**
+ * A traced region's edges as lines: its rings, less the stretches along ±180° and the poles where the
+ * planar tracing closes them (no edge of the region lies there).
+ */
+function regionEdges(region: readonly Position[][][]): LonLat[][] {
+  const seam = (a: Position, b: Position) => (Math.abs(a[0]!) === 180 && a[0] === b[0]) || (Math.abs(a[1]!) === 90 && a[1] === b[1]);
+  const lines: LonLat[][] = [];
+  for (const polygon of region) {
+    for (const ring of polygon) {
+      let run: LonLat[] = [];
+      for (let k = 0; k < ring.length; k++) {
+        const p = ring[k]!;
+        const previous = ring[k - 1];
+        if (previous && seam(previous, p)) {
+          if (run.length >= 2) lines.push(run);
+          run = [];
+        }
+        run.push([p[0]!, p[1]!]);
+      }
+      if (run.length >= 2) lines.push(run);
+    }
+  }
+  return lines;
 }
 
 /** Points along a projected line (nulls off the page), spread evenly: the middle first, then outwards. */

@@ -17,7 +17,7 @@ import { centralLine, partialLimits, pathLimits, riseSetCurves, type TimedLine }
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { angularDistanceDeg } from '../sphere/circles.ts';
 import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail } from '../sphere/world.ts';
-import { fieldRegion, FIELD_STEPS_DEG, obscurationField } from '../visibility/solar/field.ts';
+import { fieldRegion, FIELD_STEPS_DEG, obscurationField } from './solarField.ts';
 import { pathPolygons } from '../visibility/solar/path.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { contourLabel, mapCaution, riseSetLabel, solarLegendWords, solarMapTexts } from '../words/solar/figures.ts';
@@ -40,6 +40,8 @@ const FIELD_CELL_PX = 12;
 /** Room around a path for a view fitted to it, as a share of its extent, and at least this many degrees. */
 const PATH_FIT_PAD = 0.12;
 const PATH_FIT_MIN_PAD_DEG = 3;
+/** How much of a flat world map's width a squarer page may crop (figures/map.ts does the same). */
+const WORLD_CROP = 0.45;
 
 export interface SolarSceneInput {
   readonly eclipse: SolarEclipse;
@@ -157,10 +159,21 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
   const clip = fitted.projection.clipExtent();
   const [[left, top], [right, bottom]] = geoPath(fitted.projection.clipExtent(null)).bounds(fitted.outline);
   fitted.projection.clipExtent(clip);
-  const slack = fitted.world || boxView ? Math.max(0, available.height - (bottom - top)) / 2 : 0;
+  // A flat world map on a page squarer than the world grows to the page's height and gives up its far
+  // sides (the meridians farthest from the eclipse), up to WORLD_CROP of its width, as the lunar map does.
+  const flatWorld = fitted.world && view.projection !== 'globe';
+  const naturalAspect = (right - left) / (bottom - top);
+  const grownWidth = flatWorld ? Math.min(available.height * naturalAspect, available.width * (1 + WORLD_CROP)) : right - left;
+  const grown = flatWorld && grownWidth > available.width * 1.01;
+  const mapHeight = grown ? grownWidth / naturalAspect : bottom - top;
+  const slack = fitted.world || boxView ? Math.max(0, available.height - mapHeight) / 2 : 0;
   const slackX = boxView ? Math.max(0, available.width - (right - left)) / 2 : 0;
   const frame: Frame = { x: available.x + slackX, y: available.y + slack, width: available.width - 2 * slackX, height: available.height - 2 * slack };
-  if (slack > 0 || slackX > 0) fitted = fitView(view, frame, focus);
+  if (grown) {
+    const wide: Frame = { x: frame.x - (grownWidth - frame.width) / 2, y: frame.y, width: grownWidth, height: frame.height };
+    fitted = fitView(view, wide, focus);
+    fitted.projection.clipExtent([[frame.x, frame.y], [frame.x + frame.width, frame.y + frame.height]]);
+  } else if (slack > 0 || slackX > 0) fitted = fitView(view, frame, focus);
   const projection: GeoProjection = fitted.projection;
   const path = geoPath(projection).digits(1);
   const ppd = pixelsPerDegree(fitted);
@@ -218,12 +231,13 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
   // Labels, each clear of every one placed before it.
   const taken: Box[] = [];
   const labels: string[] = [];
-  const labelStyle: TextStyle = { sizePx: layout.labelStyle.sizePx * 0.92, weight: 'semibold' };
+  const labelPlates: Box[] = [];
   const place = (text: string, x: number, y: number, style: TextStyle, anchor: 'start' | 'middle' | 'end' = 'middle'): boolean => {
     const plate = plateBox(text, x, y, style, unit, anchor);
     const inside = plate.left >= frame.x && plate.right <= frame.x + frame.width && plate.top >= frame.y && plate.bottom <= frame.y + frame.height;
     if (!inside || taken.some((t) => overlaps(t, plate))) return false;
     taken.push(plate);
+    labelPlates.push(plate);
     labels.push(labelElement(text, x, y, style, theme, unit, anchor));
     return true;
   };
@@ -247,6 +261,15 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
       + `<line x1="${n2(x - nx * half)}" y1="${n2(y - ny * half)}" x2="${n2(x + nx * half)}" y2="${n2(y + ny * half)}" stroke="${theme.solar.centralLine}" stroke-width="${n2(1.1 * unit)}"/>`);
     taken.push({ left: x - half, top: y - half, right: x + half, bottom: y + half });
   }
+  // Marked places before the line labels: a place's dot and words matter more than a tick's time or a contour's value.
+  const marks = input.marks ?? [];
+  const markHits = marks.length === 0 ? () => 0 : lineHitCounter([
+    ...partialLines.map((l) => l.map(onPage)),
+    ...limitLines.map((l) => l.map(onPage)),
+    ...central.map((l) => l.points.map(onPage)),
+    ...contours.flatMap((c) => c.lines.map((l) => l.map(onPage))),
+  ], frame, 6 * unit);
+  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, markHits);
   for (const t of ticks) {
     const text = timeOnDay(clock, t.utDays, eclipse.greatest.utDays);
     const [x, y] = t.xy;
@@ -286,18 +309,8 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     const spots = curves.flatMap((r) => spreadAlong(r.points.map(onPage), 4));
     spots.some((p) => place(text, p[0], p[1] + contourStyle.sizePx * 0.35, { ...contourStyle, weight: 'regular' }));
   }
-  overlay.push(...labels);
-  const linePlates = [...taken];
+  overlay.push(...labels, ...marked.elements);
 
-  const marks = input.marks ?? [];
-  const markHits = marks.length === 0 ? () => 0 : lineHitCounter([
-    ...partialLines.map((l) => l.map(onPage)),
-    ...limitLines.map((l) => l.map(onPage)),
-    ...central.map((l) => l.points.map(onPage)),
-    ...contours.flatMap((c) => c.lines.map((l) => l.map(onPage))),
-  ], frame, 6 * unit);
-  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, markHits);
-  overlay.push(...marked.elements);
 
   return {
     svg: page.render({ layers: [...base, ...overlay], headerShiftPx: slack, footer: { top: frame.y + frame.height + gap } }),
@@ -311,7 +324,7 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     headerBottom: headerBottom + slack,
     basemapDetail: basemap.detail,
     view,
-    labelPlates: { lines: linePlates, marks: marked.plates },
+    labelPlates: { lines: labelPlates, marks: marked.plates },
   };
 }
 

@@ -19,7 +19,7 @@ const KIND_TITLE: Record<SolarEclipseKind, string> = {
 };
 
 /** What the central phase is called along a path of this kind. */
-const CENTRAL_PHASE: Record<Exclude<SolarEclipseKind, 'partial'>, string> = { total: 'totality', annular: 'annularity', hybrid: 'the central phase' };
+const CENTRAL_PHASE: Record<Exclude<SolarEclipseKind, 'partial'>, string> = { total: 'totality', annular: 'annularity', hybrid: 'central phase' };
 
 /** "4 min 28 s", "52 s": a central phase's length, to the second. */
 export function minutesSeconds(seconds: number): string {

@@ -1,15 +1,15 @@
 /**
- * The greatest obscuration seen with the Sun up, sampled over a lon/lat grid
- * for a map to shade and contour (local/solar.ts `greatestObscurationSeen`
- * at each point). Two passes keep it quick: a grid twice as coarse first,
+ * A solar map's shading: the greatest obscuration seen with the Sun up
+ * (local/solar.ts `greatestObscurationSeen`), sampled over a lon/lat grid
+ * for the map to fill in steps and contour. Two passes keep it quick: a grid twice as coarse first,
  * then the fine points only near a coarse point that sees the eclipse (the
  * partial region is thousands of kilometres across, so a coarse cell's
  * neighbours catch every edge); every other fine point sees nothing.
  */
-import type { LonLat } from '../../ephemeris/earth.ts';
-import { greatestObscurationSeen } from '../../local/solar.ts';
-import type { SolarEclipse } from '../../eclipses/solar/types.ts';
-import { traceRegion, type PlaceGrid, type PlanarMultiPolygon } from '../../sphere/regions.ts';
+import type { LonLat } from '../ephemeris/earth.ts';
+import { greatestObscurationSeen } from '../local/solar.ts';
+import type { SolarEclipse } from '../eclipses/solar/types.ts';
+import { traceRegion, type PlaceGrid, type PlanarMultiPolygon } from '../sphere/regions.ts';
 
 export interface ObscurationField {
   /** The grid (rows from 90° N, columns from 180° W, both ends included): traceRegion reads its shape. */

@@ -8,7 +8,7 @@
  */
 import { flowRows, layoutFor, textElement, type Layout, type PageSize } from './draw.ts';
 import type { Theme } from './theme.ts';
-import { escapeXml, fitText, measureText, wrapText } from './typography.ts';
+import { escapeXml, fitText, measureText, wrapText, type TextStyle } from './typography.ts';
 
 /** A legend entry: a swatch drawn by the layer it explains (same stroke and fill specs), and its words. */
 export interface LegendEntry {
@@ -35,6 +35,12 @@ export interface PageSpec {
   readonly id: string;
   readonly title: string;
   readonly subtitle: string;
+  /**
+   * A notice printed in the header band under the subtitle, in full ink (a
+   * solar map's eye-safety caution): part of the band, so that no custom
+   * title or trimmed footer can drop it.
+   */
+  readonly notice?: string;
   /** The SVG's description, for screen readers. */
   readonly description: string;
   readonly smallPrint: string;
@@ -54,6 +60,9 @@ export interface PageFrame {
   readonly headerBottom: number;
   /** The footer's height (legend rows, a gap, small print): a body ends above it. */
   readonly footerHeight: number;
+  /** The notice's lines in the header band, with their baselines (before any header shift) and type. */
+  readonly noticeLines: readonly { readonly text: string; readonly baselinePx: number }[];
+  readonly noticeStyle: TextStyle;
   /**
    * The whole page as SVG: the body's `defs` and layers between the paper
    * and the header; `headerShiftPx` moves the header down (a map shorter
@@ -74,7 +83,12 @@ export function pageFrame(spec: PageSpec): PageFrame {
   const subtitleLines = wrapText(spec.subtitle, layout.subtitleStyle, contentWidth);
   const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
   const subtitleBaseline = titleBaseline + layout.subtitleStyle.sizePx * 1.65;
-  const headerBottom = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + spec.headerGapUnits * unit;
+  const noticeStyle: TextStyle = { ...layout.subtitleStyle, weight: 'semibold' };
+  const noticeLines = spec.notice === undefined ? [] : wrapText(spec.notice, noticeStyle, contentWidth);
+  const noticeBaseline = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + noticeStyle.sizePx * 1.55;
+  const headerBottom = noticeLines.length === 0
+    ? subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + spec.headerGapUnits * unit
+    : noticeBaseline + (noticeLines.length - 1) * noticeStyle.sizePx * 1.35 + spec.headerGapUnits * unit;
 
   const { swatchUnits, gapUnits, gapInWidth } = spec.legendSetting;
   const swatch = swatchUnits * unit;
@@ -92,6 +106,8 @@ export function pageFrame(spec: PageSpec): PageFrame {
     contentWidth,
     headerBottom,
     footerHeight,
+    noticeLines: noticeLines.map((text, i) => ({ text, baselinePx: noticeBaseline + i * noticeStyle.sizePx * 1.35 })),
+    noticeStyle,
     render({ defs, layers, headerShiftPx = 0, footer }) {
       const out: string[] = [
         `<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="${spec.id}-title ${spec.id}-desc">`,
@@ -106,6 +122,9 @@ export function pageFrame(spec: PageSpec): PageFrame {
       out.push(textElement(titleText, margin, titleBaseline + headerShiftPx, layout.titleStyle, theme.text));
       subtitleLines.forEach((line, i) => {
         out.push(textElement(line, margin, subtitleBaseline + headerShiftPx + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted));
+      });
+      noticeLines.forEach((line, i) => {
+        out.push(textElement(line, margin, noticeBaseline + i * noticeStyle.sizePx * 1.35 + headerShiftPx, noticeStyle, theme.text));
       });
 
       // Legend, then small print.

@@ -40,6 +40,8 @@ export interface MapStyle {
   readonly areaNames?: boolean;
   /** Marked towns' times on the map's clock (one clock per map, the default) or each on its own. */
   readonly markClock?: MarkClock;
+  /** A solar map: show the eclipse's path rather than `view` (the card preset's default; lunar maps ignore it). */
+  readonly fitPath?: boolean;
 }
 
 export type { MapMark } from './labels.ts';

@@ -48,7 +48,36 @@ export interface Theme {
   readonly trackCasing: string;
   /** The body's track across the sky, by phase. */
   readonly track: Readonly<Record<'outside' | 'penumbral' | 'partial' | 'total', string>>;
+  /** The solar map's colours. */
+  readonly solar: SolarMapColours;
 }
+
+/**
+ * A solar map: the partial region shaded by the greatest obscuration seen,
+ * one fill per step of SOLAR_RAMP_LEVELS (a stepped ramp away from the
+ * paper-like `zones['sees-none']`, in lightness, on land and at sea), the
+ * total/annular path above it, and the lines.
+ */
+export interface SolarMapColours {
+  /** Fills for obscuration above 0, 0.2, 0.4, 0.6, 0.8. */
+  readonly ramp: readonly [string, string, string, string, string];
+  /** The total/annular path. */
+  readonly path: string;
+  /** The central line (drawn on a casing of `centralCasing`, so that it shows on the path). */
+  readonly centralLine: string;
+  readonly centralCasing: string;
+  /** Northern and southern limits of the path. */
+  readonly pathLimit: string;
+  /** Limits of the partial eclipse. */
+  readonly partialLimit: string;
+  /** Curves of equal obscuration. */
+  readonly contour: string;
+  /** Where the eclipse begins or ends at sunrise or sunset. */
+  readonly riseSet: string;
+}
+
+/** The obscuration steps of the ramp (lower bounds): the partial region's fills and its labelled contours. */
+export const SOLAR_RAMP_LEVELS: readonly number[] = [0, 0.2, 0.4, 0.6, 0.8];
 
 export const THEMES: Readonly<Record<ThemeName, Theme>> = {
   light: {
@@ -74,6 +103,16 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     ground: '#d9d3c4',
     trackCasing: '#161a26',
     track: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#f0b429', total: '#d1495b' },
+    solar: {
+      ramp: ['#ecd3a0', '#dcaa6e', '#c8834f', '#a65a3a', '#7a3529'],
+      path: '#2b1838',
+      centralLine: '#fff4d6',
+      centralCasing: '#2b1838',
+      pathLimit: '#2b1838',
+      partialLimit: '#5a3a20',
+      contour: '#4a2a18',
+      riseSet: '#1f3b73',
+    },
   },
   dark: {
     name: 'dark',
@@ -98,6 +137,16 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     ground: '#252a33',
     trackCasing: '#05070c',
     track: { outside: '#8a93a3', penumbral: '#f3e3b0', partial: '#ffd166', total: '#ff7b7b' },
+    solar: {
+      ramp: ['#363a57', '#57506e', '#806479', '#ab7f77', '#d6ab78'],
+      path: '#f7eab8',
+      centralLine: '#0d111b',
+      centralCasing: '#f7eab8',
+      pathLimit: '#f7eab8',
+      partialLimit: '#e8d7b0',
+      contour: '#f1e6cf',
+      riseSet: '#8fc1ff',
+    },
   },
   print: {
     name: 'print',
@@ -122,5 +171,15 @@ export const THEMES: Readonly<Record<ThemeName, Theme>> = {
     ground: '#e6e6e6',
     trackCasing: '#000000',
     track: { outside: '#9a9a9a', penumbral: '#ffffff', partial: '#444444', total: '#000000' },
+    solar: {
+      ramp: ['#d8d8d8', '#bcbcbc', '#9f9f9f', '#818181', '#636363'],
+      path: '#1e1e1e',
+      centralLine: '#ffffff',
+      centralCasing: '#000000',
+      pathLimit: '#000000',
+      partialLimit: '#000000',
+      contour: '#111111',
+      riseSet: '#000000',
+    },
   },
 };

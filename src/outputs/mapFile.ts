@@ -13,6 +13,11 @@ import { visibilityOf, type Visibility } from '../visibility/lunar/visibility.ts
 import { eclipseCaption, type Caption } from './caption.ts';
 import { visibilityGeoJson } from './geojson.ts';
 import type { PlaceLabel } from './localFormats.ts';
+import type { SolarEclipse } from '../eclipses/solar/types.ts';
+import { composeSolarScene, type SolarScene } from '../figures/solarMap.ts';
+import { solarLocalCircumstances } from '../local/solar.ts';
+import { solarCaptionFile, solarMapCaptionWords, solarMarkWords } from '../words/solar/figures.ts';
+import { solarGeoJson } from './solarGeojson.ts';
 
 import type { MapFormat } from './formatNames.ts';
 export { MAP_FORMATS, type MapFormat } from './formatNames.ts';
@@ -59,7 +64,64 @@ export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: C
   return `${place.name} · ${phrase}`;
 }
 
-export async function renderMapFile(request: MapRequest): Promise<MapFile> {
+/** A solar eclipse's map: the same request, another eclipse. */
+export interface SolarMapRequest extends Omit<MapRequest, 'eclipse'> {
+  readonly eclipse: SolarEclipse;
+}
+
+export interface SolarMapFile {
+  readonly bytes: Uint8Array;
+  readonly scene?: SolarScene;
+  /** For pictures: the caption and alt text, each with the eye-safety caution, and the caption file's text. */
+  readonly caption?: { readonly caption: string; readonly altText: string };
+  readonly captionFile?: string;
+}
+
+export function renderMapFile(request: MapRequest): Promise<MapFile>;
+export function renderMapFile(request: SolarMapRequest): Promise<SolarMapFile>;
+export function renderMapFile(request: MapRequest | SolarMapRequest): Promise<MapFile | SolarMapFile>;
+export async function renderMapFile(request: MapRequest | SolarMapRequest): Promise<MapFile | SolarMapFile> {
+  if (request.eclipse.body === 'solar') return renderSolarMapFile(request as SolarMapRequest);
+  return renderLunarMapFile(request as MapRequest);
+}
+
+/**
+ * "Tromsø · total 11:05, 2 min 14 s", "Cairo · 63 % at 10:07", "Perth · not seen": what a place sees of a
+ * solar eclipse with the Sun up, at its best moment, on the map's clock (or, given none, its own).
+ */
+export function solarMarkLabel(eclipse: SolarEclipse, place: PlaceLabel, mapClock?: CivilClock): string {
+  const local = solarLocalCircumstances(eclipse, { lonDeg: place.lonDeg, latDeg: place.latDeg });
+  const clock = mapClock ?? civilClock(place.tz);
+  const when = (utDays: number) => (mapClock === undefined ? clock.stamp(utDays) : timeOnDay(clock, utDays, eclipse.greatest.utDays));
+  const maximum = local.events.find((e) => e.event === 'maximum');
+  if (local.kind === 'none' || !maximum) return solarMarkWords(place.name, { kind: 'none', share: 0 });
+  if (maximum.sunUp) {
+    return solarMarkWords(place.name, {
+      kind: local.kind, share: local.obscurationSeen, time: when(maximum.moment.utDays),
+      ...(local.kind !== 'partial' && local.centralSeconds !== undefined ? { centralSeconds: local.centralSeconds } : {}),
+    });
+  }
+  // The Sun is down at maximum: the best seen is as it rises into, or sets during, the eclipse.
+  const edge = local.events.find((e) => e.event === 'sunrise' && e.moment.ttDays > maximum.moment.ttDays)
+    ?? [...local.events].reverse().find((e) => e.event === 'sunset' && e.moment.ttDays < maximum.moment.ttDays);
+  if (!edge) return solarMarkWords(place.name, { kind: 'none', share: 0 });
+  return solarMarkWords(place.name, { kind: 'partial', share: local.obscurationSeen, time: when(edge.moment.utDays), at: edge.event as 'sunrise' | 'sunset' });
+}
+
+async function renderSolarMapFile(request: SolarMapRequest): Promise<SolarMapFile> {
+  const { eclipse, style } = request;
+  // GeoJSON is the eclipse's geometry (outputs/solarGeojson.ts), with the caution on the collection and each feature.
+  if (request.format === 'geojson') return { bytes: Buffer.from(`${JSON.stringify(solarGeoJson(eclipse))}\n`) };
+  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: solarMarkLabel(eclipse, p, style.markClock === 'town' ? undefined : style.clock) }));
+  const scene = composeSolarScene({ eclipse, style, size: request.size, generator: request.generator, marks });
+  const caption = solarMapCaptionWords(eclipse, style.clock, scene.subtitle);
+  const captionFile = solarCaptionFile(caption.caption, caption.altText);
+  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene, caption, captionFile };
+  const rasters = await rasteriseSet(scene.svg, [request.format], { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
+  return { bytes: rasters.files.get(request.format)!, scene, caption, captionFile };
+}
+
+async function renderLunarMapFile(request: MapRequest): Promise<MapFile> {
   // GeoJSON is geometry alone: no fonts, scene or caption are made for it.
   if (request.format === 'geojson') return { bytes: geoJsonBytes(visibilityOf(request.eclipse)) };
   const { files, scene, caption } = await renderMapFiles(request, [request.format]);

@@ -143,5 +143,7 @@ export function mapSettings(choices: MapChoices): MapSettings {
   // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
   const namesChoice = checkChoice('areaNames', choices.areaNames, AREA_NAMES_CHOICES);
   const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && choices.preset !== 'card' : namesChoice === 'on';
-  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+  // A card of a solar eclipse shows its path unless another view is asked for (a lunar map has no path and ignores this).
+  const fitPath = choices.preset === 'card' && choices.projection === 'equal-earth' && choices.bbox === undefined && choices.centre === undefined;
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}) }, size, dpi, marks };
 }

@@ -164,6 +164,16 @@ line('bare basemap 2400×1200 PNG, same data, drawn as before (librsvg, every po
 line('ratio map / bare basemap (target ≤ 1.0)', ratio(maps, 'world', 'basemap'));
 line('social card 1200×675 PNG', `${maps.card!.toFixed(0)} ms`);
 
+// A solar world map (every layer: the obscuration field, path, curves, labels) against the same bare basemap.
+const SOLAR_MAP_ROUNDS = 7;
+const [solarEclipse] = findSolarEclipses({ from: new Date('2024-04-08T00:00:00Z'), to: new Date('2024-04-09T00:00:00Z') });
+const solarMaps = await alternate({
+  basemap: () => librsvgPng(bareBasemapSvg()),
+  solar: () => renderMapFile({ ...mapRequest(2400, 1200), eclipse: solarEclipse! }),
+}, SOLAR_MAP_ROUNDS);
+line(`solar world map 2400×1200 PNG, all layers (2024-04-08; median of ${SOLAR_MAP_ROUNDS})`, `${solarMaps.solar!.toFixed(0)} ms`);
+line('ratio solar map / bare basemap (target ≤ 1.35)', ratio(solarMaps, 'solar', 'basemap'));
+
 // The levers one by one, each against what it replaced, on the same input.
 const svgOf = async (widthPx: number, heightPx: number) => Buffer.from((await renderMapFile({ ...mapRequest(widthPx, heightPx), format: 'svg' })).bytes).toString('utf8');
 const pictures = { world: await svgOf(2400, 1200), card: await svgOf(1200, 675), print: await svgOf(2126, 1318) };

@@ -95,3 +95,31 @@ for (const name of THEME_NAMES) {
     }
   });
 }
+
+/**
+ * A solar map's stepped ramp (no eclipse, then each obscuration step, then the path) must read as ordered steps in
+ * lightness for every simulated vision, at sea and under the land tint: adjacent steps at least this far apart
+ * (from memory: about 5 L* reads as a distinct tone at map scale; one more for the ramp's seven steps).
+ */
+const MIN_RAMP_STEP = 6;
+for (const name of THEME_NAMES) {
+  const theme = THEMES[name];
+  for (const [vision, matrix] of Object.entries(SIMULATIONS)) {
+    test(`${name} theme: the solar ramp steps by ≥ ${MIN_RAMP_STEP} L* one way for ${vision} vision, over sea and land`, () => {
+      const steps = [theme.zones['sees-none'], ...theme.solar.ramp, theme.solar.path];
+      for (const surface of ['sea', 'land'] as const) {
+        const values = steps.map((hex) => lightness(surface === 'sea' ? hex : overLand(theme, hex), matrix));
+        const direction = Math.sign(values[1]! - values[0]!);
+        for (let i = 1; i < values.length; i++) {
+          const step = (values[i]! - values[i - 1]!) * direction;
+          assert.ok(step >= MIN_RAMP_STEP, `${surface}: step ${i} ΔL* ${step.toFixed(1)}`);
+        }
+      }
+    });
+    test(`${name} theme: the solar central line stands out from the path it runs along for ${vision} vision`, () => {
+      const step = Math.abs(lightness(theme.solar.centralLine, matrix) - lightness(theme.solar.path, matrix));
+      // WCAG 2.x non-text contrast asks 3:1; in L* terms a gap of 40 is well beyond it (common practice).
+      assert.ok(step >= 40, `ΔL* ${step.toFixed(1)}`);
+    });
+  }
+}

@@ -17,6 +17,18 @@ import { withEclipseOptions } from '../declare.ts';
 import { eclipseChoiceFromFlags, mapChoicesFromFlags, type MapFlags, type Underlay } from '../readFlags.ts';
 import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
 import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
+import { deltaTModelOf } from '../../settings/catalogues.ts';
+import { eclipseNear } from '../../eclipses/kinds.ts';
+import type { SolarEclipse } from '../../eclipses/solar/types.ts';
+
+/**
+ * The solar eclipse a date names, if it names one: the eclipse of either kind on or nearest the date
+ * (eclipses/kinds.ts; a date near both kinds is an input error naming both), when that one is solar.
+ */
+function solarEclipseNear(date: Date, choice: EclipseChoice): SolarEclipse | undefined {
+  const found = eclipseNear(date, 7.5, { deltaT: deltaTModelOf(choice), convention: choice.convention });
+  return found?.body === 'solar' ? found : undefined;
+}
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
 export function withSizeOptions(command: Command, defaultSize: string): Command {
@@ -124,12 +136,25 @@ export async function runMap(whenText: string | undefined, options: MapFlags, co
   const choices = mapChoicesFromFlags(options, style?.map);
   const settings = mapSettings(choices);
   const when = parseWhen(whenText);
-  const eclipse = chooseEclipse(when, eclipseChoiceFromFlags(options, style?.eclipse), context.now());
-  const { path, format } = parseOutput(options, `${eclipse.id}-${eclipse.kind}${viewStem(settings.style.view)}`, MAP_FORMATS);
+  const eclipseChoice = eclipseChoiceFromFlags(options, style?.eclipse);
+  // A date names the eclipse it falls on or near, of either kind (near both: an input error naming both); `next` stays lunar.
+  const solar = when.kind === 'date' ? solarEclipseNear(when.date, eclipseChoice) : undefined;
+  const eclipse = solar ?? chooseEclipse(when, eclipseChoice, context.now());
+  // A solar card shows the path by default: its file says so.
+  const stem = `${eclipse.id}-${eclipse.kind}${solar && settings.style.fitPath ? '-path' : viewStem(settings.style.view)}`;
+  const { path, format } = parseOutput(options, stem, MAP_FORMATS);
   for (const notice of placeNotices('--mark', choices.marks)) context.stderr(`${notice}\n`);
   // The drawing code (fonts, world data, sharp) loads when a map is drawn, not with the command line.
   const [{ renderMapFile }, { captionText }] = await Promise.all([import('../../outputs/mapFile.ts'), import('../../outputs/caption.ts')]);
-  const file = await renderMapFile({ eclipse, ...settings, format, generator: `umbracast ${toolVersion()}` });
+  const generator = `umbracast ${toolVersion()}`;
+  if (eclipse.body === 'solar') {
+    const file = await renderMapFile({ eclipse, ...settings, format, generator });
+    await writeFileAtomic(path, file.bytes);
+    // Every picture gets its caption beside it, the long eye-safety caution in it.
+    if (file.captionFile !== undefined) await writeFileAtomic(captionPathFor(path), file.captionFile);
+    return path;
+  }
+  const file = await renderMapFile({ eclipse, ...settings, format, generator });
   await writeFileAtomic(path, file.bytes);
   // Every picture gets its caption beside it.
   if (file.caption) await writeFileAtomic(captionPathFor(path), captionText(file.caption));

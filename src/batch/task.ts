@@ -3,9 +3,9 @@
  * asks for, each written atomically (into folders runBatch has made); returns
  * what it wrote, with sizes and hashes. Dispatches on the eclipse's body:
  * a lunar eclipse gets maps, caption, thumbnail, local tables and sky
- * figures; a solar eclipse, until maps draw solar eclipses, its caption
- * (with the eye-safety caution), its GeoJSON geometry and the local tables
- * of the style's places (each with the caution).
+ * figures; a solar eclipse its maps (the caution in the header band) and
+ * thumbnail, its caption (with the eye-safety caution), its GeoJSON geometry
+ * and the local tables of the style's places (each with the caution).
  */
 import sharp from 'sharp';
 import { THEMES } from '../figures/theme.ts';
@@ -18,7 +18,7 @@ import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solar
 import { civilClock } from '../ephemeris/civilTime.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { renderMapFiles } from '../outputs/mapFile.ts';
+import { renderMapFile, renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { choosePlace } from '../settings/choose.ts';
 import { mapSettings } from '../settings/mapSettings.ts';
@@ -53,10 +53,22 @@ export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
   return { files: written, seconds: (performance.now() - started) / 1000 };
 }
 
-/** A solar eclipse: caption and alt text, the geometry as GeoJSON, the places' local tables; every one with the caution. */
+/** A solar eclipse: its maps and thumbnail, caption and alt text, the geometry as GeoJSON, the places' local tables; every one with the caution. */
 async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: string, write: Write): Promise<void> {
   const { eclipse, style, generator } = input;
   const clock = civilClock(style.tz);
+  const settings = mapSettings(mapChoicesOf(style));
+  // The style's pictures, each drawn with the caution in its header band; the geometry as GeoJSON always.
+  let png: Uint8Array | undefined;
+  for (const format of style.formats.filter((f) => f !== 'geojson')) {
+    const file = await renderMapFile({ eclipse, ...settings, format, generator });
+    await write(`${stem}.${format}`, 'map', file.bytes);
+    if (format === 'png') png = file.bytes;
+  }
+  if (style.formats.length > 0 && !style.formats.every((f) => f === 'geojson')) {
+    png ??= (await renderMapFile({ eclipse, ...settings, format: 'png', generator })).bytes;
+    await write(`thumbs/${stem}.png`, 'thumbnail', await sharp(png).resize({ width: THUMBNAIL_WIDTH_PX }).png().toBuffer());
+  }
   await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock })));
   await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse))}\n`);
   const slugs = stylePlaces(style.places).map((p) => p.slug);

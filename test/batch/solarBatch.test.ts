@@ -7,6 +7,7 @@
  * lunar only) stays up to date: only the solar eclipses are added.
  */
 import assert from 'node:assert/strict';
+import sharp from 'sharp';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -79,12 +80,15 @@ test('a batch of both bodies: the caution in every solar output and on its card,
   const solar = manifest.eclipses[0]!;
   const lunar = manifest.eclipses[1]!;
   assert.equal(solar.body === 'solar' && solar.record.body, 'solar');
-  // Until maps draw solar eclipses, a solar task writes its caption, its GeoJSON and the places' local tables.
+  // A solar task writes its map and thumbnail, its caption, its GeoJSON and the places' local tables.
   assert.deepEqual(solar.files.map((f) => f.path).sort(), [
     '2026-02-17-annular-windhoek.csv', '2026-02-17-annular-windhoek.ics', '2026-02-17-annular-windhoek.json', '2026-02-17-annular-windhoek.md',
-    '2026-02-17-annular-windhoek.txt', '2026-02-17-annular.geojson', '2026-02-17-annular.txt',
+    '2026-02-17-annular-windhoek.txt', '2026-02-17-annular.geojson', '2026-02-17-annular.png', '2026-02-17-annular.txt',
+    'thumbs/2026-02-17-annular.png',
   ]);
-  for (const file of solar.files) {
+  // The map's XMP description carries the caution too (the header band's is checked on the SVG in test/figures).
+  assert.match(((await sharp(readFileSync(join(out, '2026-02-17-annular.png'))).metadata()).xmp ?? Buffer.alloc(0)).toString('utf8'), /ISO 12312-2/);
+  for (const file of solar.files.filter((f) => !f.path.endsWith('.png'))) {
     const text = readFileSync(join(out, file.path), 'utf8');
     assert.match(text, CAUTION, `${file.path}: the caution`);
     assert.doesNotMatch(text, NAKED_EYE, `${file.path}: no naked-eye line`);

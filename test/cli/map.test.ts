@@ -65,7 +65,7 @@ test('map writes the file it names on stdout; a date in the eclipse week finds i
 
 test('map --format geojson writes an RFC 7946 FeatureCollection', async () => {
   const path = join(dir, 'zones.geojson');
-  const { code } = await run(['map', 'next', '-o', path]);
+  const { code } = await run(['map', 'next', '--body', 'lunar', '-o', path]);
   assert.equal(code, 0);
   assert.ok(existsSync(path));
   const collection = JSON.parse(await import('node:fs').then((fs) => fs.readFileSync(path, 'utf8')));

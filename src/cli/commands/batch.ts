@@ -56,7 +56,7 @@ export function bodiesFrom(text: string | undefined, style: HouseStyle): Eclipse
 export function registerBatch(program: Command, context: CommandContext): void {
   const command = program
     .command('batch')
-    .description('render every lunar eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable (solar eclipses: not yet)')
+    .description('render every eclipse of a range in a house style: maps, captions, local tables, a contact sheet; resumable')
     .option('--from <date>', 'start: YYYY, YYYY-MM or YYYY-MM-DD (default today, UTC)')
     .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
     .option('--kind <kinds>', `only these kinds, comma-separated: lunar ${KINDS_OF_BODY.lunar.join(',')}; solar ${KINDS_OF_BODY.solar.join(',')}`)

@@ -13,22 +13,11 @@ import { EXTENSION_FORMATS, MAP_FORMATS, type MapFormat } from '../../outputs/fo
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
-import { withEclipseOptions } from '../declare.ts';
-import { eclipseChoiceFromFlags, mapChoicesFromFlags, type MapFlags, type Underlay } from '../readFlags.ts';
+import { withBodyOptions, withEclipseOptions } from '../declare.ts';
+import { bodyFromFlags, eclipseChoiceFromFlags, mapChoicesFromFlags, type BodyFlags, type MapFlags, type Underlay } from '../readFlags.ts';
 import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
 import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
-import { deltaTModelOf } from '../../settings/catalogues.ts';
-import { eclipseNear } from '../../eclipses/kinds.ts';
-import type { SolarEclipse } from '../../eclipses/solar/types.ts';
 
-/**
- * The solar eclipse a date names, if it names one: the eclipse of either kind on or nearest the date
- * (eclipses/kinds.ts; a date near both kinds is an input error naming both), when that one is solar.
- */
-function solarEclipseNear(date: Date, choice: EclipseChoice): SolarEclipse | undefined {
-  const found = eclipseNear(date, 7.5, { deltaT: deltaTModelOf(choice), convention: choice.convention });
-  return found?.body === 'solar' ? found : undefined;
-}
 
 /** --size, --preset, --width-mm and --dpi, as every picture command declares them. */
 export function withSizeOptions(command: Command, defaultSize: string): Command {
@@ -53,6 +42,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--title <text>', 'replace the generated title')
     .option('--theme <name>', `${THEME_NAMES.join(', ')}`, 'light');
   withSizeOptions(command, `${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx}`);
+  withBodyOptions(command, false);
   withEclipseOptions(command
     .option('-o, --output <file>', 'output file; its extension picks the format (default out/<id>-<kind>.png for the world map, the view added for others: out/<id>-<kind>-globe.png, out/<id>-<kind>-region-20w30n45e72n.png)')
     .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`))
@@ -60,7 +50,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
     .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
-    .action(async (whenText: string | undefined, options: MapFlags, self: Command) => {
+    .action(async (whenText: string | undefined, options: MapFlags & BodyFlags, self: Command) => {
       let style: StyleUnderlay | undefined;
       if (options.style !== undefined) {
         const [{ loadStyle }, { mapChoicesOf, eclipseChoiceOf }] = await Promise.all([import('../../batch/style.ts'), import('../../batch/styleSettings.ts')]);
@@ -132,14 +122,14 @@ interface StyleUnderlay {
 }
 
 /** Parse everything first, so that bad input never leaves a file behind; then render and write atomically. */
-export async function runMap(whenText: string | undefined, options: MapFlags, context: CommandContext, style?: StyleUnderlay): Promise<string> {
+export async function runMap(whenText: string | undefined, options: MapFlags & BodyFlags, context: CommandContext, style?: StyleUnderlay): Promise<string> {
   const choices = mapChoicesFromFlags(options, style?.map);
   const settings = mapSettings(choices);
   const when = parseWhen(whenText);
   const eclipseChoice = eclipseChoiceFromFlags(options, style?.eclipse);
-  // A date names the eclipse it falls on or near, of either kind (near both: an input error naming both); `next` stays lunar.
-  const solar = when.kind === 'date' ? solarEclipseNear(when.date, eclipseChoice) : undefined;
-  const eclipse = solar ?? chooseEclipse(when, eclipseChoice, context.now());
+  // --body (default all): a date names the eclipse it falls on or near, of either kind (near both: an input error naming both).
+  const eclipse = chooseEclipse(when, eclipseChoice, context.now(), bodyFromFlags(options));
+  const solar = eclipse.body === 'solar';
   // A solar card shows the path by default: its file says so.
   const stem = `${eclipse.id}-${eclipse.kind}${solar && settings.style.fitPath ? '-path' : viewStem(settings.style.view)}`;
   const { path, format } = parseOutput(options, stem, MAP_FORMATS);

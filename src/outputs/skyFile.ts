@@ -9,7 +9,7 @@ import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../local/lunar.ts';
 import { skyCaption } from '../words/lunar/figures.ts';
 import type { SkyFormat } from './formatNames.ts';
-import type { LocalReport } from './localFormats.ts';
+import { wordsOf, type LocalReport } from './localFormats.ts';
 
 /** The figure shows an hour either side of the eclipse. */
 const MARGIN_DAYS = 1 / 24;
@@ -26,7 +26,7 @@ export interface SkyRequest {
 
 /** The caption file published beside a sky figure: its title and summary, then alt text (words/lunar/figures.ts). */
 export function skyCaptionText(title: string, report: LocalReport): string {
-  return skyCaption(title, report.summary, report.place.name);
+  return skyCaption(title, report.summary, report.place.name, wordsOf(report).figures);
 }
 
 export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
@@ -50,6 +50,7 @@ export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8
     size: request.size,
     generator: request.generator,
     credits: report.place.name.includes('°') ? '' : `${GAZETTEER_CREDIT}.`,
+    words: wordsOf(report).figures,
     ...(request.title !== undefined ? { title: request.title } : {}),
   });
   const caption = skyCaptionText(scene.title, report);

@@ -9,6 +9,7 @@
  */
 import isoCountries from 'i18n-iso-countries';
 import type { EclipseBody } from '../eclipses/common/record.ts';
+import { CLOCK_ENGLISH, type ClockWords } from '../ephemeris/civilTime.ts';
 
 /** Shared words, one catalogue per language. */
 export interface CommonWords {
@@ -27,7 +28,16 @@ export interface CommonWords {
   readonly hemispheres: { readonly north: string; readonly south: string; readonly east: string; readonly west: string };
   /** Country names as prose writes them, by ISO 3166-1 alpha-2 code, where they differ from the language's plain list name. */
   readonly countryNames: Readonly<Record<string, string>>;
+  /** Continents as captions name them, by countries-list's English name ("Africa", "North America"…). */
+  readonly continents: Readonly<Record<ContinentName, string>>;
+  /** Continent and ocean names written on world maps, by the map's English label ("AFRICA", "Pacific Ocean"…). */
+  readonly mapAreas: Readonly<Record<MapAreaName, string>>;
+  /** The clock's words: dates through Intl in this language, day marks, changes of offset. */
+  readonly clock: ClockWords;
 }
+
+export type ContinentName = 'Africa' | 'Antarctica' | 'Asia' | 'Europe' | 'North America' | 'Oceania' | 'South America';
+export type MapAreaName = 'AFRICA' | 'EUROPE' | 'ASIA' | 'NORTH AMERICA' | 'SOUTH AMERICA' | 'AUSTRALIA' | 'ANTARCTICA' | 'Pacific Ocean' | 'Atlantic Ocean' | 'Indian Ocean';
 
 export const ENGLISH: CommonWords = {
   locale: 'en',
@@ -73,6 +83,14 @@ export const ENGLISH: CommonWords = {
     PS: 'Palestine',
     TR: 'Turkey',
   },
+  continents: {
+    Africa: 'Africa', Antarctica: 'Antarctica', Asia: 'Asia', Europe: 'Europe', 'North America': 'North America', Oceania: 'Oceania', 'South America': 'South America',
+  },
+  mapAreas: {
+    AFRICA: 'AFRICA', EUROPE: 'EUROPE', ASIA: 'ASIA', 'NORTH AMERICA': 'NORTH AMERICA', 'SOUTH AMERICA': 'SOUTH AMERICA', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTARCTICA',
+    'Pacific Ocean': 'Pacific Ocean', 'Atlantic Ocean': 'Atlantic Ocean', 'Indian Ocean': 'Indian Ocean',
+  },
+  clock: CLOCK_ENGLISH,
 };
 
 /**
@@ -113,6 +131,31 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
     integerFormatsByLocale.set(locale, formats);
   }
   return formats;
+}
+
+/**
+ * Decimal numbers inside a text written with a full stop ("1.234", "69.2 s")
+ * in the language's decimal sign, as Intl.NumberFormat writes it ("1,234" in
+ * Spanish): only a point between two digits changes, never a full stop.
+ */
+export function decimalIn(text: string, words: CommonWords = ENGLISH): string {
+  const sign = decimalSign(words.locale);
+  return sign === '.' ? text : text.replace(/(\d)\.(\d)/g, `$1${sign}$2`);
+}
+
+/** A number to a fixed count of decimals, in the language's decimal sign. */
+export function fixedIn(value: number, digits: number, words: CommonWords = ENGLISH): string {
+  return decimalIn(value.toFixed(digits), words);
+}
+
+const decimalSigns = new Map<string, string>();
+function decimalSign(locale: string): string {
+  let sign = decimalSigns.get(locale);
+  if (sign === undefined) {
+    sign = new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value ?? '.';
+    decimalSigns.set(locale, sign);
+  }
+  return sign;
 }
 
 /** "A", "A and B", "A, B and C" (no serial comma: the house style). */

@@ -16,6 +16,7 @@ import type { CivilClock } from '../../ephemeris/civilTime.ts';
 import type { Moment } from '../../ephemeris/time.ts';
 import { localView, phaseAt, type EclipsePhase, type LocalCircumstances, type LocalEvent, type LocalEventName, type LocalView, type SkyClass } from '../../local/lunar.ts';
 import { ENGLISH, meantOnlyFor, type CommonWords, type TextFor } from '../common.ts';
+import { LUNAR_FIGURES_ENGLISH, type LunarFigureWords } from './figures.ts';
 
 /** The three stretches of a lunar eclipse a calendar can hold. */
 export type LunarPhaseKey = 'penumbral' | 'partial' | 'total';
@@ -27,6 +28,8 @@ export type ContinentShareWord = 'whole' | 'most' | 'parts';
 export interface LunarWords {
   readonly body: 'lunar';
   readonly common: CommonWords;
+  /** The map's and the sky figure's words (figures.ts), in the same language. */
+  readonly figures: LunarFigureWords;
   /** "Total", as a title starts. */
   readonly kindTitle: Readonly<Record<EclipseKind, string>>;
   /** "total", inside a sentence or a table. */
@@ -140,6 +143,7 @@ const countedEnglish = (count: number, one: string, other: string) => `${count} 
 export const LUNAR_ENGLISH: LunarWords = {
   body: 'lunar',
   common: ENGLISH,
+  figures: LUNAR_FIGURES_ENGLISH,
   kindTitle: { total: 'Total', partial: 'Partial', penumbral: 'Penumbral' },
   kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },

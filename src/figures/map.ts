@@ -175,8 +175,8 @@ export function composeScene(input: SceneInput): Scene {
   const { unit, margin } = layout;
   const H = size.heightPx;
 
-  const deltaTLabel = `${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source})`;
   const language = style.words ?? LUNAR_FIGURES_ENGLISH;
+  const deltaTLabel = `${eclipse.deltaT.seconds.toFixed(1)} s (${language.common.deltaTSources[eclipse.deltaT.source]})`;
   const texts = sceneTexts(eclipse, clock, deltaTLabel, input.generator, style.title, language);
 
   // Legend entries, each swatch drawn with its layer's own spec.

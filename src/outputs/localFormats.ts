@@ -119,7 +119,7 @@ function notes(report: LocalReport): string[] {
   const w = words.local;
   return [
     w.timeNote(zone, julianDateOfIsoDate(e.id) ? w.julianNote : ''),
-    decimalIn(w.shadowNote(words.convention[e.convention], e.deltaT.seconds, e.deltaT.source, words.common.predictions), words.common),
+    decimalIn(w.shadowNote(words.convention[e.convention], e.deltaT.seconds, words.common.deltaTSources[e.deltaT.source], words.common.predictions), words.common),
   ];
 }
 

@@ -10,6 +10,7 @@
 import isoCountries from 'i18n-iso-countries';
 import type { EclipseBody } from '../eclipses/common/record.ts';
 import { CLOCK_ENGLISH, type ClockWords } from '../ephemeris/civilTime.ts';
+import type { DeltaTSource } from '../ephemeris/deltaT.ts';
 
 /** Shared words, one catalogue per language. */
 export interface CommonWords {
@@ -24,6 +25,10 @@ export interface CommonWords {
   };
   /** "A, B and C". */
   readonly and: string;
+  /** The word for "and" before a given last item, where the language changes it (Spanish "y" → "e" before an i sound). */
+  readonly andBefore?: (item: string) => string;
+  /** A colon and a semicolon with the spaces the language sets around them (French: a no-break space before). */
+  readonly punctuation: { readonly colon: string; readonly semicolon: string };
   /** Hemisphere letters after a latitude and a longitude: "35.28°S, 149.13°E". */
   readonly hemispheres: { readonly north: string; readonly south: string; readonly east: string; readonly west: string };
   /** Country names as prose writes them, by ISO 3166-1 alpha-2 code, where they differ from the language's plain list name. */
@@ -32,6 +37,8 @@ export interface CommonWords {
   readonly continents: Readonly<Record<ContinentName, string>>;
   /** Continent and ocean names written on world maps, by the map's English label ("AFRICA", "Pacific Ocean"…). */
   readonly mapAreas: Readonly<Record<MapAreaName, string>>;
+  /** Where a ΔT comes from, as the small print says it ("observed", "forecast"…). */
+  readonly deltaTSources: Readonly<Record<DeltaTSource, string>>;
   /** The clock's words: dates through Intl in this language, day marks, changes of offset. */
   readonly clock: ClockWords;
 }
@@ -47,6 +54,7 @@ export const ENGLISH: CommonWords = {
     compact: { hour: 'h', minute: 'm' },
   },
   and: 'and',
+  punctuation: { colon: ': ', semicolon: '; ' },
   hemispheres: { north: 'N', south: 'S', east: 'E', west: 'W' },
   // English prose (common practice in news style): short forms, and "the" where the name takes it.
   countryNames: {
@@ -90,6 +98,7 @@ export const ENGLISH: CommonWords = {
     AFRICA: 'AFRICA', EUROPE: 'EUROPE', ASIA: 'ASIA', 'NORTH AMERICA': 'NORTH AMERICA', 'SOUTH AMERICA': 'SOUTH AMERICA', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTARCTICA',
     'Pacific Ocean': 'Pacific Ocean', 'Atlantic Ocean': 'Atlantic Ocean', 'Indian Ocean': 'Indian Ocean',
   },
+  deltaTSources: { observed: 'observed', forecast: 'forecast', historical: 'historical', 'long-term': 'long-term', user: 'user' },
   clock: CLOCK_ENGLISH,
 };
 
@@ -161,7 +170,8 @@ function decimalSign(locale: string): string {
 /** "A", "A and B", "A, B and C" (no serial comma: the house style). */
 export function listWords(items: readonly string[], words: CommonWords = ENGLISH): string {
   if (items.length <= 1) return items.join('');
-  return `${items.slice(0, -1).join(', ')} ${words.and} ${items[items.length - 1]}`;
+  const last = items[items.length - 1]!;
+  return `${items.slice(0, -1).join(', ')} ${words.andBefore?.(last) ?? words.and} ${last}`;
 }
 
 declare const meantFor: unique symbol;
@@ -181,7 +191,7 @@ export function meantOnlyFor<B extends EclipseBody>(_body: B, text: string): Tex
 /** A place's latitude and longitude to 0.01°, hemisphere letters after: "35.28°S, 149.13°E". */
 export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWords = ENGLISH): string {
   const h = words.hemispheres;
-  return `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? h.north : h.south}, ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? h.east : h.west}`;
+  return `${fixedIn(Math.abs(latDeg), 2, words)}°${latDeg >= 0 ? h.north : h.south}, ${fixedIn(Math.abs(lonDeg), 2, words)}°${lonDeg >= 0 ? h.east : h.west}`;
 }
 
 /**

@@ -4,13 +4,15 @@ import { civilClock } from '../../ephemeris/civilTime.ts';
 import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { withEclipseOptions } from '../declare.ts';
+import { withEclipseOptions, withLanguageOption } from '../declare.ts';
+import { chooseLanguage } from '../../settings/language.ts';
 import { parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { eclipseChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 
 interface CaptionOptions extends PlaceFlags, EclipseFlags {
   /** The caption's zone (default UTC), which also serves the place's own summary. */
   tz: string;
+  lang?: string;
 }
 
 export function registerCaption(program: Command, context: CommandContext): void {
@@ -21,9 +23,10 @@ export function registerCaption(program: Command, context: CommandContext): void
     .option('--tz <zone>', 'give times in this IANA time zone', 'UTC')
     .option('--place <name>', 'add what readers in this place will see')
     .option('--at <LAT,LON>', 'add what is seen from this point');
-  withEclipseOptions(command)
+  withLanguageOption(withEclipseOptions(command))
     .action(async (whenText: string | undefined, options: CaptionOptions) => {
-      const clock = civilClock(options.tz.trim(), 'zone');
+      const language = chooseLanguage(options.lang, flagOf('lang'));
+      const clock = civilClock(options.tz.trim(), 'zone', language.common.clock);
       // The place's own summary uses the caption's zone, so that one text reads in one time.
       const chosen = choosePlace(placeChoiceFromFlags(options), false, 'place', flagOf('place'));
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
@@ -34,7 +37,7 @@ export function registerCaption(program: Command, context: CommandContext): void
         import('../../visibility/lunar/visibility.ts'),
         import('../../outputs/localFormats.ts'),
       ]);
-      const extra = chosen ? localReport(eclipse, chosen).summary : undefined;
-      context.stdout(captionText(eclipseCaption(eclipse, visibilityOf(eclipse), clock, extra)));
+      const extra = chosen ? localReport(eclipse, chosen, language.lunar).summary : undefined;
+      context.stdout(captionText(eclipseCaption(eclipse, visibilityOf(eclipse), clock, extra, language.lunar), language.lunar));
     });
 }

@@ -5,13 +5,15 @@ import { LOCAL_FORMATS, localCsv, localIcs, localJson, localMarkdown, localRepor
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/choose.ts';
-import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
+import { chooseLanguage, type Language } from '../../settings/language.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { eclipseChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 
 interface LocalOptions extends PlaceFlags, EclipseFlags {
   format: string;
+  lang?: string;
 }
 
 export function registerLocal(program: Command, context: CommandContext): void {
@@ -19,18 +21,19 @@ export function registerLocal(program: Command, context: CommandContext): void {
     .command('local')
     .description('local circumstances for one place: contacts in local time, Moon altitude and azimuth, the sky, a summary')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
-  withEclipseOptions(withPlaceOptions(command).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
+  withLanguageOption(withEclipseOptions(withPlaceOptions(command).option('--format <name>', LOCAL_FORMATS.join(', '), 'table')))
     .action((whenText: string | undefined, options: LocalOptions) => {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
+      const language = chooseLanguage(options.lang, flagOf('lang'));
       const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);
-      context.stdout(renderLocal(eclipse, chosen, format));
+      context.stdout(renderLocal(eclipse, chosen, format, language));
     });
 }
 
-function renderLocal(eclipse: LunarEclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number]): string {
-  const report = localReport(eclipse, chosen);
+function renderLocal(eclipse: LunarEclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number], language: Language): string {
+  const report = localReport(eclipse, chosen, language.lunar);
   switch (format) {
     case 'table': return localTable(report);
     case 'markdown': return localMarkdown(report);

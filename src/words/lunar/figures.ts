@@ -57,6 +57,8 @@ export interface LunarFigureWords {
     readonly town: string;
     readonly codes: (codes: string) => string;
   };
+  /** A marked town's label: "Adelaide · greatest 17:29", "· rises 19:14", "· not seen". */
+  readonly mark: { readonly greatest: string; readonly rises: string; readonly sets: string; readonly notSeen: string };
   /** What happens at a stage: "as totality begins"; P1/P4 differ for a penumbral eclipse. */
   readonly stage: Readonly<Record<StageName, string>> & { readonly P1Penumbral: string; readonly P4Penumbral: string };
   readonly boundaryLabel: (rising: boolean, stage: string, time: string) => string;
@@ -111,6 +113,7 @@ export const LUNAR_FIGURES_ENGLISH: LunarFigureWords = {
     town: 'marked town: the key phase',
     codes: (codes) => `small tags on the lines: ${codes}`,
   },
+  mark: { greatest: 'greatest', rises: 'rises', sets: 'sets', notSeen: 'not seen' },
   stage: {
     P1: 'as the faint outer shadow begins',
     P1Penumbral: 'as the eclipse begins',
@@ -244,7 +247,7 @@ export function skySmallPrint(eclipse: LunarEclipse, zoneName: string, generator
   const s = words.sky;
   return [
     s.localTime(zoneName),
-    decimalIn(s.shadow(conventionWord(eclipse), eclipse.deltaT.seconds, eclipse.deltaT.source), words.common),
+    decimalIn(s.shadow(conventionWord(eclipse), eclipse.deltaT.seconds, words.common.deltaTSources[eclipse.deltaT.source]), words.common),
     predictions(words),
     s.credits(credits.places, credits.font, generator),
   ].join(' ');

@@ -76,7 +76,8 @@ export interface LunarWords {
   };
   readonly summary: {
     readonly compass: readonly string[];
-    readonly height: (altitudeDeg: number) => string;
+    /** Where the Moon stands: "low in the east" (`direction`: a compass word). */
+    readonly position: (altitudeDeg: number, direction: string) => string;
     readonly aboveHorizon: (degrees: number) => string;
     readonly phaseState: Readonly<Record<EclipsePhase, string>>;
     readonly contacts: Readonly<Partial<Record<LocalEventName, string>>>;
@@ -194,7 +195,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   },
   summary: {
     compass: ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'],
-    height: (altitudeDeg) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the'),
+    position: (altitudeDeg, direction) => `${altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the'} ${direction}`,
     aboveHorizon: (degrees) => `${degrees}° above the horizon`,
     phaseState: {
       before: 'before the eclipse begins',
@@ -312,11 +313,12 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   // At a pole every direction is south (or north): give the height only.
   const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
   const where = (e: LocalEvent) =>
-    atPole ? s.aboveHorizon(Math.max(0, Math.round(e.moonAltitudeDeg))) : `${s.height(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg, words)}`;
+    atPole ? s.aboveHorizon(Math.max(0, Math.round(e.moonAltitudeDeg))) : s.position(e.moonAltitudeDeg, compassWord(e.moonAzimuthDeg, words));
   const view = localView(local);
   const penumbral = eclipse.kind === 'penumbral';
   const daylight = events.some((e) => e.moonUp && e.sky === 'day' && e.event !== 'moonrise' && e.event !== 'moonset') ? s.daylight : '';
   const from = s.from(placeName);
+  const { colon, semicolon } = words.common.punctuation;
   if (view.whole === 'none') return `${from} ${s.notSeen}`;
 
   const greatest = events.find((e) => e.event === 'greatest')!;
@@ -340,7 +342,7 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
     const span = range(c[startName]!, c[endName]!);
     clauses.push(s.mainSpan(penumbral, span, totality, where(greatest)));
     clauses.push(...after.map((e) => moves(e, t(e.moment))));
-    return `${from} ${inViewWords(eclipse.kind, view, words)}: ${clauses.join('; ')}.${daylight}`;
+    return `${from} ${inViewWords(eclipse.kind, view, words)}${colon}${clauses.join(semicolon)}.${daylight}`;
   }
   // Otherwise tell it in order: the contacts seen, greatest if seen, and every rise and set.
   const contactWords = penumbral ? s.penumbralContacts : s.contacts;
@@ -354,5 +356,5 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
       clauses.push(s.contactAt(contactWords[e.event]!, t(e.moment)));
     }
   }
-  return `${from} ${inViewWords(eclipse.kind, view, words)}: ${clauses.join('; ')}.${daylight}`;
+  return `${from} ${inViewWords(eclipse.kind, view, words)}${colon}${clauses.join(semicolon)}.${daylight}`;
 }

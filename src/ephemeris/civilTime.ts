@@ -134,7 +134,8 @@ export function civilClock(zone = 'UTC', parameter = 'zone', words: ClockWords =
   const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
   // Where no English has an abbreviation, the zone's common long name ("Japan Standard Time"), when Intl has one.
-  const longName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'long' });
+  // In another language, that language's own long name ("Ostafrikanische Zeit").
+  const longName = new Intl.DateTimeFormat(words === CLOCK_ENGLISH ? 'en-US' : words.locale, { timeZone: zone, timeZoneName: 'long' });
   const part = (format: Intl.DateTimeFormat, utDays: number) =>
     format.formatToParts(dateFromDays(utDays)).find((p) => p.type === 'timeZoneName')?.value ?? '';
   const isUtc = zone.toUpperCase() === 'UTC' || zone === 'Etc/UTC';

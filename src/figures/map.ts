@@ -17,7 +17,7 @@ import { angularDistanceDeg } from '../sphere/circles.ts';
 import { capOutline, PAINTED_ZONES, visibilityZonePolygons } from '../visibility/lunar/zones.ts';
 import { stage, visibilityEvaluator, type Visibility } from '../visibility/lunar/visibility.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from '../sphere/world.ts';
+import { detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from '../sphere/world.ts';
 import { thinnedProjection } from './thin.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
@@ -102,7 +102,7 @@ export const BASEMAP_THINNING_PX = 0.5;
 
 /** The map's title, subtitle and small print (words/lunar/figures.ts), with this stage's credits. */
 export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string, words: LunarFigureWords = LUNAR_FIGURES_ENGLISH) {
-  return mapTexts(eclipse, clock, deltaTLabel, generator, { basemap: BASEMAP_CREDIT, font: FONT_CREDIT }, customTitle, words);
+  return mapTexts(eclipse, clock, deltaTLabel, generator, { basemap: words.common.credits.basemap, font: FONT_CREDIT }, customTitle, words);
 }
 
 /**

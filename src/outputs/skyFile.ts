@@ -4,7 +4,6 @@ import { momentFromUT } from '../ephemeris/time.ts';
 import type { PageSize } from '../figures/draw.ts';
 import { composeSkyScene } from '../figures/sky.ts';
 import type { Theme } from '../figures/theme.ts';
-import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
 import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../local/lunar.ts';
 import { skyCaption } from '../words/lunar/figures.ts';
@@ -49,7 +48,7 @@ export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8
     theme: request.theme,
     size: request.size,
     generator: request.generator,
-    credits: report.place.name.includes('°') ? '' : `${GAZETTEER_CREDIT}.`,
+    credits: report.place.name.includes('°') ? '' : `${wordsOf(report).common.credits.places}.`,
     words: wordsOf(report).figures,
     ...(request.title !== undefined ? { title: request.title } : {}),
   });

@@ -75,7 +75,7 @@ export function chooseLanguage(tag: string | undefined, parameter = 'lang'): Lan
   if (!(LANGUAGE_TAGS as readonly string[]).includes(base)) throw new InputError(parameter, OFFERED, tag);
   const language = LANGUAGES[base];
   // English stays en-GB's dates unless a region asks otherwise; another region of a language reaches Intl.
-  if (locale.region === undefined || locale.baseName === language.common.locale) return language;
+  if (locale.region === undefined || locale.baseName === language.common.locale || locale.baseName === language.common.clock.locale) return language;
   return withLocale(language, locale.baseName);
 }
 

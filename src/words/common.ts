@@ -37,6 +37,8 @@ export interface CommonWords {
   readonly continents: Readonly<Record<ContinentName, string>>;
   /** Continent and ocean names written on world maps, by the map's English label ("AFRICA", "Pacific Ocean"…). */
   readonly mapAreas: Readonly<Record<MapAreaName, string>>;
+  /** The data's credits as the small print gives them (the same as sphere/world.ts's and places/gazetteer.ts's in English). */
+  readonly credits: { readonly basemap: string; readonly places: string };
   /** Where a ΔT comes from, as the small print says it ("observed", "forecast"…). */
   readonly deltaTSources: Readonly<Record<DeltaTSource, string>>;
   /** The clock's words: dates through Intl in this language, day marks, changes of offset. */
@@ -98,6 +100,7 @@ export const ENGLISH: CommonWords = {
     AFRICA: 'AFRICA', EUROPE: 'EUROPE', ASIA: 'ASIA', 'NORTH AMERICA': 'NORTH AMERICA', 'SOUTH AMERICA': 'SOUTH AMERICA', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTARCTICA',
     'Pacific Ocean': 'Pacific Ocean', 'Atlantic Ocean': 'Atlantic Ocean', 'Indian Ocean': 'Indian Ocean',
   },
+  credits: { basemap: 'Basemap: Natural Earth via world-atlas (public domain)', places: 'Places: GeoNames (CC BY 4.0)' },
   deltaTSources: { observed: 'observed', forecast: 'forecast', historical: 'historical', 'long-term': 'long-term', user: 'user' },
   clock: CLOCK_ENGLISH,
 };

@@ -34,6 +34,7 @@ export const COMMON_GERMAN: CommonWords = {
     AFRICA: 'AFRIKA', EUROPE: 'EUROPA', ASIA: 'ASIEN', 'NORTH AMERICA': 'NORDAMERIKA', 'SOUTH AMERICA': 'SÜDAMERIKA', AUSTRALIA: 'AUSTRALIEN', ANTARCTICA: 'ANTARKTIKA',
     'Pacific Ocean': 'Pazifischer Ozean', 'Atlantic Ocean': 'Atlantischer Ozean', 'Indian Ocean': 'Indischer Ozean',
   },
+  credits: { basemap: 'Grundkarte: Natural Earth über world-atlas (gemeinfrei)', places: 'Orte: GeoNames (CC BY 4.0)' },
   deltaTSources: { observed: 'beobachtet', forecast: 'Prognose', historical: 'historisch', 'long-term': 'Langzeitmodell', user: 'vom Nutzer angegeben' },
   clock: {
     locale: 'de',

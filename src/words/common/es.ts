@@ -36,6 +36,7 @@ export const COMMON_SPANISH: CommonWords = {
     AFRICA: 'ÁFRICA', EUROPE: 'EUROPA', ASIA: 'ASIA', 'NORTH AMERICA': 'AMÉRICA DEL NORTE', 'SOUTH AMERICA': 'AMÉRICA DEL SUR', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTÁRTIDA',
     'Pacific Ocean': 'Océano Pacífico', 'Atlantic Ocean': 'Océano Atlántico', 'Indian Ocean': 'Océano Índico',
   },
+  credits: { basemap: 'Mapa base: Natural Earth vía world-atlas (dominio público)', places: 'Lugares: GeoNames (CC BY 4.0)' },
   deltaTSources: { observed: 'observado', forecast: 'previsión', historical: 'histórico', 'long-term': 'a largo plazo', user: 'indicado por el usuario' },
   clock: {
     locale: 'es',

@@ -36,6 +36,7 @@ export const COMMON_FRENCH: CommonWords = {
     AFRICA: 'AFRIQUE', EUROPE: 'EUROPE', ASIA: 'ASIE', 'NORTH AMERICA': 'AMÉRIQUE DU NORD', 'SOUTH AMERICA': 'AMÉRIQUE DU SUD', AUSTRALIA: 'AUSTRALIE', ANTARCTICA: 'ANTARCTIQUE',
     'Pacific Ocean': 'Océan Pacifique', 'Atlantic Ocean': 'Océan Atlantique', 'Indian Ocean': 'Océan Indien',
   },
+  credits: { basemap: `Fond de carte${NBSP}: Natural Earth via world-atlas (domaine public)`, places: `Lieux${NBSP}: GeoNames (CC BY 4.0)` },
   deltaTSources: { observed: 'observé', forecast: 'prévision', historical: 'historique', 'long-term': 'long terme', user: 'fourni par l’utilisateur' },
   clock: {
     locale: 'fr',

@@ -28,6 +28,7 @@ export const COMMON_ITALIAN: CommonWords = {
     AFRICA: 'AFRICA', EUROPE: 'EUROPA', ASIA: 'ASIA', 'NORTH AMERICA': 'AMERICA DEL NORD', 'SOUTH AMERICA': 'AMERICA DEL SUD', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTARTIDE',
     'Pacific Ocean': 'Oceano Pacifico', 'Atlantic Ocean': 'Oceano Atlantico', 'Indian Ocean': 'Oceano Indiano',
   },
+  credits: { basemap: 'Mappa di base: Natural Earth tramite world-atlas (pubblico dominio)', places: 'Luoghi: GeoNames (CC BY 4.0)' },
   deltaTSources: { observed: 'osservato', forecast: 'previsione', historical: 'storico', 'long-term': 'lungo termine', user: 'indicato dall’utente' },
   clock: {
     locale: 'it',

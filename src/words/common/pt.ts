@@ -28,6 +28,7 @@ export const COMMON_PORTUGUESE: CommonWords = {
     AFRICA: 'ÁFRICA', EUROPE: 'EUROPA', ASIA: 'ÁSIA', 'NORTH AMERICA': 'AMÉRICA DO NORTE', 'SOUTH AMERICA': 'AMÉRICA DO SUL', AUSTRALIA: 'AUSTRÁLIA', ANTARCTICA: 'ANTÁRTIDA',
     'Pacific Ocean': 'Oceano Pacífico', 'Atlantic Ocean': 'Oceano Atlântico', 'Indian Ocean': 'Oceano Índico',
   },
+  credits: { basemap: 'Mapa de base: Natural Earth via world-atlas (domínio público)', places: 'Locais: GeoNames (CC BY 4.0)' },
   deltaTSources: { observed: 'observado', forecast: 'previsão', historical: 'histórico', 'long-term': 'longo prazo', user: 'indicado pelo utilizador' },
   clock: {
     locale: 'pt',

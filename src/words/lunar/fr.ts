@@ -112,7 +112,7 @@ export const LUNAR_FRENCH: LunarWords = {
       moonset: 'coucher de la Lune',
     },
     eventLabel: { greatest: 'Maximum', moonrise: 'Lever', moonset: 'Coucher' },
-    header: (zone) => ['Étape', 'Ce qui se passe', `Locale (${zone})`, 'UTC', 'Haut. Lune', 'Az. Lune', 'Lune levée', 'Haut. Soleil', 'Ciel'],
+    header: (zone) => ['Étape', 'Ce qui se passe', `Heure locale (${zone})`, 'UTC', 'Haut. Lune', 'Az. Lune', 'Lune levée', 'Haut. Soleil', 'Ciel'],
     yes: 'oui',
     no: 'non',
     sky: { day: 'jour', civil: 'civil', nautical: 'nautique', astronomical: 'astronomique', night: 'nuit' },

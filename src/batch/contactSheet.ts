@@ -7,11 +7,19 @@ import { civilClock } from '../ephemeris/civilTime.ts';
 import { escapeXml } from '../figures/xml.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
-import { formatDuration, roundToMinute } from '../words/common.ts';
-import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
+import { decimalIn, formatDuration, roundToMinute } from '../words/common.ts';
+import type { LunarWords } from '../words/lunar/text.ts';
+import { chooseLanguage } from '../settings/language.ts';
 import type { Manifest } from './manifest.ts';
 
-const WORDS = LUNAR_ENGLISH;
+/** The words of a batch's style language (its `lang` field); a manifest from elsewhere with a tag not offered reads in English. */
+export function styleWords(style: Readonly<Record<string, unknown>>): LunarWords {
+  try {
+    return chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined).lunar;
+  } catch {
+    return chooseLanguage(undefined).lunar;
+  }
+}
 
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
@@ -29,9 +37,9 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
 }
 
 /** The sheet's heading for a range whose end is exclusive: "Lunar eclipses 2026-01-01 to 2035-12-31", both days included. */
-export function sheetTitle(fromIso: string, toIsoExclusive: string): string {
+export function sheetTitle(fromIso: string, toIsoExclusive: string, style: Readonly<Record<string, unknown>> = {}): string {
   const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
-  return WORDS.sheet.title(fromIso.slice(0, 10), lastDay);
+  return styleWords(style).sheet.title(fromIso.slice(0, 10), lastDay);
 }
 
 /** Width and height of a PNG from its IHDR chunk (PNG specification, §11.2.2): bytes 16–23. */
@@ -48,7 +56,8 @@ export function pngSize(head: Uint8Array): [number, number] | undefined {
  */
 export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
   const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
-  const clock = civilClock(tz);
+  const WORDS = styleWords(manifest.style);
+  const clock = civilClock(tz, 'zone', WORDS.common.clock);
   const w = WORDS.sheet;
   const duration = (minutes: number) => formatDuration(minutes * 60, 'long', WORDS.common);
   const cards = manifest.eclipses.map((listed) => {
@@ -64,7 +73,7 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const kind = (WORDS.kind as Readonly<Record<string, string>>)[r.kind] ?? r.kind;
     const facts = [
       clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
-      r.kind === 'penumbral' ? w.penumbralMagnitude(p.penumbralMagnitude) : w.umbralMagnitude(p.umbralMagnitude),
+      r.kind === 'penumbral' ? w.penumbralMagnitude(decimalIn(p.penumbralMagnitude, WORDS.common)) : w.umbralMagnitude(decimalIn(p.umbralMagnitude, WORDS.common)),
       ...(p.minutes.total !== undefined ? [w.totality(duration(p.minutes.total))] : []),
       ...(p.minutes.partial !== undefined ? [w.inUmbra(duration(p.minutes.partial))] : [w.penumbralPhase(duration(p.minutes.penumbral))]),
       w.saros(r.saros),

@@ -13,6 +13,8 @@ export const COMMON_ITALIAN: CommonWords = {
     compact: { hour: 'h', minute: 'min' },
   },
   and: 'e',
+  // "ed" before a word starting with e (the euphonic d, common practice in Italian prose): "Africa ed Europa".
+  andBefore: (item) => (/^[eEéÉ]/.test(item) ? 'ed' : 'e'),
   punctuation: { colon: ': ', semicolon: '; ' },
   hemispheres: { north: 'N', south: 'S', east: 'E', west: 'O' },
   countryNames: {

@@ -73,7 +73,7 @@ const FIGURES: LunarFigureWords = {
     shadow: (convention, deltaT, source) => `Ombra: convenzione di ${convention}; ΔT ${deltaT.toFixed(1)} s (${source}).`,
     credits: (places, font, generator) => `${places} Carattere: ${font}. Realizzato con ${generator}.`,
     altText: (place) =>
-      `Grafico dell’altezza della Luna sopra l’orizzonte nel corso della notte a ${place}, con l’ora locale in basso, le fasi dell’eclissi segnate sul percorso e il crepuscolo sullo sfondo.`,
+      `Grafico dell’altezza della Luna sopra l’orizzonte nel corso della notte ${/^[aA]/.test(place) ? 'ad' : 'a'} ${place}, con l’ora locale in basso, le fasi dell’eclissi segnate sul percorso e il crepuscolo sullo sfondo.`,
     file: (title, summary, alt) => `${title}. ${summary}\n\nTesto alternativo: ${alt}\n`,
   },
 };

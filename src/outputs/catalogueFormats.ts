@@ -3,8 +3,9 @@ import { stringify } from 'csv-stringify/sync';
 import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
-import { formatDuration } from '../words/common.ts';
-import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
+import { decimalIn, formatDuration } from '../words/common.ts';
+import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
+import { dateWordsIn } from '../ephemeris/civilTime.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
 export const CATALOGUE_FORMATS: readonly CatalogueFormat[] = ['table', 'json', 'csv'];
@@ -30,19 +31,21 @@ export function catalogueCsv(doc: CatalogueDocument): string {
   return stringify(rows, { header: true, columns: [...CSV_COLUMNS] });
 }
 
-export function catalogueTable(doc: CatalogueDocument): string {
-  const words = LUNAR_ENGLISH;
+/** The table in `words`' language (default English): dates and figures as Intl writes them there. */
+export function catalogueTable(doc: CatalogueDocument, words: LunarWords = LUNAR_ENGLISH): string {
   const w = words.table;
+  const decimal = (text: string) => decimalIn(text, words.common);
+  const julianOf = (id: string) => julianDateOfIsoDate(id, dateWordsIn(words.common.clock));
   const header = w.catalogueHeader;
   const minutes = (value: number | undefined) => (value !== undefined ? formatDuration(value * 60, 'compact', words.common) : w.absent);
   // Every figure as printed elsewhere: rounded once, from the full value (record.printed).
   const rows = doc.eclipses.map((e: EclipseRecord) => [
-    julianDateOfIsoDate(e.id) ? w.julianBeside(e.id, julianDateOfIsoDate(e.id)!) : e.id,
-    words.kind[e.kind],
+    julianOf(e.id) ? w.julianBeside(e.id, julianOf(e.id)!) : e.id,
+    w.kind[e.kind],
     e.printed.greatestUtc,
-    e.printed.umbralMagnitude,
-    e.printed.penumbralMagnitude,
-    e.printed.gamma,
+    decimal(e.printed.umbralMagnitude),
+    decimal(e.printed.penumbralMagnitude),
+    decimal(e.printed.gamma),
     minutes(e.printed.minutes.partial),
     minutes(e.printed.minutes.total),
     String(e.saros),
@@ -51,13 +54,13 @@ export function catalogueTable(doc: CatalogueDocument): string {
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (numeric[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
-  const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].join(', ');
+  const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].map((s) => (words.common.deltaTSources as Readonly<Record<string, string>>)[s] ?? s).join(', ');
   const deltaTs = doc.eclipses.map((e) => e.deltaT);
   const title = w.catalogueTitle(w.eclipses(doc.eclipses.length), doc.range.from.slice(0, 10), doc.range.to.slice(0, 10));
   const julian = doc.eclipses.some((e) => julianDateOfIsoDate(e.id)) ? w.catalogueJulian : '';
   const notes = [
     w.catalogueTimes(words.convention[doc.convention], julian),
-    deltaTs.length > 0 ? w.deltaTNote(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)]), sources, doc.deltaTModel) : w.deltaTModelOnly(doc.deltaTModel),
+    deltaTs.length > 0 ? w.deltaTNote(decimal(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)])), sources, doc.deltaTModel) : w.deltaTModelOnly(doc.deltaTModel),
   ];
   if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;
   return [title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');

@@ -90,3 +90,13 @@ test('the contact sheet in the style\'s language: <html lang>, title, facts and 
   // No lang: English, as before.
   assert.match(contactSheet({ ...manifest, style: { tz: 'UTC' } } as Manifest, 'x'), /<html lang="en">[\s\S]*umbral magnitude 1\.151/);
 });
+
+test('list --lang fr: the table in French, kinds short, Julian dates in French months, decimal commas; json stays data (ECMA-402; Meeus ch. 7 for 1501 May 13 Gregorian = May 3 Julian)', async () => {
+  const { code, stdout } = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr']);
+  assert.equal(code, 0);
+  assert.match(stdout, /^2 éclipses de Lune du 1501-01-01 au 1502-01-01 \(exclu\)/);
+  assert.match(stdout, /1501-05-13 \(julien\u00a0: 3 mai 1501\)\s+totale\s+1501-05-13 \d\d:\d\d\s+1,\d{3}/);
+  assert.doesNotMatch(stdout, /\b(partial|total|lunar|Times)\b/);
+  const json = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr', '--format', 'json']);
+  assert.equal(JSON.parse(json.stdout).eclipses[0].kind, 'total');
+});

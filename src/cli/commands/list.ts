@@ -7,7 +7,9 @@ import { catalogueDocument } from '../../outputs/catalogueRecord.ts';
 import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '../../outputs/catalogueFormats.ts';
 import { parseChoice, parseChoiceList, parseNumber, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
-import { DELTA_T_LIMITS, withEclipseOptions } from '../declare.ts';
+import { DELTA_T_LIMITS, withEclipseOptions, withLanguageOption } from '../declare.ts';
+import { chooseLanguage } from '../../settings/language.ts';
+import { flagOf } from '../flags.ts';
 
 interface ListOptions {
   from?: string;
@@ -16,6 +18,7 @@ interface ListOptions {
   convention: string;
   deltaT?: string;
   format: string;
+  lang?: string;
 }
 
 
@@ -27,8 +30,9 @@ export function registerList(program: Command, context: CommandContext): void {
     .option('--to <date>', 'end: a bare year or month is included whole; a full date is exclusive (default: ten years on)')
     .option('--kind <kinds>', `only these kinds, comma-separated: ${ECLIPSE_KINDS.join(',')}`)
     .option('--format <format>', `output: ${CATALOGUE_FORMATS.join(', ')}`, 'table');
-  withEclipseOptions(command)
+  withLanguageOption(withEclipseOptions(command))
     .action((options: ListOptions) => {
+      const language = chooseLanguage(options.lang, flagOf('lang'));
       const range = parseRange(options.from, options.to, context.now());
       const kinds = options.kind === undefined ? ECLIPSE_KINDS : parseChoiceList('--kind', options.kind, ECLIPSE_KINDS);
       const convention = parseChoice('--convention', options.convention, SHADOW_CONVENTIONS);
@@ -37,7 +41,8 @@ export function registerList(program: Command, context: CommandContext): void {
       const deltaT = deltaTModelOf(choice);
       const eclipses = findEclipses(OUTPUT_BODY, range, choice).filter((e) => kinds.includes(e.kind));
       const doc = catalogueDocument(eclipses, { convention, deltaTModel: deltaT.name, ...range });
-      const render = { table: catalogueTable, json: catalogueJson, csv: catalogueCsv }[format];
+      // The table speaks the reader's language; json and csv are data, in the one schema.
+      const render = { table: (d: typeof doc) => catalogueTable(d, language.lunar), json: catalogueJson, csv: catalogueCsv }[format];
       context.stdout(render(doc));
     });
 }

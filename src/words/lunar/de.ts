@@ -86,6 +86,7 @@ export const LUNAR_GERMAN: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Gefahrlos mit bloßem Auge zu beobachten; Vorhersage, sofern das Wetter mitspielt.'),
   table: {
+    kind: { total: 'total', partial: 'partiell', penumbral: 'Halbschatten' },
     catalogueHeader: ['Datum', 'Art', 'Maximum (UTC)', 'Kernsch.-Gr.', 'Halbsch.-Gr.', 'Gamma', 'Im Kernschatten', 'Totalität', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (julianisch: ${julianDate})`,

@@ -86,6 +86,7 @@ export const LUNAR_SPANISH: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Puede observarse sin riesgo a simple vista; son predicciones, si el tiempo lo permite.'),
   table: {
+    kind: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
     catalogueHeader: ['Fecha', 'Tipo', 'Máximo (UTC)', 'Mag. umbral', 'Mag. penumbral', 'Gamma', 'En la umbra', 'Totalidad', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (juliano: ${julianDate})`,

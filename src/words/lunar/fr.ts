@@ -88,6 +88,7 @@ export const LUNAR_FRENCH: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'S’observe sans danger à l’œil nu. Prévisions, si la météo le permet.'),
   table: {
+    kind: { total: 'totale', partial: 'partielle', penumbral: 'pénombrale' },
     catalogueHeader: ['Date', 'Type', 'Maximum (UTC)', 'Mag. ombrale', 'Mag. pénombrale', 'Gamma', 'Dans l’ombre', 'Totalité', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (julien${NBSP}: ${julianDate})`,

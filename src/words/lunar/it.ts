@@ -87,6 +87,7 @@ export const LUNAR_ITALIAN: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Si può osservare senza rischi a occhio nudo; sono previsioni, tempo permettendo.'),
   table: {
+    kind: { total: 'totale', partial: 'parziale', penumbral: 'penombrale' },
     catalogueHeader: ['Data', 'Tipo', 'Massimo (UTC)', 'Mag. d’ombra', 'Mag. penombrale', 'Gamma', 'Nell’ombra', 'Totalità', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (giuliano: ${julianDate})`,

@@ -87,6 +87,7 @@ export const LUNAR_PORTUGUESE: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Pode ser observado sem perigo a olho nu; são previsões, se o tempo o permitir.'),
   table: {
+    kind: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
     catalogueHeader: ['Data', 'Tipo', 'Máximo (UTC)', 'Mag. umbral', 'Mag. penumbral', 'Gama', 'Na umbra', 'Totalidade', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (juliano: ${julianDate})`,

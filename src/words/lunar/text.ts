@@ -39,6 +39,8 @@ export interface LunarWords {
   /** The naked-eye line, as a calendar entry ends (the figures carry their own sentence of it). */
   readonly nakedEyeInCalendar: TextFor<'lunar'>;
   readonly table: {
+    /** The kind in the list's column, short: "total". */
+    readonly kind: Readonly<Record<EclipseKind, string>>;
     readonly catalogueHeader: readonly string[];
     /** A cell for a phase the eclipse does not have. */
     readonly absent: string;
@@ -150,6 +152,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Safe to watch with the naked eye; predictions, weather permitting.'),
   table: {
+    kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
     catalogueHeader: ['Date', 'Kind', 'Greatest (UTC)', 'Umbral mag.', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (Julian: ${julianDate})`,

@@ -3,7 +3,7 @@ import { stringify } from 'csv-stringify/sync';
 import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, EclipseRecord } from './catalogueRecord.ts';
-import { decimalIn, formatDuration } from '../words/common.ts';
+import { decimalIn, deltaTModelIn, formatDuration } from '../words/common.ts';
 import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
 import { dateWordsIn } from '../ephemeris/civilTime.ts';
 
@@ -60,7 +60,7 @@ export function catalogueTable(doc: CatalogueDocument, words: LunarWords = LUNAR
   const julian = doc.eclipses.some((e) => julianDateOfIsoDate(e.id)) ? w.catalogueJulian : '';
   const notes = [
     w.catalogueTimes(words.convention[doc.convention], julian),
-    deltaTs.length > 0 ? w.deltaTNote(decimal(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)])), sources, doc.deltaTModel) : w.deltaTModelOnly(doc.deltaTModel),
+    deltaTs.length > 0 ? w.deltaTNote(decimal(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)])), sources, deltaTModelIn(doc.deltaTModel, words.common)) : w.deltaTModelOnly(deltaTModelIn(doc.deltaTModel, words.common)),
   ];
   if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;
   return [title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');

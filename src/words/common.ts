@@ -39,6 +39,8 @@ export interface CommonWords {
   readonly mapAreas: Readonly<Record<MapAreaName, string>>;
   /** The data's credits as the small print gives them (the same as sphere/world.ts's and places/gazetteer.ts's in English). */
   readonly credits: { readonly basemap: string; readonly places: string };
+  /** The ΔT model as the list's notes name it: the built-in one (observed, forecast, Espenak–Meeus) or a fixed value. */
+  readonly deltaTModel: { readonly builtIn: (firstYear: string, lastYear: string, forecastTo: string) => string; readonly fixed: (seconds: string) => string };
   /** Where a ΔT comes from, as the small print says it ("observed", "forecast"…). */
   readonly deltaTSources: Readonly<Record<DeltaTSource, string>>;
   /** The clock's words: dates through Intl in this language, day marks, changes of offset. */
@@ -101,6 +103,10 @@ export const ENGLISH: CommonWords = {
     'Pacific Ocean': 'Pacific Ocean', 'Atlantic Ocean': 'Atlantic Ocean', 'Indian Ocean': 'Indian Ocean',
   },
   credits: { basemap: 'Basemap: Natural Earth via world-atlas (public domain)', places: 'Places: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `observed ${first}–${last}, forecast to ${forecastTo}, Espenak–Meeus beyond`,
+    fixed: (seconds) => `fixed ${seconds} s (user)`,
+  },
   deltaTSources: { observed: 'observed', forecast: 'forecast', historical: 'historical', 'long-term': 'long-term', user: 'user' },
   clock: CLOCK_ENGLISH,
 };
@@ -168,6 +174,18 @@ function decimalSign(locale: string): string {
     decimalSigns.set(locale, sign);
   }
   return sign;
+}
+
+/**
+ * A ΔT model's name (ephemeris/deltaT.ts writes it in English, and the
+ * catalogue JSON keeps it so) in the language's words; a name of another
+ * shape is printed as it stands.
+ */
+export function deltaTModelIn(name: string, words: CommonWords = ENGLISH): string {
+  const builtIn = /^observed (\d+)–(\d+), forecast to (\d+), Espenak–Meeus beyond$/.exec(name);
+  if (builtIn) return words.deltaTModel.builtIn(builtIn[1]!, builtIn[2]!, builtIn[3]!);
+  const fixed = /^fixed (\S+) s \(user\)$/.exec(name);
+  return fixed ? words.deltaTModel.fixed(decimalIn(fixed[1]!, words)) : name;
 }
 
 /** "A", "A and B", "A, B and C" (no serial comma: the house style). */

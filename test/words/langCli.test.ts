@@ -96,7 +96,10 @@ test('list --lang fr: the table in French, kinds short, Julian dates in French m
   assert.equal(code, 0);
   assert.match(stdout, /^2 éclipses de Lune du 1501-01-01 au 1502-01-01 \(exclu\)/);
   assert.match(stdout, /1501-05-13 \(julien\u00a0: 3 mai 1501\)\s+totale\s+1501-05-13 \d\d:\d\d\s+1,\d{3}/);
-  assert.doesNotMatch(stdout, /\b(partial|total|lunar|Times)\b/);
+  assert.doesNotMatch(stdout, /\b(partial|total|lunar|Times|observed|forecast|beyond|model)\b/);
+  assert.match(stdout, /modèle\u00a0: observé 1955–\d{4}, prévision jusqu’en \d{4}, Espenak–Meeus au-delà\)/);
+  const fixed = await run(['list', '--from', '2026', '--to', '2026', '--lang', 'de', '--delta-t', '69.25']);
+  assert.match(fixed.stdout, /ΔT-Modell: fest, 69,25 s \(vom Nutzer angegeben\)\.|Modell: fest, 69,25 s \(vom Nutzer angegeben\)/);
   const json = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr', '--format', 'json']);
   assert.equal(JSON.parse(json.stdout).eclipses[0].kind, 'total');
 });

@@ -35,6 +35,10 @@ export const COMMON_GERMAN: CommonWords = {
     'Pacific Ocean': 'Pazifischer Ozean', 'Atlantic Ocean': 'Atlantischer Ozean', 'Indian Ocean': 'Indischer Ozean',
   },
   credits: { basemap: 'Grundkarte: Natural Earth über world-atlas (gemeinfrei)', places: 'Orte: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `beobachtet ${first}–${last}, Prognose bis ${forecastTo}, danach Espenak–Meeus`,
+    fixed: (seconds) => `fest, ${seconds} s (vom Nutzer angegeben)`,
+  },
   deltaTSources: { observed: 'beobachtet', forecast: 'Prognose', historical: 'historisch', 'long-term': 'Langzeitmodell', user: 'vom Nutzer angegeben' },
   clock: {
     locale: 'de',

@@ -37,6 +37,10 @@ export const COMMON_SPANISH: CommonWords = {
     'Pacific Ocean': 'Océano Pacífico', 'Atlantic Ocean': 'Océano Atlántico', 'Indian Ocean': 'Océano Índico',
   },
   credits: { basemap: 'Mapa base: Natural Earth vía world-atlas (dominio público)', places: 'Lugares: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `observado ${first}–${last}, previsión hasta ${forecastTo}, Espenak–Meeus después`,
+    fixed: (seconds) => `fijo, ${seconds} s (indicado por el usuario)`,
+  },
   deltaTSources: { observed: 'observado', forecast: 'previsión', historical: 'histórico', 'long-term': 'a largo plazo', user: 'indicado por el usuario' },
   clock: {
     locale: 'es',

@@ -37,6 +37,10 @@ export const COMMON_FRENCH: CommonWords = {
     'Pacific Ocean': 'Océan Pacifique', 'Atlantic Ocean': 'Océan Atlantique', 'Indian Ocean': 'Océan Indien',
   },
   credits: { basemap: `Fond de carte${NBSP}: Natural Earth via world-atlas (domaine public)`, places: `Lieux${NBSP}: GeoNames (CC BY 4.0)` },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `observé ${first}–${last}, prévision jusqu’en ${forecastTo}, Espenak–Meeus au-delà`,
+    fixed: (seconds) => `fixe, ${seconds}${NBSP}s (fourni par l’utilisateur)`,
+  },
   deltaTSources: { observed: 'observé', forecast: 'prévision', historical: 'historique', 'long-term': 'long terme', user: 'fourni par l’utilisateur' },
   clock: {
     locale: 'fr',

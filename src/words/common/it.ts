@@ -31,6 +31,10 @@ export const COMMON_ITALIAN: CommonWords = {
     'Pacific Ocean': 'Oceano Pacifico', 'Atlantic Ocean': 'Oceano Atlantico', 'Indian Ocean': 'Oceano Indiano',
   },
   credits: { basemap: 'Mappa di base: Natural Earth tramite world-atlas (pubblico dominio)', places: 'Luoghi: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `osservato ${first}–${last}, previsione fino al ${forecastTo}, Espenak–Meeus oltre`,
+    fixed: (seconds) => `fisso, ${seconds} s (indicato dall’utente)`,
+  },
   deltaTSources: { observed: 'osservato', forecast: 'previsione', historical: 'storico', 'long-term': 'lungo termine', user: 'indicato dall’utente' },
   clock: {
     locale: 'it',

@@ -29,6 +29,10 @@ export const COMMON_PORTUGUESE: CommonWords = {
     'Pacific Ocean': 'Oceano Pacífico', 'Atlantic Ocean': 'Oceano Atlântico', 'Indian Ocean': 'Oceano Índico',
   },
   credits: { basemap: 'Mapa de base: Natural Earth via world-atlas (domínio público)', places: 'Locais: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `observado ${first}–${last}, previsão até ${forecastTo}, Espenak–Meeus depois`,
+    fixed: (seconds) => `fixo, ${seconds} s (indicado pelo utilizador)`,
+  },
   deltaTSources: { observed: 'observado', forecast: 'previsão', historical: 'histórico', 'long-term': 'longo prazo', user: 'indicado pelo utilizador' },
   clock: {
     locale: 'pt',

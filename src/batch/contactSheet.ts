@@ -11,8 +11,9 @@ import type { EclipseBody } from '../eclipses/kinds.ts';
 import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
 import { minutesAndSeconds, SOLAR_TEXT_ENGLISH } from '../words/solar/text.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
-import { formatDuration, roundToMinute } from '../words/common.ts';
-import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
+import { decimalIn, formatDuration, roundToMinute } from '../words/common.ts';
+import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
+import { chooseLanguage } from '../settings/language.ts';
 import type { Manifest } from './manifest.ts';
 
 const WORDS = LUNAR_ENGLISH;
@@ -23,6 +24,15 @@ const WORDS_LUNAR_SUFFIX = ' lunar';
 const SOLAR_CARD_STYLE = `
   article.solar { border-top: 4px solid #b5541c; } article.solar.annular { border-top-style: double; } article.solar.partial { border-top-color: #d99a5b; }
   p.caution { margin: .4rem 0; padding: .4rem .5rem; border-left: 3px solid #b5541c; background: #fbeee4; font-size: .9em; }`;
+
+/** The words of a batch's style language (its `lang` field); a manifest from elsewhere with a tag not offered reads in English. */
+export function styleWords(style: Readonly<Record<string, unknown>>): LunarWords {
+  try {
+    return chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined).lunar;
+  } catch {
+    return chooseLanguage(undefined).lunar;
+  }
+}
 
 /** A relative URL for a file path: each segment percent-encoded. */
 const href = (path: string) => path.split('/').map(encodeURIComponent).join('/');
@@ -44,9 +54,9 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
  * 2026-01-01 to 2035-12-31", both days included; the bodies of the batch
  * name it ("Lunar and solar eclipses …" when both).
  */
-export function sheetTitle(fromIso: string, toIsoExclusive: string, bodies: readonly EclipseBody[] = ['lunar']): string {
+export function sheetTitle(fromIso: string, toIsoExclusive: string, bodies: readonly EclipseBody[] = ['lunar'], style: Readonly<Record<string, unknown>> = {}): string {
   const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
-  if (!bodies.includes('solar')) return WORDS.sheet.title(fromIso.slice(0, 10), lastDay);
+  if (!bodies.includes('solar')) return styleWords(style).sheet.title(fromIso.slice(0, 10), lastDay);
   return SOLAR_TEXT_ENGLISH.sheet.title(bodies.includes('lunar'), fromIso.slice(0, 10), lastDay);
 }
 
@@ -77,7 +87,8 @@ export function pngSize(head: Uint8Array): [number, number] | undefined {
  */
 export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
   const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
-  const clock = civilClock(tz);
+  const WORDS = styleWords(manifest.style);
+  const clock = civilClock(tz, 'zone', WORDS.common.clock);
   const w = WORDS.sheet;
   const duration = (minutes: number) => formatDuration(minutes * 60, 'long', WORDS.common);
   // On a sheet holding both kinds, a lunar card says so too ("total lunar").
@@ -98,7 +109,7 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const p = entry.body !== 'solar' ? entry.record.printed ?? figuresFromRecord(entry.record) : undefined;
     const facts = solar ? solarFacts(solar, clock, greatestUtDays) : !p ? [] : [
       clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
-      r.kind === 'penumbral' ? w.penumbralMagnitude(p.penumbralMagnitude) : w.umbralMagnitude(p.umbralMagnitude),
+      r.kind === 'penumbral' ? w.penumbralMagnitude(decimalIn(p.penumbralMagnitude, WORDS.common)) : w.umbralMagnitude(decimalIn(p.umbralMagnitude, WORDS.common)),
       ...(p.minutes.total !== undefined ? [w.totality(duration(p.minutes.total))] : []),
       ...(p.minutes.partial !== undefined ? [w.inUmbra(duration(p.minutes.partial))] : [w.penumbralPhase(duration(p.minutes.penumbral))]),
       w.saros(r.saros),

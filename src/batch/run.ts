@@ -350,7 +350,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchSummary> {
     }
     if (interrupted) removeLeftovers(outDir);
     await saveManifest();
-    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString(), bodiesOf(manifest)));
+    await writeIndexes(outDir, manifest, sheetTitle(options.from.toISOString(), options.to.toISOString(), bodiesOf(manifest), manifest.style));
     const files = manifest.eclipses.reduce((n, e) => n + e.files.length, 0);
     const bytes = manifest.eclipses.reduce((n, e) => n + e.files.reduce((m, f) => m + f.bytes, 0), 0);
     return { planned: mine.length, rendered, skipped, failed, files, bytes, seconds: (performance.now() - started) / 1000, interrupted };
@@ -404,7 +404,7 @@ export async function mergeManifests(outDir: string, manifests: readonly Manifes
     const from = manifests.map((m) => m.range.from).sort()[0]!;
     const to = manifests.map((m) => m.range.to).sort().at(-1)!;
     const merged: Manifest = { ...first, tool, shard: null, range: { from, to }, eclipses: [...byId.values()] };
-    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(outDir, merged, sheetTitle(from, to, bodiesOf(merged)))];
+    const files: [string, string][] = [[MANIFEST_NAME, manifestText(merged)], ...indexFiles(outDir, merged, sheetTitle(from, to, bodiesOf(merged), merged.style))];
     checkFolderEntries(outDir, files.map(([name]) => name));
     for (const [name, text] of files) await writeFileAtomic(join(outDir, name), text);
     return merged;

@@ -16,6 +16,16 @@ import { PROJECTION_NAMES } from '../figures/projection.ts';
 import { THEME_NAMES } from '../figures/theme.ts';
 import { MARK_CLOCKS } from '../figures/markClock.ts';
 import { AREA_NAMES_CHOICES } from '../figures/areaNames.ts';
+import { chooseLanguage, LANGUAGE_TAGS } from '../settings/language.ts';
+
+const isOfferedLanguage = (tag: string) => {
+  try {
+    chooseLanguage(tag);
+    return true;
+  } catch {
+    return false;
+  }
+};
 import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
 import { MAX_FILE_NAME_BYTES, readRegularFile, ReadRefused } from '../outputs/files.ts';
 import { DEFAULT_NAMING, longestStemBytes, MAP_SUFFIX_BYTES, NAMING_FIELDS } from './naming.ts';
@@ -54,6 +64,8 @@ const styleObject = z
     marks: z.array(z.string().min(1).max(200)).max(20).default([]),
     markClock: enumOf(MARK_CLOCKS).default('map'),
     areaNames: enumOf(AREA_NAMES_CHOICES).default('auto'),
+    // The reader's language (BCP 47); absent, English, and the style's hash is as it was before languages were offered.
+    lang: z.string().refine(isOfferedLanguage, `a BCP 47 language tag among ${LANGUAGE_TAGS.join(', ')} (a region may follow: es-MX), in a script the bundled type draws`).optional(),
     places: z.array(z.string().min(1).max(200)).max(20).default([]),
     formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),

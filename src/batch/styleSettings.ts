@@ -32,6 +32,7 @@ export function mapChoicesOf(style: HouseStyle): MapChoices {
     marks: style.marks,
     markClock: style.markClock,
     areaNames: style.areaNames,
+    ...(style.lang !== undefined ? { lang: style.lang } : {}),
   };
 }
 
@@ -43,6 +44,6 @@ export function eclipseChoiceOf(style: HouseStyle): EclipseChoice {
 /** The style field behind each parameter of the map and eclipse settings, for errors that name the field. */
 export const STYLE_FIELDS: Readonly<Record<string, keyof HouseStyle>> = {
   projection: 'projection', bbox: 'bbox', centre: 'centre', spanDeg: 'span', size: 'size', preset: 'preset', widthMm: 'widthMm', dpi: 'dpi',
-  theme: 'theme', borders: 'borders', zone: 'tz', title: 'title', marks: 'marks', place: 'marks', markClock: 'markClock', areaNames: 'areaNames',
+  theme: 'theme', borders: 'borders', zone: 'tz', title: 'title', marks: 'marks', place: 'marks', markClock: 'markClock', areaNames: 'areaNames', lang: 'lang',
   convention: 'convention', deltaT: 'deltaT',
 };

@@ -87,13 +87,13 @@ async function renderLunar(input: TaskInput & { eclipse: LunarEclipse }, stem: s
 
   const { files, caption, thumbnail } = await renderMapFiles({ eclipse, ...settings, generator }, style.formats, THUMBNAIL_WIDTH_PX);
   for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
-  await write(`${stem}.txt`, 'caption', captionText(caption));
+  await write(`${stem}.txt`, 'caption', captionText(caption, settings.words));
   await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail!);
 
   const slugs = stylePlaces(style.places).map((p) => p.slug);
   for (const [i, name] of style.places.entries()) {
     const chosen = choosePlace({ place: name }, true, 'places');
-    const report = localReport(eclipse, chosen);
+    const report = localReport(eclipse, chosen, settings.words);
     const slug = slugs[i]!;
     for (const format of style.localFormats) {
       const text = { table: localTable, markdown: localMarkdown, csv: localCsv, json: localJson, ics: (r: typeof report) => localIcs(r, generator) }[format](report);

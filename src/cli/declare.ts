@@ -5,6 +5,7 @@
 import type { Command } from 'commander';
 import { SHADOW_CONVENTIONS } from '../eclipses/lunar/conventions.ts';
 import { ECLIPSE_BODIES, type EclipseBody } from '../eclipses/common/record.ts';
+import { LANGUAGE_TAGS } from '../settings/languageTags.ts';
 
 export { DELTA_T_LIMITS } from '../settings/read.ts';
 
@@ -17,6 +18,11 @@ export function withEclipseOptions(command: Command): Command {
   return command
     .option('--convention <name>', `shadow enlargement: ${SHADOW_CONVENTIONS.join(' or ')}`, 'danjon')
     .option('--delta-t <seconds>', 'use this ΔT (TT − UT, seconds) instead of the built-in model');
+}
+
+/** --lang, as every command that writes words for readers declares it. */
+export function withLanguageOption(command: Command): Command {
+  return command.option('--lang <tag>', `the reader's language, a BCP 47 tag: ${LANGUAGE_TAGS.join(', ')} (default en)`);
 }
 
 /** --place, --at and --tz, as the one-place commands declare them. */

@@ -79,6 +79,7 @@ export interface MapFlags extends SizeFlags, EclipseFlags {
   markClock?: string;
   areaNames?: string;
   style?: string;
+  lang?: string;
 }
 
 /**
@@ -155,5 +156,6 @@ export function mapChoicesFromFlags(flags: MapFlags, underlay?: Underlay<MapChoi
     marks: underlay && !underlay.typed('mark') ? underlay.base.marks : flags.mark,
     markClock: take('markClock', (b) => b.markClock, (t) => parseChoice('--mark-clock', t, MARK_CLOCKS)) ?? 'map',
     areaNames: take('areaNames', (b) => b.areaNames, (t) => parseChoice('--area-names', t, AREA_NAMES_CHOICES)) ?? 'auto',
+    ...given('lang', take('lang', (b) => b.lang, (t) => t)),
   };
 }

@@ -67,21 +67,21 @@ export function dateWords(date: CalendarDate): string {
  * day falls before the reform: "23 February 1100"; undefined from 1582
  * October 15 on.
  */
-export function julianDateBeforeReform(gregorian: { year: number; month: number; day: number }): string | undefined {
+export function julianDateBeforeReform(gregorian: { year: number; month: number; day: number }, words: (date: CalendarDate) => string = dateWords): string | undefined {
   const jd = julianDayFromCalendar({ ...gregorian, day: gregorian.day + 0.5 }, 'gregorian');
   if (jd >= GREGORIAN_REFORM_JD) return undefined;
-  return dateWords(calendarFromJulianDay(jd, 'julian'));
+  return words(calendarFromJulianDay(jd, 'julian'));
 }
 
 /** The same for an ISO 8601 date ("1100-03-01", as in an eclipse's id). */
-export function julianDateOfIsoDate(iso: string): string | undefined {
+export function julianDateOfIsoDate(iso: string, words: (date: CalendarDate) => string = dateWords): string | undefined {
   const [year, month, day] = iso.slice(0, 10).split('-').map(Number) as [number, number, number];
-  return julianDateBeforeReform({ year, month, day });
+  return julianDateBeforeReform({ year, month, day }, words);
 }
 
-/** The same, for a Date whose UTC fields are the day wanted. */
-export function julianDateOfUtcDay(date: Date): string | undefined {
-  return julianDateBeforeReform({ year: date.getUTCFullYear(), month: date.getUTCMonth() + 1, day: date.getUTCDate() });
+/** The same, for a Date whose UTC fields are the day wanted; `words` writes the Julian date (default: English). */
+export function julianDateOfUtcDay(date: Date, words: (date: CalendarDate) => string = dateWords): string | undefined {
+  return julianDateBeforeReform({ year: date.getUTCFullYear(), month: date.getUTCMonth() + 1, day: date.getUTCDate() }, words);
 }
 
 /** JD of an instant (UTC), from JavaScript's epoch. */

@@ -7,14 +7,59 @@
  * practice); data outputs keep seconds (`rfc3339`).
  */
 import { InputError } from '../errors.ts';
-import { julianDateOfUtcDay } from './calendar.ts';
+import { dateWords, julianDateOfUtcDay, type CalendarDate } from './calendar.ts';
 import { dayMark, timeRange } from './dayMark.ts';
 import { narrowBracket } from './roots.ts';
 import { dateFromDays } from './time.ts';
 
+/**
+ * The few words a clock prints besides numbers, in one language: the
+ * words/ catalogues supply them (words/common.ts), English by default. Dates
+ * go through Intl in `locale`; times stay on the 24-hour clock.
+ */
+export interface ClockWords {
+  /** BCP 47 tag for Intl's month names. */
+  readonly locale: string;
+  /** The Julian date beside a date before the reform: " (Julian: 23 February 1100)". */
+  readonly julianBeside: (julianDate: string) => string;
+  /** A time on another day than the reference's: " +1 day", " −2 days" (`days` never 0). */
+  readonly dayMark: (days: number) => string;
+  /** "CET, UTC+01:00 until 03:00 CEST": an offset and the last minute it holds. */
+  readonly until: (label: string, lastTime: string) => string;
+  /** Joins the offsets of a span: ", then ". */
+  readonly then: string;
+}
+
+export const CLOCK_ENGLISH: ClockWords = {
+  locale: 'en-GB',
+  julianBeside: (julianDate) => ` (Julian: ${julianDate})`,
+  dayMark: (days) => ` ${days > 0 ? '+' : '−'}${Math.abs(days)} ${Math.abs(days) === 1 ? 'day' : 'days'}`,
+  until: (label, lastTime) => `${label} until ${lastTime}`,
+  then: ', then ',
+};
+
+const dateWordsByLocale = new Map<string, (date: CalendarDate) => string>();
+/** A calendar date (of either calendar) written as `words`' language writes dates: "23 February 1100", "23 de febrero de 1100". */
+export function dateWordsIn(words: ClockWords): (date: CalendarDate) => string {
+  if (words === CLOCK_ENGLISH) return dateWords;
+  let write = dateWordsByLocale.get(words.locale);
+  if (!write) {
+    const format = new Intl.DateTimeFormat(words.locale, { timeZone: 'UTC', day: 'numeric', month: 'long', year: 'numeric' });
+    write = (date) => {
+      const day = new Date(0);
+      day.setUTCFullYear(date.year, date.month - 1, Math.floor(date.day));
+      return format.format(day);
+    };
+    dateWordsByLocale.set(words.locale, write);
+  }
+  return write;
+}
+
 export interface CivilClock {
   /** IANA zone name, or "UTC". */
   readonly zone: string;
+  /** The words it prints (dates, day marks), in one language. */
+  readonly words: ClockWords;
   /** 24-hour clock time in the offset in force at that instant, rounded to the minute: "09:50". */
   time(utDays: number): string;
   /** Calendar date in the zone: "3 March 2026"; before 1582 October 15 with the Julian date: "1 March 1100 (Julian: 23 February 1100)". */
@@ -76,18 +121,21 @@ export function isKnownTimeZone(zone: string): boolean {
   }
 }
 
-/** The clock of an IANA zone; a zone it does not know is an InputError naming `parameter`. */
-export function civilClock(zone = 'UTC', parameter = 'zone'): CivilClock {
+/** The clock of an IANA zone, printing `words`' language; a zone it does not know is an InputError naming `parameter`. */
+export function civilClock(zone = 'UTC', parameter = 'zone', words: ClockWords = CLOCK_ENGLISH): CivilClock {
   if (!isKnownTimeZone(zone)) throw new InputError(parameter, 'an IANA time zone such as Australia/Adelaide or America/Chicago, or UTC', zone);
   // The wall clock is computed here (instant + its own offset, then rounded to the minute) and formatted in UTC,
   // so that a time and the zone printed beside it always come from the same offset, seconds included.
-  const timeFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
-  const dateFormat = new Intl.DateTimeFormat('en-GB', { timeZone: 'UTC', day: 'numeric', month: 'long', year: 'numeric' });
+  const timeFormat = new Intl.DateTimeFormat(words.locale, { timeZone: 'UTC', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+  const dateFormat = new Intl.DateTimeFormat(words.locale, { timeZone: 'UTC', day: 'numeric', month: 'long', year: 'numeric' });
+  /** A Julian-calendar date in the same words as the Gregorian ones. */
+  const julianWords = dateWordsIn(words);
   // Each English names its own zones: British (CET, BST), American (CST), Australian (AEDT), Indian (IST), New Zealand (NZDT).
   const shortNames = ['en-GB', 'en-US', 'en-AU', 'en-IN', 'en-NZ'].map((locale) => new Intl.DateTimeFormat(locale, { timeZone: zone, timeZoneName: 'short' }));
   const offsetName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'longOffset' });
   // Where no English has an abbreviation, the zone's common long name ("Japan Standard Time"), when Intl has one.
-  const longName = new Intl.DateTimeFormat('en-US', { timeZone: zone, timeZoneName: 'long' });
+  // In another language, that language's own long name ("Ostafrikanische Zeit").
+  const longName = new Intl.DateTimeFormat(words === CLOCK_ENGLISH ? 'en-US' : words.locale, { timeZone: zone, timeZoneName: 'long' });
   const part = (format: Intl.DateTimeFormat, utDays: number) =>
     format.formatToParts(dateFromDays(utDays)).find((p) => p.type === 'timeZoneName')?.value ?? '';
   const isUtc = zone.toUpperCase() === 'UTC' || zone === 'Etc/UTC';
@@ -138,11 +186,12 @@ export function civilClock(zone = 'UTC', parameter = 'zone'): CivilClock {
   };
   self = {
     zone: isUtc ? 'UTC' : zone,
+    words,
     time,
     date(utDays) {
       const wall = wallMinute(utDays);
-      const julian = julianDateOfUtcDay(wall);
-      return julian ? `${dateFormat.format(wall)} (Julian: ${julian})` : dateFormat.format(wall);
+      const julian = julianDateOfUtcDay(wall, julianWords);
+      return julian ? `${dateFormat.format(wall)}${words.julianBeside(julian)}` : dateFormat.format(wall);
     },
     isoDate: (utDays) => wallMinute(utDays).toISOString().slice(0, 10),
     zoneLabel,
@@ -164,9 +213,9 @@ export function civilClock(zone = 'UTC', parameter = 'zone'): CivilClock {
         // The last minute of the old offset, on the old clock: "until 03:00 NZDT".
         const before = c.utDays - SECOND_DAYS;
         const oldClock = timeFormat.format(wallMinute(c.utDays, offsetSeconds(before)));
-        return `${c.before} until ${oldClock} ${abbreviation(before)}`;
+        return words.until(c.before, `${oldClock} ${abbreviation(before)}`);
       });
-      return `${zone} (${parts.join(', then ')}, then ${changes[changes.length - 1]!.after})`;
+      return `${zone} (${parts.join(words.then)}${words.then}${changes[changes.length - 1]!.after})`;
     },
     rfc3339(utDays) {
       const instantMs = Math.round(dateFromDays(utDays).getTime() / 1000) * 1000;

@@ -15,8 +15,7 @@ export function calendarDaysApart(clock: CivilClock, utDays: number, referenceUt
 /** "" on the reference date, else " +1 day", " −1 day", " +2 days". */
 export function dayMark(clock: CivilClock, utDays: number, referenceUtDays: number): string {
   const days = calendarDaysApart(clock, utDays, referenceUtDays);
-  if (days === 0) return '';
-  return ` ${days > 0 ? '+' : '−'}${Math.abs(days)} ${Math.abs(days) === 1 ? 'day' : 'days'}`;
+  return days === 0 ? '' : clock.words.dayMark(days);
 }
 
 /** A time with its day mark: "01:13 +1 day". */

@@ -17,7 +17,7 @@ import { angularDistanceDeg } from '../sphere/circles.ts';
 import { capOutline, PAINTED_ZONES, visibilityZonePolygons } from '../visibility/lunar/zones.ts';
 import { stage, visibilityEvaluator, type Visibility } from '../visibility/lunar/visibility.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from '../sphere/world.ts';
+import { detailForScale, loadBasemap, type BasemapDetail, type BorderStyle } from '../sphere/world.ts';
 import { thinnedProjection } from './thin.ts';
 import { fitView, pixelsPerDegree, type Frame, type View } from './projection.ts';
 import type { Theme } from './theme.ts';
@@ -26,7 +26,7 @@ import { FONT_CREDIT, measureText, type TextStyle } from './typography.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
 import { crossingsAtY, curveLabel, hexLightness, lineHitCounter, markElements, mixHex, type MapMark } from './labels.ts';
 import { basemapLayers, boundaryLight, boundaryStrong, centreMark, fieldStroke, lineSwatch, strokedPath, townSymbol, zoneSwatch } from './layers.ts';
-import { boundaryLabel, fieldLineLabel, mapLegendWords, mapTexts } from '../words/lunar/figures.ts';
+import { boundaryLabel, fieldLineLabel, LUNAR_FIGURES_ENGLISH, mapLegendWords, mapTexts, type LunarFigureWords } from '../words/lunar/figures.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box } from './draw.ts';
 
 export interface MapStyle {
@@ -42,6 +42,8 @@ export interface MapStyle {
   readonly markClock?: MarkClock;
   /** A solar map: show the eclipse's path rather than `view` (the card preset's default; lunar maps ignore it). */
   readonly fitPath?: boolean;
+  /** Every word on the map, in the reader's language (default English). */
+  readonly words?: LunarFigureWords;
 }
 
 export type { MapMark } from './labels.ts';
@@ -101,8 +103,8 @@ export const BASEMAP_THINNING_PX = 0.5;
 
 
 /** The map's title, subtitle and small print (words/lunar/figures.ts), with this stage's credits. */
-export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string) {
-  return mapTexts(eclipse, clock, deltaTLabel, generator, { basemap: BASEMAP_CREDIT, font: FONT_CREDIT }, customTitle);
+export function sceneTexts(eclipse: LunarEclipse, clock: CivilClock, deltaTLabel: string, generator: string, customTitle?: string, words: LunarFigureWords = LUNAR_FIGURES_ENGLISH) {
+  return mapTexts(eclipse, clock, deltaTLabel, generator, { basemap: words.common.credits.basemap, font: FONT_CREDIT }, customTitle, words);
 }
 
 /**
@@ -175,13 +177,14 @@ export function composeScene(input: SceneInput): Scene {
   const { unit, margin } = layout;
   const H = size.heightPx;
 
-  const deltaTLabel = `${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source})`;
-  const texts = sceneTexts(eclipse, clock, deltaTLabel, input.generator, style.title);
+  const language = style.words ?? LUNAR_FIGURES_ENGLISH;
+  const deltaTLabel = `${eclipse.deltaT.seconds.toFixed(1)} s (${language.common.deltaTSources[eclipse.deltaT.source]})`;
+  const texts = sceneTexts(eclipse, clock, deltaTLabel, input.generator, style.title, language);
 
   // Legend entries, each swatch drawn with its layer's own spec.
   const zoneSpan = visibility.zoneSpan;
   const marksGiven = (input.marks ?? []).length > 0;
-  const words = mapLegendWords(eclipse, visibility.fieldSpan.phase, visibility.stages.map((s) => s.name).filter((n) => n !== 'greatest'), style.markClock === 'town');
+  const words = mapLegendWords(eclipse, visibility.fieldSpan.phase, visibility.stages.map((s) => s.name).filter((n) => n !== 'greatest'), style.markClock === 'town', language);
   const strongLine = boundaryStrong(theme);
   const lightLine = boundaryLight(theme);
   const fieldLine = fieldStroke(theme);
@@ -303,7 +306,7 @@ export function composeScene(input: SceneInput): Scene {
       // West of the sub-lunar point the Earth turns places into the Moon-up cap: the Moon rises there.
       const [lon] = ring[crossing.index]!;
       const rising = ((lon! - s.cap.centre[0] + 540) % 360) - 180 < 0;
-      const words = boundaryLabel(rising, s.name, eclipse.kind, stageTime(at));
+      const words = boundaryLabel(rising, s.name, eclipse.kind, stageTime(at), language);
       const tag = s.name === 'greatest' ? '' : s.name;
       const a = ring[crossing.index]!;
       const b = ring[Math.min(crossing.index + 1, ring.length - 1)]!;
@@ -334,9 +337,9 @@ export function composeScene(input: SceneInput): Scene {
     const points = l.line.map(onPage);
     for (const { point: [x, y] } of crossingsAtY(points, targetY, frame).slice(0, 1)) {
       // Kept inside the frame, as the line labels are.
-      const half = measureText(fieldLineLabel(l.minutes), fieldLabelStyle) / 2 + 2.2 * unit;
+      const half = measureText(fieldLineLabel(l.minutes, language), fieldLabelStyle) / 2 + 2.2 * unit;
       const cx = Math.min(Math.max(x, frame.x + half), frame.x + frame.width - half);
-      label(fieldLineLabel(l.minutes), cx, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
+      label(fieldLineLabel(l.minutes, language), cx, y + fieldLabelStyle.sizePx * 0.35, fieldLabelStyle);
     }
   }
   overlay.push(...labels);
@@ -370,7 +373,7 @@ export function composeScene(input: SceneInput): Scene {
     const inFrame = (b: Box) =>
       b.left >= frame.x && b.right <= frame.x + frame.width && b.top >= frame.y && b.bottom <= frame.y + frame.height &&
       ([[b.left, b.top], [b.right, b.top], [b.left, b.bottom], [b.right, b.bottom]] as [number, number][]).every(onSphere);
-    for (const area of AREA_NAMES) {
+    for (const area of AREA_NAMES.map((a) => ({ ...a, name: (language.common.mapAreas as Readonly<Record<string, string>>)[a.name] ?? a.name }))) {
       const spots = area.anchors.flatMap((anchor) => {
         const p = onPage([anchor[0], anchor[1]]);
         if (!p) return [];

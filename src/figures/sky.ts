@@ -10,7 +10,7 @@ import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import type { AltitudeSample, LocalEvent, SkyClass } from '../local/lunar.ts';
 import { compassPoint, phaseAt, skyClass } from '../local/lunar.ts';
-import { SKY_HORIZON, SKY_PHASE_WORDS, SKY_WORDS, skyEventLabel, skySmallPrint, skyTitle } from '../words/lunar/figures.ts';
+import { LUNAR_FIGURES_ENGLISH, skyEventLabel, skySmallPrint, skyTitle, type LunarFigureWords } from '../words/lunar/figures.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
 import { fillSwatch, trackPath, trackSwatch } from './layers.ts';
@@ -29,6 +29,8 @@ export interface SkySceneInput {
   readonly generator: string;
   readonly credits: string;
   readonly title?: string;
+  /** The figure's words, in the reader's language (default English). */
+  readonly words?: LunarFigureWords;
 }
 
 export interface SkyScene {
@@ -73,23 +75,28 @@ export function localHourTicks(clock: CivilClock, fromUtDays: number, toUtDays: 
 
 export function composeSkyScene(input: SkySceneInput): SkyScene {
   const { eclipse, clock, theme, size, track, events } = input;
+  const words = input.words ?? LUNAR_FIGURES_ENGLISH;
+  // Compass letters in the language's own (the hemisphere letters: N, S, E, O in Spanish).
+  const h = words.common.hemispheres;
+  const letters: Record<string, string> = { N: h.north, S: h.south, E: h.east, W: h.west };
+  const compassText = (azimuthDeg: number) => [...compassPoint(azimuthDeg)].map((c) => letters[c] ?? c).join('');
 
-  const title = input.title ?? skyTitle(eclipse, input.placeName, clock);
+  const title = input.title ?? skyTitle(eclipse, input.placeName, clock, words);
   const first = track[0]!.moment.utDays;
   const last = track[track.length - 1]!.moment.utDays;
   const zoneName = clock.zoneDescriptionBetween(first, last);
   // When the clocks change inside the figure, every time on it carries its own zone's name.
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays) : clock.time(utDays));
-  const smallPrint = skySmallPrint(eclipse, zoneName, input.generator, { places: input.credits, font: FONT_CREDIT });
+  const smallPrint = skySmallPrint(eclipse, zoneName, input.generator, { places: input.credits, font: FONT_CREDIT }, words);
 
   // Legend: the sky's classes and the track's phases, each swatch drawn as its layer is.
   const unitOf = layoutFor(size).unit;
   const legend: LegendEntry[] = [
-    ...SKY_ORDER.map((k) => ({ label: SKY_WORDS[k], swatch: fillSwatch(theme.sky[k], theme, unitOf) })),
-    { label: SKY_PHASE_WORDS.penumbral, swatch: trackSwatch(theme.track.penumbral, theme, unitOf) },
-    { label: SKY_PHASE_WORDS.partial, swatch: trackSwatch(theme.track.partial, theme, unitOf) },
-    ...(eclipse.kind === 'total' ? [{ label: SKY_PHASE_WORDS.total, swatch: trackSwatch(theme.track.total, theme, unitOf) }] : []),
+    ...SKY_ORDER.map((k) => ({ label: words.sky.classes[k], swatch: fillSwatch(theme.sky[k], theme, unitOf) })),
+    { label: words.sky.phases.penumbral, swatch: trackSwatch(theme.track.penumbral, theme, unitOf) },
+    { label: words.sky.phases.partial, swatch: trackSwatch(theme.track.partial, theme, unitOf) },
+    ...(eclipse.kind === 'total' ? [{ label: words.sky.phases.total, swatch: trackSwatch(theme.track.total, theme, unitOf) }] : []),
   ];
   const page = pageFrame({
     size, theme, id: 'sky', title, subtitle: input.summary, description: `${input.summary} ${smallPrint}`, smallPrint, legend,
@@ -140,7 +147,7 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     out.push(`<path d="M${n2(plot.left)},${n2(gy)}H${n2(plot.right)}" stroke="${alt === 0 ? theme.text : theme.graticule}" stroke-width="${n2((alt === 0 ? 1.4 : 0.5) * unit)}" stroke-opacity="${alt === 0 ? 1 : 0.45}"/>`);
     out.push(textElement(`${alt < 0 ? '−' : ''}${Math.abs(alt)}°`, plot.left - 6 * unit, gy + axisStyle.sizePx * 0.35, axisStyle, theme.textMuted, 'end'));
   }
-  out.push(labelElement(SKY_HORIZON, plot.left + 34 * unit, y(0) - 5 * unit, { sizePx: axisStyle.sizePx, weight: 'regular' }, theme, unit));
+  out.push(labelElement(words.sky.horizon, plot.left + 34 * unit, y(0) - 5 * unit, { sizePx: axisStyle.sizePx, weight: 'regular' }, theme, unit));
 
   // Hour ticks in local time: each whole hour of the clock in force at that instant, so that a
   // clock change inside the figure shows as a repeated or skipped hour, each labelled with its zone.
@@ -198,16 +205,16 @@ export function composeSkyScene(input: SkySceneInput): SkyScene {
     if (sample.moonAltitudeDeg < 2) continue;
     const cx = x(sample.moment.utDays);
     const cy = y(sample.moonAltitudeDeg) + 16 * unit + compassStyle.sizePx * 0.5;
-    const box = plateBox(compassPoint(sample.moonAzimuthDeg), cx, cy, compassStyle, unit);
+    const box = plateBox(compassText(sample.moonAzimuthDeg), cx, cy, compassStyle, unit);
     if (cy > plot.bottom - 4 * unit || taken.some((b) => overlaps(b, box))) continue;
     taken.push(box);
-    compassMarks.push({ text: compassPoint(sample.moonAzimuthDeg), utDays: sample.moment.utDays, plate: box });
-    out.push(labelElement(compassPoint(sample.moonAzimuthDeg), cx, cy, compassStyle, theme, unit));
+    compassMarks.push({ text: compassText(sample.moonAzimuthDeg), utDays: sample.moment.utDays, plate: box });
+    out.push(labelElement(compassText(sample.moonAzimuthDeg), cx, cy, compassStyle, theme, unit));
   }
   for (const event of shown) {
     const px = x(event.moment.utDays);
     const py = y(event.moonAltitudeDeg);
-    const text = skyEventLabel(event.event as ContactName | 'greatest' | 'moonrise' | 'moonset', timeText(event.moment.utDays));
+    const text = skyEventLabel(event.event as ContactName | 'greatest' | 'moonrise' | 'moonset', timeText(event.moment.utDays), words);
     out.push(`<circle cx="${n2(px)}" cy="${n2(py)}" r="${n2(4 * unit)}" fill="${theme.paper}" stroke="${theme.text}" stroke-width="${n2(1.4 * unit)}"/>`);
     const step = labelStyle.sizePx * 1.3;
     const spots = [-12 * unit, 12 * unit + labelStyle.sizePx * 0.8, -12 * unit - step, 12 * unit + labelStyle.sizePx * 0.8 + step, -12 * unit - 2 * step]

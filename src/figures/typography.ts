@@ -189,6 +189,12 @@ export function wrapText(text: string, style: TextStyle, maxWidthPx: number): st
   return lines;
 }
 
+/** The characters of a text the bundled type has no glyph for (drawn as its missing-glyph box), each once. */
+export function missingGlyphs(text: string, weight: FontWeight = 'regular'): string[] {
+  const f = font(weight);
+  return [...new Set(text)].filter((char) => !/\s/.test(char) || char === '\u00a0' ? f.charToGlyph(char).index === 0 : false);
+}
+
 /** Shorten a line with an ellipsis until it fits. */
 export function fitText(text: string, style: TextStyle, maxWidthPx: number): string {
   if (measureText(text, style) <= maxWidthPx) return text;

@@ -9,8 +9,8 @@ import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { loadBasemap } from '../sphere/world.ts';
 import { continentShares, countryShares, type ContinentShare, type CountryShare } from '../visibility/lunar/countries.ts';
 import type { Visibility, ZoneName } from '../visibility/lunar/visibility.ts';
-import { countryName, formatDuration, listWords } from '../words/common.ts';
-import { LUNAR_ENGLISH, type ContinentShareWord } from '../words/lunar/text.ts';
+import { countryName, decimalIn, formatDuration, listWords, type ContinentName } from '../words/common.ts';
+import { LUNAR_ENGLISH, type ContinentShareWord, type LunarWords } from '../words/lunar/text.ts';
 
 export interface Caption {
   readonly caption: string;
@@ -59,8 +59,8 @@ function continentsIn(continents: readonly ContinentShare[], zone: ZoneName, nam
     .map((c) => ({ name: c.name, share: c.shares[zone] >= WHOLE_CONTINENT_SHARE && !namedElsewhere.has(c.name) ? 'whole' : c.shares[zone] > 0.5 ? 'most' : 'parts' }));
 }
 
-export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, clock: CivilClock, extra?: string): Caption {
-  const words = LUNAR_ENGLISH;
+/** `words`: the reader's language (default English); `clock` should print the same language (words.common.clock). */
+export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, clock: CivilClock, extra?: string, words: LunarWords = LUNAR_ENGLISH): Caption {
   const w = words.caption;
   const duration = (minutes: number) => formatDuration(minutes * 60, 'long', words.common);
   const list = (items: readonly string[]) => listWords(items, words.common);
@@ -75,16 +75,16 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
   const facts = [
     w.title(words.kindTitle[eclipse.kind], clock.date(at)),
     eclipse.kind === 'penumbral'
-      ? w.penumbralFacts(clock.stamp(at), figures.penumbralMagnitude, duration(figures.minutes.penumbral), range(c.P1!.utDays, c.P4!.utDays))
+      ? w.penumbralFacts(clock.stamp(at), decimalIn(figures.penumbralMagnitude, words.common), duration(figures.minutes.penumbral), range(c.P1!.utDays, c.P4!.utDays))
       : w.umbralFacts(
         clock.stamp(at),
-        figures.umbralMagnitude,
+        decimalIn(figures.umbralMagnitude, words.common),
         eclipse.kind === 'total' ? { duration: duration(figures.minutes.total!), span: range(c.U2!.utDays, c.U3!.utDays) } : undefined,
         duration(figures.minutes.partial!),
         range(c.U1!.utDays, c.U4!.utDays),
       ),
   ];
-  const say = (items: readonly { name: string; share: ContinentShareWord }[]) => items.map((c) => w.continent(c.name, c.share));
+  const say = (items: readonly { name: string; share: ContinentShareWord }[]) => items.map((c) => w.continent((words.common.continents as Readonly<Record<string, string>>)[c.name as ContinentName] ?? c.name, c.share));
   const named = namedCountries(countries);
   /** Continents with a country named under some other zone than `zone`. */
   const namedOutside = (zone: ZoneName) => new Set([...named].filter(([z]) => z !== zone).flatMap(([, list]) => list.map((c) => c.continent!)));
@@ -106,6 +106,6 @@ export function eclipseCaption(eclipse: LunarEclipse, visibility: Visibility, cl
 }
 
 /** The caption file published beside a picture. */
-export function captionText(caption: Caption): string {
-  return LUNAR_ENGLISH.caption.file(caption.caption, caption.altText);
+export function captionText(caption: Caption, words: LunarWords = LUNAR_ENGLISH): string {
+  return words.caption.file(caption.caption, caption.altText);
 }

@@ -10,9 +10,10 @@ import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { fixed, PRINTED_PLACES } from '../eclipses/lunar/figures.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, CatalogueRecord, EclipseRecord, SolarEclipseRecord } from './catalogueRecord.ts';
-import { formatDuration } from '../words/common.ts';
-import { LUNAR_ENGLISH } from '../words/lunar/text.ts';
+import { decimalIn, deltaTModelIn, formatDuration } from '../words/common.ts';
+import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
 import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
+import { dateWordsIn } from '../ephemeris/civilTime.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
 export const CATALOGUE_FORMATS: readonly CatalogueFormat[] = ['table', 'json', 'csv'];
@@ -76,19 +77,23 @@ const BOTH = {
   centralSeconds: (seconds: number) => `${Math.floor(seconds / 60)}m ${String(seconds % 60).padStart(2, '0')}s`,
 } as const;
 
-/** `bodies`: which kinds were searched (lunar, solar or all), for the heading's count when none was found. */
-export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar' | 'all' = 'lunar'): string {
-  const words = LUNAR_ENGLISH;
+/**
+ * `bodies`: which kinds were searched (lunar, solar or all), for the heading's count when none was found;
+ * `words`: the language of a table of lunar eclipses (default English; a table holding solar eclipses is English so far).
+ */
+export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar' | 'all' = 'lunar', words: LunarWords = LUNAR_ENGLISH): string {
   const w = words.table;
+  const decimal = (text: string) => decimalIn(text, words.common);
+  const julianOf = (id: string) => julianDateOfIsoDate(id, dateWordsIn(words.common.clock));
   const solar = doc.eclipses.filter(isSolar);
   const both = solar.length > 0;
   const header = both ? BOTH.header : w.catalogueHeader;
   const numeric = both ? BOTH.numeric : [false, false, false, true, true, true, true, true, true];
   const minutes = (value: number | undefined) => (value !== undefined ? formatDuration(value * 60, 'compact', words.common) : w.absent);
-  const date = (id: string) => (julianDateOfIsoDate(id) ? w.julianBeside(id, julianDateOfIsoDate(id)!) : id);
+  const date = (id: string) => (julianOf(id) ? w.julianBeside(id, julianOf(id)!) : id);
   // Every lunar figure as printed elsewhere: rounded once, from the full value (record.printed).
   const lunarRow = (e: EclipseRecord): string[] => {
-    const figures = [e.printed.umbralMagnitude, e.printed.penumbralMagnitude, e.printed.gamma, minutes(e.printed.minutes.partial), minutes(e.printed.minutes.total)];
+    const figures = [decimal(e.printed.umbralMagnitude), decimal(e.printed.penumbralMagnitude), decimal(e.printed.gamma), minutes(e.printed.minutes.partial), minutes(e.printed.minutes.total)];
     return both
       ? [date(e.id), BOTH.body.lunar, words.kind[e.kind], e.printed.greatestUtc, ...figures, w.absent, w.absent, String(e.saros)]
       : [date(e.id), words.kind[e.kind], e.printed.greatestUtc, ...figures, String(e.saros)];
@@ -104,7 +109,7 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (cells: readonly string[]) =>
     cells.map((c, i) => (numeric[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
-  const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].join(', ');
+  const sources = [...new Set(doc.eclipses.map((e) => e.deltaTSource))].map((s) => (words.common.deltaTSources as Readonly<Record<string, string>>)[s] ?? s).join(', ');
   const deltaTs = doc.eclipses.map((e) => e.deltaT);
   const counted = bodies === 'solar' ? BOTH.solarEclipses(solar.length)
     : bodies === 'all' ? BOTH.eclipses(doc.eclipses.length - solar.length, solar.length) : w.eclipses(doc.eclipses.length);
@@ -113,7 +118,7 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
   const radii = solar[0]?.moonRadius;
   const notes = [
     w.catalogueTimes(words.convention[doc.convention], julian),
-    deltaTs.length > 0 ? w.deltaTNote(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)]), sources, doc.deltaTModel) : w.deltaTModelOnly(doc.deltaTModel),
+    deltaTs.length > 0 ? w.deltaTNote(decimal(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)])), sources, deltaTModelIn(doc.deltaTModel, words.common)) : w.deltaTModelOnly(deltaTModelIn(doc.deltaTModel, words.common)),
     ...(both ? [BOTH.magnitudeNote, BOTH.solarNote(radii!.penumbra, radii!.umbra)] : []),
   ];
   // The caution first, whenever a solar eclipse is listed.

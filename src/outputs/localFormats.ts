@@ -5,12 +5,12 @@
 import { stringify } from 'csv-stringify/sync';
 import { fixed } from '../eclipses/lunar/figures.ts';
 import { DATA_CALENDAR, julianDateOfIsoDate } from '../ephemeris/calendar.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { civilClock, dateWordsIn, type CivilClock } from '../ephemeris/civilTime.ts';
 import { isoMinutes, isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import { localCircumstances, upIntervals, type LocalCircumstances, type LocalEvent, type LocalEventName } from '../local/lunar.ts';
-import { coordinatesText } from '../words/common.ts';
-import { LUNAR_ENGLISH, localSummary, type LunarPhaseKey } from '../words/lunar/text.ts';
+import { coordinatesText, decimalIn } from '../words/common.ts';
+import { LUNAR_ENGLISH, localSummary, type LunarPhaseKey, type LunarWords } from '../words/lunar/text.ts';
 
 export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
@@ -23,16 +23,23 @@ export interface LocalReport {
   readonly place: PlaceLabel;
   readonly clock: CivilClock;
   readonly summary: string;
+  /** The reader's language: every word of the formats, and the figures' drawn from it (default English). */
+  readonly words?: LunarWords;
 }
 
-/** Everything the local formats print, for one eclipse and one place in its clock. */
-export function localReport(eclipse: LunarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }): LocalReport {
-  const { place, clock } = chosen;
+/** A report's language. */
+export const wordsOf = (report: LocalReport): LunarWords => report.words ?? LUNAR_ENGLISH;
+
+/**
+ * Everything the local formats print, for one eclipse and one place in its clock, in `words`' language
+ * (default English); the clock is made to print the same language.
+ */
+export function localReport(eclipse: LunarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }, words: LunarWords = LUNAR_ENGLISH): LocalReport {
+  const { place } = chosen;
+  const clock = chosen.clock.words === words.common.clock ? chosen.clock : civilClock(chosen.clock.zone, 'zone', words.common.clock);
   const local = localCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
-  return { local, place, clock, summary: localSummary(local, clock, place.name) };
+  return { local, place, clock, summary: localSummary(local, clock, place.name, words), words };
 }
-
-const WORDS = LUNAR_ENGLISH;
 
 const round1 = (v: number) => Math.round(v * 10) / 10;
 /** Altitudes in data outputs: to 0.01°. */
@@ -72,17 +79,18 @@ export function localJson(report: LocalReport): string {
 
 function rows(report: LocalReport): string[][] {
   const { clock } = report;
-  const w = WORDS.local;
+  const w = wordsOf(report).local;
+  const decimal = (text: string) => decimalIn(text, wordsOf(report).common);
   return report.local.events.map((e: LocalEvent) => [
     w.eventLabel[e.event] ?? e.event,
     w.events[e.event],
     `${clock.isoDate(e.moment.utDays)} ${clock.stamp(e.moment.utDays)}`,
     isoMinutes(e.moment.utDays).slice(11, 16),
     // Rounded once, from the full value (an azimuth of 67.46° is 67°, not 67.5° and then 68°).
-    `${fixed(e.moonAltitudeDeg, 1)}°`,
+    `${decimal(fixed(e.moonAltitudeDeg, 1))}°`,
     `${Math.round(e.moonAzimuthDeg) % 360}°`,
     e.moonUp ? w.yes : w.no,
-    `${fixed(e.sunAltitudeDeg, 1)}°`,
+    `${decimal(fixed(e.sunAltitudeDeg, 1))}°`,
     w.sky[e.sky],
   ]);
 }
@@ -93,23 +101,25 @@ function headerFor(report: LocalReport): string[] {
   const first = local.events[0]!.moment.utDays;
   const changes = clock.offsetChanges(first, local.events[local.events.length - 1]!.moment.utDays);
   const zone = changes.length === 0 ? clock.zoneLabel(local.eclipse.greatest.utDays) : [clock.zoneLabel(first), ...changes.map((c) => c.after)].join(' → ');
-  return [...WORDS.local.header(zone)];
+  return [...wordsOf(report).local.header(zone)];
 }
 
 function titleOf(report: LocalReport): string {
   const { local, place } = report;
+  const words = wordsOf(report);
   const e = local.eclipse;
-  return WORDS.local.title(WORDS.kindTitle[e.kind], e.id, julianDateOfIsoDate(e.id), place.name, coordinatesText(place.latDeg, place.lonDeg, WORDS.common), place.tz);
+  return words.local.title(words.kindTitle[e.kind], e.id, julianDateOfIsoDate(e.id, dateWordsIn(report.clock.words)), place.name, coordinatesText(place.latDeg, place.lonDeg, words.common), place.tz);
 }
 
 function notes(report: LocalReport): string[] {
   const e = report.local.eclipse;
   const events = report.local.events;
   const zone = report.clock.zoneDescriptionBetween(events[0]!.moment.utDays, events[events.length - 1]!.moment.utDays);
-  const w = WORDS.local;
+  const words = wordsOf(report);
+  const w = words.local;
   return [
     w.timeNote(zone, julianDateOfIsoDate(e.id) ? w.julianNote : ''),
-    w.shadowNote(WORDS.convention[e.convention], e.deltaT.seconds, e.deltaT.source, WORDS.common.predictions),
+    decimalIn(w.shadowNote(words.convention[e.convention], e.deltaT.seconds, words.common.deltaTSources[e.deltaT.source], words.common.predictions), words.common),
   ];
 }
 
@@ -203,7 +213,7 @@ export function localIcs(report: LocalReport, generator: string): string {
   const events = local.events;
   const find = (name: LocalEventName) => events.find((e) => e.event === name);
   const intervals = upIntervals(local);
-  const w = WORDS.calendar;
+  const w = wordsOf(report).calendar;
   const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
   for (const phase of PHASES) {
     const title = w.phaseTitle[phase.key];
@@ -228,7 +238,7 @@ export function localIcs(report: LocalReport, generator: string): string {
         `SUMMARY:${icsText(`${title}${cut ? w.cutToMoonUpShort : ''}`)}`,
         `LOCATION:${icsText(place.name)}`,
         `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-        `DESCRIPTION:${icsText(w.description(title, local.eclipse.id, cut, report.summary, WORDS.nakedEyeInCalendar))}`,
+        `DESCRIPTION:${icsText(w.description(title, local.eclipse.id, cut, report.summary, wordsOf(report).nakedEyeInCalendar))}`,
         'TRANSP:TRANSPARENT',
         'END:VEVENT',
       );

@@ -10,7 +10,8 @@ import { composeScene, type MapMark, type MapSize, type MapStyle, type Scene } f
 import { isRasterFormat, rasteriseSet } from '../raster/raster.ts';
 import { localCircumstances } from '../local/lunar.ts';
 import { visibilityOf, type Visibility } from '../visibility/lunar/visibility.ts';
-import { eclipseCaption, type Caption } from './caption.ts';
+import { captionText, eclipseCaption, type Caption } from './caption.ts';
+import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
 import { visibilityGeoJson } from './geojson.ts';
 import type { PlaceLabel } from './localFormats.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
@@ -31,6 +32,8 @@ export interface MapRequest {
   readonly generator: string;
   /** Places to mark, labelled on the map's clock or (style.markClock 'town') each in its own zone. */
   readonly marks?: readonly PlaceLabel[];
+  /** The reader's language of the caption and mark labels (default English); the map's own words come with `style.words`. */
+  readonly words?: LunarWords;
 }
 
 export interface MapFile {
@@ -44,8 +47,9 @@ export interface MapFile {
  * "Adelaide · greatest 17:29 ACDT", "Sydney · rises 19:14 AEDT", "Cairo · not seen"; given the
  * map's clock, on that clock with no zone name (the small print names it) and a day mark off the title's date.
  */
-export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: CivilClock): string {
-  const clock = civilClock(place.tz);
+export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: CivilClock, words: LunarWords = LUNAR_ENGLISH): string {
+  const clock = civilClock(place.tz, 'zone', words.common.clock);
+  const w = words.figures.mark;
   const local = localCircumstances(eclipse, place);
   // One clock per map: the map's zone is named in its header, so a mark gives the time and, off the title's day, a day mark;
   // if that clock changes during the eclipse, each time names its own zone. A town's own clock always names its zone.
@@ -58,9 +62,9 @@ export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: C
   const rise = local.events.find((e) => e.event === 'moonrise');
   const set = local.events.find((e) => e.event === 'moonset');
   const phrase = greatest.moonUp
-    ? `greatest ${when(greatest.moment.utDays)}`
-    : rise ? `rises ${when(rise.moment.utDays)}`
-      : set ? `sets ${when(set.moment.utDays)}` : 'not seen';
+    ? `${w.greatest} ${when(greatest.moment.utDays)}`
+    : rise ? `${w.rises} ${when(rise.moment.utDays)}`
+      : set ? `${w.sets} ${when(set.moment.utDays)}` : w.notSeen;
   return `${place.name} · ${phrase}`;
 }
 
@@ -143,19 +147,20 @@ export async function renderMapFiles(
   thumbnailWidthPx?: number,
 ): Promise<{ files: Map<MapFormat, Uint8Array>; scene?: Scene; caption: Caption; thumbnail?: Uint8Array }> {
   const visibility = visibilityOf(request.eclipse);
-  const caption = eclipseCaption(request.eclipse, visibility, request.style.clock);
+  const words = request.words ?? LUNAR_ENGLISH;
+  const caption = eclipseCaption(request.eclipse, visibility, request.style.clock, undefined, words);
   const files = new Map<MapFormat, Uint8Array>();
   const pictures = formats.filter((f) => f !== 'geojson');
   if (pictures.length === 0 && thumbnailWidthPx === undefined) {
     for (const format of formats) files.set(format, geoJsonBytes(visibility));
     return { files, caption };
   }
-  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p, request.style.markClock === 'town' ? undefined : request.style.clock) }));
+  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: markLabel(request.eclipse, p, request.style.markClock === 'town' ? undefined : request.style.clock, words) }));
   const scene = composeScene({ eclipse: request.eclipse, visibility, style: request.style, size: request.size, generator: request.generator, marks });
   const rasters = await rasteriseSet(
     scene.svg,
     formats.filter(isRasterFormat),
-    { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` },
+    { dpi: request.dpi, title: scene.title, description: captionText(caption, words).trim().replace(/\n+/g, ' ') },
     thumbnailWidthPx,
   );
   for (const format of formats) {

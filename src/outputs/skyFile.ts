@@ -4,12 +4,11 @@ import { momentFromUT } from '../ephemeris/time.ts';
 import type { PageSize } from '../figures/draw.ts';
 import { composeSkyScene } from '../figures/sky.ts';
 import type { Theme } from '../figures/theme.ts';
-import { GAZETTEER_CREDIT } from '../places/gazetteer.ts';
 import { rasterise } from '../raster/raster.ts';
 import { altitudeTrack } from '../local/lunar.ts';
 import { skyCaption } from '../words/lunar/figures.ts';
 import type { SkyFormat } from './formatNames.ts';
-import type { LocalReport } from './localFormats.ts';
+import { wordsOf, type LocalReport } from './localFormats.ts';
 
 /** The figure shows an hour either side of the eclipse. */
 const MARGIN_DAYS = 1 / 24;
@@ -26,7 +25,7 @@ export interface SkyRequest {
 
 /** The caption file published beside a sky figure: its title and summary, then alt text (words/lunar/figures.ts). */
 export function skyCaptionText(title: string, report: LocalReport): string {
-  return skyCaption(title, report.summary, report.place.name);
+  return skyCaption(title, report.summary, report.place.name, wordsOf(report).figures);
 }
 
 export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
@@ -49,7 +48,8 @@ export async function renderSkyFile(request: SkyRequest): Promise<{ bytes: Uint8
     theme: request.theme,
     size: request.size,
     generator: request.generator,
-    credits: report.place.name.includes('°') ? '' : `${GAZETTEER_CREDIT}.`,
+    credits: report.place.name.includes('°') ? '' : `${wordsOf(report).common.credits.places}.`,
+    words: wordsOf(report).figures,
     ...(request.title !== undefined ? { title: request.title } : {}),
   });
   const caption = skyCaptionText(scene.title, report);

@@ -17,6 +17,8 @@ import { AREA_NAMES_CHOICES, type AreaNamesChoice } from '../figures/areaNames.t
 import type { MapStyle } from '../figures/map.ts';
 import { BBOX_EXPECTED, checkNumber, checkPixelSize, isBoundingBox, isLonLat, LAT_LON_EXPECTED, type PixelSize } from './read.ts';
 import { choosePlace } from './choose.ts';
+import { chooseLanguage, LANGUAGES } from './language.ts';
+import type { LunarWords } from '../words/lunar/text.ts';
 
 /** A title longer than this would not fit any page we draw. */
 export const MAX_TITLE_CHARS = 300;
@@ -115,6 +117,8 @@ export interface MapChoices extends ViewChoice, PageChoice {
   readonly marks: readonly string[];
   readonly markClock: MarkClock;
   readonly areaNames: AreaNamesChoice;
+  /** BCP 47 tag of the reader's language (default English). */
+  readonly lang?: string;
 }
 
 /** The defaults of what a map is asked for (the command line's and the house style's). */
@@ -128,6 +132,8 @@ export interface MapSettings {
   readonly size: PixelSize;
   readonly dpi: number;
   readonly marks: readonly PlaceLabel[];
+  /** The caption's and mark labels' words, in the reader's language (the map's own are style.words). */
+  readonly words: LunarWords;
 }
 
 export function mapSettings(choices: MapChoices): MapSettings {
@@ -135,7 +141,8 @@ export function mapSettings(choices: MapChoices): MapSettings {
   const { size, dpi } = pageSize(choices);
   const theme = THEMES[checkChoice('theme', choices.theme, THEME_NAMES)];
   const borders = checkChoice('borders', choices.borders, BORDER_STYLES);
-  const clock = civilClock(choices.zone.trim(), 'zone');
+  const language = chooseLanguage(choices.lang);
+  const clock = civilClock(choices.zone.trim(), 'zone', language.common.clock);
   const title = checkTitle(choices.title);
   if (choices.marks.length > MAX_MARKS) throw new InputError('marks', `at most ${MAX_MARKS} places`, `${choices.marks.length} places`);
   const marks = choices.marks.map((name) => choosePlace({ place: name }, true, 'marks').place);
@@ -145,5 +152,7 @@ export function mapSettings(choices: MapChoices): MapSettings {
   const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && choices.preset !== 'card' : namesChoice === 'on';
   // A card of a solar eclipse shows its path unless another view is asked for (a lunar map has no path and ignores this).
   const fitPath = choices.preset === 'card' && choices.projection === 'equal-earth' && choices.bbox === undefined && choices.centre === undefined;
-  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}) }, size, dpi, marks };
+  // English maps carry no words in their style, as before languages were offered.
+  const words = language.tag === 'en' && language.lunar === LANGUAGES.en.lunar ? {} : { words: language.lunar.figures };
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}), ...words }, size, dpi, marks, words: language.lunar };
 }

@@ -9,6 +9,8 @@
  */
 import isoCountries from 'i18n-iso-countries';
 import type { EclipseBody } from '../eclipses/common/record.ts';
+import { CLOCK_ENGLISH, type ClockWords } from '../ephemeris/civilTime.ts';
+import type { DeltaTSource } from '../ephemeris/deltaT.ts';
 
 /** Shared words, one catalogue per language. */
 export interface CommonWords {
@@ -23,11 +25,30 @@ export interface CommonWords {
   };
   /** "A, B and C". */
   readonly and: string;
+  /** The word for "and" before a given last item, where the language changes it (Spanish "y" → "e" before an i sound). */
+  readonly andBefore?: (item: string) => string;
+  /** A colon and a semicolon with the spaces the language sets around them (French: a no-break space before). */
+  readonly punctuation: { readonly colon: string; readonly semicolon: string };
   /** Hemisphere letters after a latitude and a longitude: "35.28°S, 149.13°E". */
   readonly hemispheres: { readonly north: string; readonly south: string; readonly east: string; readonly west: string };
   /** Country names as prose writes them, by ISO 3166-1 alpha-2 code, where they differ from the language's plain list name. */
   readonly countryNames: Readonly<Record<string, string>>;
+  /** Continents as captions name them, by countries-list's English name ("Africa", "North America"…). */
+  readonly continents: Readonly<Record<ContinentName, string>>;
+  /** Continent and ocean names written on world maps, by the map's English label ("AFRICA", "Pacific Ocean"…). */
+  readonly mapAreas: Readonly<Record<MapAreaName, string>>;
+  /** The data's credits as the small print gives them (the same as sphere/world.ts's and places/gazetteer.ts's in English). */
+  readonly credits: { readonly basemap: string; readonly places: string };
+  /** The ΔT model as the list's notes name it: the built-in one (observed, forecast, Espenak–Meeus) or a fixed value. */
+  readonly deltaTModel: { readonly builtIn: (firstYear: string, lastYear: string, forecastTo: string) => string; readonly fixed: (seconds: string) => string };
+  /** Where a ΔT comes from, as the small print says it ("observed", "forecast"…). */
+  readonly deltaTSources: Readonly<Record<DeltaTSource, string>>;
+  /** The clock's words: dates through Intl in this language, day marks, changes of offset. */
+  readonly clock: ClockWords;
 }
+
+export type ContinentName = 'Africa' | 'Antarctica' | 'Asia' | 'Europe' | 'North America' | 'Oceania' | 'South America';
+export type MapAreaName = 'AFRICA' | 'EUROPE' | 'ASIA' | 'NORTH AMERICA' | 'SOUTH AMERICA' | 'AUSTRALIA' | 'ANTARCTICA' | 'Pacific Ocean' | 'Atlantic Ocean' | 'Indian Ocean';
 
 export const ENGLISH: CommonWords = {
   locale: 'en',
@@ -37,6 +58,7 @@ export const ENGLISH: CommonWords = {
     compact: { hour: 'h', minute: 'm' },
   },
   and: 'and',
+  punctuation: { colon: ': ', semicolon: '; ' },
   hemispheres: { north: 'N', south: 'S', east: 'E', west: 'W' },
   // English prose (common practice in news style): short forms, and "the" where the name takes it.
   countryNames: {
@@ -73,6 +95,20 @@ export const ENGLISH: CommonWords = {
     PS: 'Palestine',
     TR: 'Turkey',
   },
+  continents: {
+    Africa: 'Africa', Antarctica: 'Antarctica', Asia: 'Asia', Europe: 'Europe', 'North America': 'North America', Oceania: 'Oceania', 'South America': 'South America',
+  },
+  mapAreas: {
+    AFRICA: 'AFRICA', EUROPE: 'EUROPE', ASIA: 'ASIA', 'NORTH AMERICA': 'NORTH AMERICA', 'SOUTH AMERICA': 'SOUTH AMERICA', AUSTRALIA: 'AUSTRALIA', ANTARCTICA: 'ANTARCTICA',
+    'Pacific Ocean': 'Pacific Ocean', 'Atlantic Ocean': 'Atlantic Ocean', 'Indian Ocean': 'Indian Ocean',
+  },
+  credits: { basemap: 'Basemap: Natural Earth via world-atlas (public domain)', places: 'Places: GeoNames (CC BY 4.0)' },
+  deltaTModel: {
+    builtIn: (first, last, forecastTo) => `observed ${first}–${last}, forecast to ${forecastTo}, Espenak–Meeus beyond`,
+    fixed: (seconds) => `fixed ${seconds} s (user)`,
+  },
+  deltaTSources: { observed: 'observed', forecast: 'forecast', historical: 'historical', 'long-term': 'long-term', user: 'user' },
+  clock: CLOCK_ENGLISH,
 };
 
 /**
@@ -115,10 +151,48 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
   return formats;
 }
 
+/**
+ * Decimal numbers inside a text written with a full stop ("1.234", "69.2 s")
+ * in the language's decimal sign, as Intl.NumberFormat writes it ("1,234" in
+ * Spanish): only a point between two digits changes, never a full stop.
+ */
+export function decimalIn(text: string, words: CommonWords = ENGLISH): string {
+  const sign = decimalSign(words.locale);
+  return sign === '.' ? text : text.replace(/(\d)\.(\d)/g, `$1${sign}$2`);
+}
+
+/** A number to a fixed count of decimals, in the language's decimal sign. */
+export function fixedIn(value: number, digits: number, words: CommonWords = ENGLISH): string {
+  return decimalIn(value.toFixed(digits), words);
+}
+
+const decimalSigns = new Map<string, string>();
+function decimalSign(locale: string): string {
+  let sign = decimalSigns.get(locale);
+  if (sign === undefined) {
+    sign = new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal')?.value ?? '.';
+    decimalSigns.set(locale, sign);
+  }
+  return sign;
+}
+
+/**
+ * A ΔT model's name (ephemeris/deltaT.ts writes it in English, and the
+ * catalogue JSON keeps it so) in the language's words; a name of another
+ * shape is printed as it stands.
+ */
+export function deltaTModelIn(name: string, words: CommonWords = ENGLISH): string {
+  const builtIn = /^observed (\d+)–(\d+), forecast to (\d+), Espenak–Meeus beyond$/.exec(name);
+  if (builtIn) return words.deltaTModel.builtIn(builtIn[1]!, builtIn[2]!, builtIn[3]!);
+  const fixed = /^fixed (\S+) s \(user\)$/.exec(name);
+  return fixed ? words.deltaTModel.fixed(decimalIn(fixed[1]!, words)) : name;
+}
+
 /** "A", "A and B", "A, B and C" (no serial comma: the house style). */
 export function listWords(items: readonly string[], words: CommonWords = ENGLISH): string {
   if (items.length <= 1) return items.join('');
-  return `${items.slice(0, -1).join(', ')} ${words.and} ${items[items.length - 1]}`;
+  const last = items[items.length - 1]!;
+  return `${items.slice(0, -1).join(', ')} ${words.andBefore?.(last) ?? words.and} ${last}`;
 }
 
 declare const meantFor: unique symbol;
@@ -138,7 +212,7 @@ export function meantOnlyFor<B extends EclipseBody>(_body: B, text: string): Tex
 /** A place's latitude and longitude to 0.01°, hemisphere letters after: "35.28°S, 149.13°E". */
 export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWords = ENGLISH): string {
   const h = words.hemispheres;
-  return `${Math.abs(latDeg).toFixed(2)}°${latDeg >= 0 ? h.north : h.south}, ${Math.abs(lonDeg).toFixed(2)}°${lonDeg >= 0 ? h.east : h.west}`;
+  return `${fixedIn(Math.abs(latDeg), 2, words)}°${latDeg >= 0 ? h.north : h.south}, ${fixedIn(Math.abs(lonDeg), 2, words)}°${lonDeg >= 0 ? h.east : h.west}`;
 }
 
 /**

@@ -6,13 +6,15 @@ import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solar
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/choose.ts';
-import { withBodyOptions, withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { withBodyOptions, withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
+import { chooseLanguage, type Language } from '../../settings/language.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, placeChoiceFromFlags, type BodyFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 
 interface LocalOptions extends PlaceFlags, EclipseFlags, BodyFlags {
   format: string;
+  lang?: string;
 }
 
 export function registerLocal(program: Command, context: CommandContext): void {
@@ -20,19 +22,20 @@ export function registerLocal(program: Command, context: CommandContext): void {
     .command('local')
     .description('local circumstances for one place: contacts in local time, the Moon or the Sun in its sky, a summary (solar: with the eye-safety caution)')
     .argument('[when]', `${WHEN_EXPECTED} (default: next)`);
-  withEclipseOptions(withBodyOptions(withPlaceOptions(command), false).option('--format <name>', LOCAL_FORMATS.join(', '), 'table'))
+  withLanguageOption(withEclipseOptions(withBodyOptions(withPlaceOptions(command), false).option('--format <name>', LOCAL_FORMATS.join(', '), 'table')))
     .action((whenText: string | undefined, options: LocalOptions) => {
       const format = parseChoice('--format', options.format, LOCAL_FORMATS);
+      const language = chooseLanguage(options.lang, flagOf('lang'));
       const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
       const body = bodyFromFlags(options);
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), body);
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);
-      context.stdout(renderLocal(eclipse, chosen, format));
+      context.stdout(renderLocal(eclipse, chosen, format, language));
     });
 }
 
 /** One place's report in a format, for an eclipse of either body: each body's own renderers, never the other's words. */
-function renderLocal(eclipse: Eclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number]): string {
+function renderLocal(eclipse: Eclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number], language: Language): string {
   if (eclipse.body === 'solar') {
     const solar = solarLocalReport(eclipse, chosen);
     switch (format) {
@@ -43,7 +46,7 @@ function renderLocal(eclipse: Eclipse, chosen: ChosenPlace, format: (typeof LOCA
       case 'ics': return solarLocalIcs(solar, `umbracast ${toolVersion()}`);
     }
   }
-  const report = localReport(eclipse, chosen);
+  const report = localReport(eclipse, chosen, language.lunar);
   switch (format) {
     case 'table': return localTable(report);
     case 'markdown': return localMarkdown(report);

@@ -13,7 +13,7 @@ import { EXTENSION_FORMATS, MAP_FORMATS, type MapFormat } from '../../outputs/fo
 import type { CommandContext } from '../context.ts';
 import { toolVersion } from '../version.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
-import { withBodyOptions, withEclipseOptions } from '../declare.ts';
+import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../declare.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, mapChoicesFromFlags, type BodyFlags, type MapFlags, type Underlay } from '../readFlags.ts';
 import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
 import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
@@ -49,7 +49,8 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--mark <place>', 'mark a place with its time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
     .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
     .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
-    .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win')
+    .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win');
+  withLanguageOption(command)
     .action(async (whenText: string | undefined, options: MapFlags & BodyFlags, self: Command) => {
       let style: StyleUnderlay | undefined;
       if (options.style !== undefined) {
@@ -147,6 +148,6 @@ export async function runMap(whenText: string | undefined, options: MapFlags & B
   const file = await renderMapFile({ eclipse, ...settings, format, generator });
   await writeFileAtomic(path, file.bytes);
   // Every picture gets its caption beside it.
-  if (file.caption) await writeFileAtomic(captionPathFor(path), captionText(file.caption));
+  if (file.caption) await writeFileAtomic(captionPathFor(path), captionText(file.caption, settings.words));
   return path;
 }

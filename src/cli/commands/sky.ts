@@ -7,7 +7,8 @@ import { SKY_FORMATS } from '../../outputs/formatNames.ts';
 import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
-import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
+import { chooseLanguage } from '../../settings/language.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { eclipseChoiceFromFlags, pageChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags, type SizeFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
@@ -19,6 +20,7 @@ interface SkyOptions extends SizeFlags, PlaceFlags, EclipseFlags {
   title?: string;
   output?: string;
   format?: string;
+  lang?: string;
 }
 
 export function registerSky(program: Command, context: CommandContext): void {
@@ -30,13 +32,14 @@ export function registerSky(program: Command, context: CommandContext): void {
     .option('--theme <name>', THEME_NAMES.join(', '), 'light')
     .option('--title <text>', 'replace the generated title');
   withSizeOptions(command, '1600x900');
-  withEclipseOptions(command
+  withLanguageOption(withEclipseOptions(command
     .option('-o, --output <file>', 'output file; .png, .svg, .webp or .jpg (default out/<id>-<kind>-sky-<place>.png)')
-    .option('--format <name>', SKY_FORMATS.join(', ')))
+    .option('--format <name>', SKY_FORMATS.join(', '))))
     .action(async (whenText: string | undefined, options: SkyOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
       const { size, dpi } = pageSize(pageChoiceFromFlags(options), { widthPx: 1600, heightPx: 900 });
       checkTitle(options.title);
+      const language = chooseLanguage(options.lang, flagOf('lang'));
       const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now());
       const slug = placeSlug(chosen.place.name);
@@ -45,7 +48,7 @@ export function registerSky(program: Command, context: CommandContext): void {
       // The drawing code loads when a figure is drawn, not with the command line.
       const [{ renderSkyFile }, { localReport }] = await Promise.all([import('../../outputs/skyFile.ts'), import('../../outputs/localFormats.ts')]);
       const file = await renderSkyFile({
-        report: localReport(eclipse, chosen),
+        report: localReport(eclipse, chosen, language.lunar),
         theme,
         size,
         dpi,

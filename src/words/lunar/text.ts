@@ -16,6 +16,7 @@ import type { CivilClock } from '../../ephemeris/civilTime.ts';
 import type { Moment } from '../../ephemeris/time.ts';
 import { localView, phaseAt, type EclipsePhase, type LocalCircumstances, type LocalEvent, type LocalEventName, type LocalView, type SkyClass } from '../../local/lunar.ts';
 import { ENGLISH, meantOnlyFor, type CommonWords, type TextFor } from '../common.ts';
+import { LUNAR_FIGURES_ENGLISH, type LunarFigureWords } from './figures.ts';
 
 /** The three stretches of a lunar eclipse a calendar can hold. */
 export type LunarPhaseKey = 'penumbral' | 'partial' | 'total';
@@ -27,6 +28,8 @@ export type ContinentShareWord = 'whole' | 'most' | 'parts';
 export interface LunarWords {
   readonly body: 'lunar';
   readonly common: CommonWords;
+  /** The map's and the sky figure's words (figures.ts), in the same language. */
+  readonly figures: LunarFigureWords;
   /** "Total", as a title starts. */
   readonly kindTitle: Readonly<Record<EclipseKind, string>>;
   /** "total", inside a sentence or a table. */
@@ -36,6 +39,8 @@ export interface LunarWords {
   /** The naked-eye line, as a calendar entry ends (the figures carry their own sentence of it). */
   readonly nakedEyeInCalendar: TextFor<'lunar'>;
   readonly table: {
+    /** The kind in the list's column, short: "total". */
+    readonly kind: Readonly<Record<EclipseKind, string>>;
     readonly catalogueHeader: readonly string[];
     /** A cell for a phase the eclipse does not have. */
     readonly absent: string;
@@ -73,7 +78,8 @@ export interface LunarWords {
   };
   readonly summary: {
     readonly compass: readonly string[];
-    readonly height: (altitudeDeg: number) => string;
+    /** Where the Moon stands: "low in the east" (`direction`: a compass word). */
+    readonly position: (altitudeDeg: number, direction: string) => string;
     readonly aboveHorizon: (degrees: number) => string;
     readonly phaseState: Readonly<Record<EclipsePhase, string>>;
     readonly contacts: Readonly<Partial<Record<LocalEventName, string>>>;
@@ -140,11 +146,13 @@ const countedEnglish = (count: number, one: string, other: string) => `${count} 
 export const LUNAR_ENGLISH: LunarWords = {
   body: 'lunar',
   common: ENGLISH,
+  figures: LUNAR_FIGURES_ENGLISH,
   kindTitle: { total: 'Total', partial: 'Partial', penumbral: 'Penumbral' },
   kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
   nakedEyeInCalendar: meantOnlyFor('lunar', 'Safe to watch with the naked eye; predictions, weather permitting.'),
   table: {
+    kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
     catalogueHeader: ['Date', 'Kind', 'Greatest (UTC)', 'Umbral mag.', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Saros'],
     absent: '–',
     julianBeside: (isoDate, julianDate) => `${isoDate} (Julian: ${julianDate})`,
@@ -190,7 +198,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   },
   summary: {
     compass: ['north', 'northeast', 'east', 'southeast', 'south', 'southwest', 'west', 'northwest'],
-    height: (altitudeDeg) => (altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the'),
+    position: (altitudeDeg, direction) => `${altitudeDeg < 15 ? 'low in the' : altitudeDeg < 45 ? 'in the' : 'high in the'} ${direction}`,
     aboveHorizon: (degrees) => `${degrees}° above the horizon`,
     phaseState: {
       before: 'before the eclipse begins',
@@ -308,11 +316,12 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
   // At a pole every direction is south (or north): give the height only.
   const atPole = Math.abs(local.observer.latDeg) >= POLE_LATITUDE_DEG;
   const where = (e: LocalEvent) =>
-    atPole ? s.aboveHorizon(Math.max(0, Math.round(e.moonAltitudeDeg))) : `${s.height(e.moonAltitudeDeg)} ${compassWord(e.moonAzimuthDeg, words)}`;
+    atPole ? s.aboveHorizon(Math.max(0, Math.round(e.moonAltitudeDeg))) : s.position(e.moonAltitudeDeg, compassWord(e.moonAzimuthDeg, words));
   const view = localView(local);
   const penumbral = eclipse.kind === 'penumbral';
   const daylight = events.some((e) => e.moonUp && e.sky === 'day' && e.event !== 'moonrise' && e.event !== 'moonset') ? s.daylight : '';
   const from = s.from(placeName);
+  const { colon, semicolon } = words.common.punctuation;
   if (view.whole === 'none') return `${from} ${s.notSeen}`;
 
   const greatest = events.find((e) => e.event === 'greatest')!;
@@ -336,7 +345,7 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
     const span = range(c[startName]!, c[endName]!);
     clauses.push(s.mainSpan(penumbral, span, totality, where(greatest)));
     clauses.push(...after.map((e) => moves(e, t(e.moment))));
-    return `${from} ${inViewWords(eclipse.kind, view, words)}: ${clauses.join('; ')}.${daylight}`;
+    return `${from} ${inViewWords(eclipse.kind, view, words)}${colon}${clauses.join(semicolon)}.${daylight}`;
   }
   // Otherwise tell it in order: the contacts seen, greatest if seen, and every rise and set.
   const contactWords = penumbral ? s.penumbralContacts : s.contacts;
@@ -350,5 +359,5 @@ export function localSummary(local: LocalCircumstances, clock: CivilClock, place
       clauses.push(s.contactAt(contactWords[e.event]!, t(e.moment)));
     }
   }
-  return `${from} ${inViewWords(eclipse.kind, view, words)}: ${clauses.join('; ')}.${daylight}`;
+  return `${from} ${inViewWords(eclipse.kind, view, words)}${colon}${clauses.join(semicolon)}.${daylight}`;
 }

@@ -95,8 +95,8 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
   const lunarRow = (e: EclipseRecord): string[] => {
     const figures = [decimal(e.printed.umbralMagnitude), decimal(e.printed.penumbralMagnitude), decimal(e.printed.gamma), minutes(e.printed.minutes.partial), minutes(e.printed.minutes.total)];
     return both
-      ? [date(e.id), BOTH.body.lunar, words.kind[e.kind], e.printed.greatestUtc, ...figures, w.absent, w.absent, String(e.saros)]
-      : [date(e.id), words.kind[e.kind], e.printed.greatestUtc, ...figures, String(e.saros)];
+      ? [date(e.id), BOTH.body.lunar, w.kind[e.kind], e.printed.greatestUtc, ...figures, w.absent, w.absent, String(e.saros)]
+      : [date(e.id), w.kind[e.kind], e.printed.greatestUtc, ...figures, String(e.saros)];
   };
   const solarRow = (e: SolarEclipseRecord): string[] => [
     date(e.id), BOTH.body.solar, BOTH.solarKind[e.kind], isoMinute(e.greatest),

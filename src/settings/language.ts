@@ -89,3 +89,12 @@ function withLocale(language: Language, locale: string): Language {
     solar: { ...language.solar, common },
   };
 }
+
+/**
+ * Solar eclipses' words (the caution aside, which every language has) are in English only so far: another
+ * language is refused for an output that holds a solar eclipse, never mixed into it.
+ */
+export function checkLanguageForBodies(language: Language, bodies: Iterable<'lunar' | 'solar'>, parameter = 'lang'): void {
+  if (language.tag === 'en' || ![...bodies].includes('solar')) return;
+  throw new InputError(parameter, (name) => `en for an output holding a solar eclipse (solar words are in English only so far; ${name('body')} lunar keeps the lunar eclipses)`, language.tag);
+}

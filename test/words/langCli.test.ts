@@ -92,14 +92,30 @@ test('the contact sheet in the style\'s language: <html lang>, title, facts and 
 });
 
 test('list --lang fr: the table in French, kinds short, Julian dates in French months, decimal commas; json stays data (ECMA-402; Meeus ch. 7 for 1501 May 13 Gregorian = May 3 Julian)', async () => {
-  const { code, stdout } = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr']);
+  const { code, stdout } = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr', '--body', 'lunar']);
   assert.equal(code, 0);
   assert.match(stdout, /^2 éclipses de Lune du 1501-01-01 au 1502-01-01 \(exclu\)/);
   assert.match(stdout, /1501-05-13 \(julien\u00a0: 3 mai 1501\)\s+totale\s+1501-05-13 \d\d:\d\d\s+1,\d{3}/);
   assert.doesNotMatch(stdout, /\b(partial|total|lunar|Times|observed|forecast|beyond|model)\b/);
   assert.match(stdout, /modèle\u00a0: observé 1955–\d{4}, prévision jusqu’en \d{4}, Espenak–Meeus au-delà\)/);
-  const fixed = await run(['list', '--from', '2026', '--to', '2026', '--lang', 'de', '--delta-t', '69.25']);
+  const fixed = await run(['list', '--from', '2026', '--to', '2026', '--lang', 'de', '--delta-t', '69.25', '--body', 'lunar']);
   assert.match(fixed.stdout, /ΔT-Modell: fest, 69,25 s \(vom Nutzer angegeben\)\.|Modell: fest, 69,25 s \(vom Nutzer angegeben\)/);
-  const json = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr', '--format', 'json']);
+  const json = await run(['list', '--from', '1501', '--to', '1501', '--lang', 'fr', '--format', 'json', '--body', 'lunar']);
   assert.equal(JSON.parse(json.stdout).eclipses[0].kind, 'total');
+});
+
+test('a solar eclipse in another language is refused, never mixed: one line naming --lang, exit 2, nothing written (solar words are English only so far)', async () => {
+  for (const args of [
+    ['list', '--from', '2026', '--to', '2026', '--lang', 'fr'],
+    ['local', '2026-08-12', '--place', 'Bilbao', '--lang', 'es'],
+    ['caption', '2026-08-12', '--lang', 'de'],
+  ]) {
+    const { code, stdout, stderr } = await run(args);
+    assert.equal(code, 2, args.join(' '));
+    assert.equal(stdout, '');
+    assert.match(stderr.trimEnd(), /^umbracast: --lang: expected en for an output holding a solar eclipse \(solar words are in English only so far; --body lunar keeps the lunar eclipses\), received "(fr|es|de)"$/);
+  }
+  // The same words in English, and the lunar eclipses in French, are fine.
+  assert.equal((await run(['list', '--from', '2026', '--to', '2026', '--lang', 'fr', '--body', 'lunar'])).code, 0);
+  assert.equal((await run(['caption', '2026-08-12', '--lang', 'en'])).code, 0);
 });

@@ -16,6 +16,7 @@ import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../declare.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, mapChoicesFromFlags, type BodyFlags, type MapFlags, type Underlay } from '../readFlags.ts';
 import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
+import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
 import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
 
 
@@ -130,6 +131,7 @@ export async function runMap(whenText: string | undefined, options: MapFlags & B
   const eclipseChoice = eclipseChoiceFromFlags(options, style?.eclipse);
   // --body (default all): a date names the eclipse it falls on or near, of either kind (near both: an input error naming both).
   const eclipse = chooseEclipse(when, eclipseChoice, context.now(), bodyFromFlags(options));
+  checkLanguageForBodies(chooseLanguage(choices.lang), [eclipse.body]);
   const solar = eclipse.body === 'solar';
   // A solar card shows the path by default: its file says so.
   const stem = `${eclipse.id}-${eclipse.kind}${solar && settings.style.fitPath ? '-path' : viewStem(settings.style.view)}`;

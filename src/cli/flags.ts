@@ -11,6 +11,7 @@ export const FLAGS: Readonly<Record<string, string>> = {
   from: '--from',
   to: '--to',
   kinds: '--kind',
+  body: '--body',
   convention: '--convention',
   deltaT: '--delta-t',
   place: '--place',

@@ -5,13 +5,13 @@
  * `at`, `zone`); the CLI shows its flags instead, a style its fields.
  */
 import { InputError } from '../errors.ts';
-import type { EclipseBody } from '../eclipses/kinds.ts';
+import { eclipseNear as eclipseNearOfKinds, nextEclipse as nextEclipseOfKinds, type BodyChoice, type Eclipse, type EclipseBody } from '../eclipses/kinds.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
 import type { PlaceLabel } from '../places/label.ts';
 import { timeZoneAt, timeZoneOfPlace } from '../places/timeZone.ts';
 import { isLonLat, LAT_LON_EXPECTED, WHEN_EXPECTED, type When } from './read.ts';
-import { eclipseNear, nextEclipse, OUTPUT_BODY, type EclipseChoice, type EclipseOf } from './catalogues.ts';
+import { deltaTModelOf, eclipseNear, nextEclipse, OUTPUT_BODY, type EclipseChoice, type EclipseOf } from './catalogues.ts';
 
 export { DELTA_T_LIMITS } from './read.ts';
 export { deltaTModelOf, type EclipseChoice } from './catalogues.ts';
@@ -19,6 +19,19 @@ export { deltaTModelOf, type EclipseChoice } from './catalogues.ts';
 /** One eclipse of a body (by default the one the outputs render): the next after `now`, or the one within a week of a date. */
 export function chooseEclipse<B extends EclipseBody = typeof OUTPUT_BODY>(when: When, choice: EclipseChoice, now: Date, body: B = OUTPUT_BODY as B): EclipseOf[B] {
   const found = when.kind === 'next' ? nextEclipse(body, now, choice) : eclipseNear(body, when.date, 7.5, choice);
+  if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
+  return found;
+}
+
+/**
+ * One eclipse of either body, or of the one asked for: the next after `now`,
+ * or the one within a week of a date. A date within reach of both a lunar and
+ * a solar eclipse (and on the date of neither) is an InputError naming both,
+ * parameter `body`.
+ */
+export function chooseEclipseOfBody(when: When, choice: EclipseChoice, now: Date, body: BodyChoice): Eclipse {
+  const options = { body, deltaT: deltaTModelOf(choice), convention: choice.convention };
+  const found = when.kind === 'next' ? nextEclipseOfKinds(now, options) : eclipseNearOfKinds(when.date, 7.5, options);
   if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
   return found;
 }

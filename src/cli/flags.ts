@@ -31,6 +31,7 @@ export const FLAGS: Readonly<Record<string, string>> = {
   marks: '--mark',
   markClock: '--mark-clock',
   areaNames: '--area-names',
+  inset: '--inset',
   style: '--style',
   outDir: '--out',
   jobs: '--jobs',

@@ -9,7 +9,7 @@ import type { ShadowDiagram, SkyOffset } from '../eclipses/lunar/diagram.ts';
 import type { ContactName } from '../eclipses/lunar/contacts.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { DIAGRAM_WORDS, diagramTexts, MOMENT_WORDS, momentLabel } from '../words/lunar/diagram.ts';
+import { DIAGRAM_WORDS, diagramTexts, INSET_WORDS, MOMENT_WORDS, momentLabel } from '../words/lunar/diagram.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
 import { fillSwatch } from './layers.ts';
@@ -236,4 +236,66 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
     labelPlates,
     body: { left: plot.left, top: plot.top, right: W - margin, bottom: bodyBottom },
   };
+}
+
+/** The inset's shape: its width over its height, for a given diagram (the path's extent with its Moon, and a heading row). */
+export function diagramInsetAspect(diagram: ShadowDiagram, headingPx: number, widthPx: number): number {
+  const { spanX, spanY } = diagramExtent(diagram);
+  const inner = widthPx * 0.9;
+  return widthPx / ((inner * spanY) / spanX + headingPx + widthPx * 0.1);
+}
+
+function diagramExtent(diagram: ShadowDiagram) {
+  const moonRad = diagram.greatest.moonSemiDiameterRad;
+  const xs = [...diagram.path.map((p) => -p.eastRad), diagram.radii.penumbraRad, -diagram.radii.penumbraRad];
+  const ys = [...diagram.path.map((p) => p.northRad), diagram.radii.penumbraRad, -diagram.radii.penumbraRad];
+  return {
+    spanX: Math.max(...xs) - Math.min(...xs) + 2 * moonRad,
+    spanY: Math.max(...ys) - Math.min(...ys) + 2 * moonRad,
+    midX: (Math.max(...xs) + Math.min(...xs)) / 2,
+    midY: (Math.max(...ys) + Math.min(...ys)) / 2,
+  };
+}
+
+/**
+ * The diagram small, as an inset on a map: a paper panel in `box` with a heading, the shadow's
+ * circles, the Moon's path with its arrow, the Moon at each contact and at greatest; the times
+ * are the map's. The same geometry and inks as the full figure.
+ */
+export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }): string {
+  const { eclipse } = diagram;
+  const pad = (box.right - box.left) * 0.05;
+  const plot = { left: box.left + pad, right: box.right - pad, top: box.top + pad + headingStyle.sizePx * 1.3, bottom: box.bottom - pad };
+  const { spanX, spanY, midX, midY } = diagramExtent(diagram);
+  const pxPerRad = Math.min((plot.right - plot.left) / spanX, (plot.bottom - plot.top) / spanY);
+  const cx = (plot.left + plot.right) / 2 - midX * pxPerRad;
+  const cy = (plot.top + plot.bottom) / 2 + midY * pxPerRad;
+  const px = (o: SkyOffset) => cx - o.eastRad * pxPerRad;
+  const py = (o: SkyOffset) => cy - o.northRad * pxPerRad;
+  const path = pathInk(theme, unit * 0.6);
+  const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
+  const out: string[] = [];
+  out.push(`<rect x="${n2(box.left)}" y="${n2(box.top)}" width="${n2(box.right - box.left)}" height="${n2(box.bottom - box.top)}" rx="${n2(3 * unit)}" fill="${theme.paper}" fill-opacity="0.94" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
+  out.push(textElement(INSET_WORDS.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
+  const edge = `stroke="${theme.textMuted}" stroke-width="${n2(0.6 * unit)}"`;
+  out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.penumbraRad * pxPerRad)}" fill="${theme.sky.civil}" ${edge}/>`);
+  out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.umbraRad * pxPerRad)}" fill="${theme.sky.astronomical}" ${edge}/>`);
+  const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.casing} stroke-linejoin="round"/>`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.line} stroke-linejoin="round"/>`);
+  const tip = diagram.path[diagram.path.length - 1]!;
+  const before = diagram.path[diagram.path.length - 3]!;
+  const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
+  const head = 7 * unit;
+  const arrow = [2.6, 0, -2.6].map((a, i) => {
+    const r = i === 1 ? 0 : head;
+    return `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
+  });
+  out.push(`<path d="M${arrow.join('L')}Z" fill="${theme.field}"/>`);
+  for (const c of diagram.contacts) {
+    out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, undefined)}/>`);
+  }
+  const g = diagram.greatest;
+  out.push(`<circle cx="${n2(px(g.offset))}" cy="${n2(py(g.offset))}" r="${n2(g.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, moonFill)}/>`);
+  return `<g>${out.join('')}</g>`;
 }

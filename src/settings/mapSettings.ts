@@ -15,6 +15,7 @@ import { THEME_NAMES, THEMES, type ThemeName } from '../figures/theme.ts';
 import { MARK_CLOCKS, type MarkClock } from '../figures/markClock.ts';
 import { AREA_NAMES_CHOICES, type AreaNamesChoice } from '../figures/areaNames.ts';
 import type { MapStyle } from '../figures/map.ts';
+import { MAP_INSETS, type MapInset } from '../figures/insetNames.ts';
 import { BBOX_EXPECTED, checkNumber, checkPixelSize, isBoundingBox, isLonLat, LAT_LON_EXPECTED, type PixelSize } from './read.ts';
 import { choosePlace } from './choose.ts';
 
@@ -115,6 +116,8 @@ export interface MapChoices extends ViewChoice, PageChoice {
   readonly marks: readonly string[];
   readonly markClock: MarkClock;
   readonly areaNames: AreaNamesChoice;
+  /** A small figure inside the map; default none. */
+  readonly inset?: MapInset;
 }
 
 /** The defaults of what a map is asked for (the command line's and the house style's). */
@@ -143,5 +146,6 @@ export function mapSettings(choices: MapChoices): MapSettings {
   // Continent and ocean names: on world views, not on small social cards (nor regional views), unless asked.
   const namesChoice = checkChoice('areaNames', choices.areaNames, AREA_NAMES_CHOICES);
   const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && choices.preset !== 'card' : namesChoice === 'on';
-  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}) }, size, dpi, marks };
+  const inset = choices.inset === undefined ? 'none' : checkChoice('inset', choices.inset, MAP_INSETS);
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(inset !== 'none' ? { inset } : {}) }, size, dpi, marks };
 }

@@ -77,3 +77,8 @@ export function diagramCaption(title: string, eclipse: LunarEclipse, clock: Civi
   const alt = `Diagram of two concentric circles, the Earth's lighter penumbra around its darker umbra, with the Moon's path crossing them from right to left, passing ${side} of the centre; the Moon is drawn where each phase begins and ends and at greatest, each labelled with its time. North is up, east to the left.`;
   return `${title}. ${summary}\n\nAlt text: ${alt}\n`;
 }
+
+/** The inset on the map: its heading and the greatest-eclipse label. */
+export const INSET_WORDS = {
+  heading: 'Through the shadow · N up, E left',
+} as const;

@@ -60,7 +60,9 @@ const percent = (fraction: number) => `${(fraction * 100).toFixed(1)} %`;
 /** Title, subtitle (with the short caution: the header band carries it) and small print (the long caution). */
 export function solarDiagramTexts(facts: SolarDiagramFacts, zoneName: string, generator: string, font: string, customTitle?: string) {
   const { eclipse, clock } = facts;
-  const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} solar eclipse of ${clock.date(facts.maximumUtDays)} from ${facts.placeName}`;
+  // The eclipse's kind, and what the place sees when that differs ("seen as partial").
+  const seenAs = facts.localKind === eclipse.kind ? '' : `, seen as ${facts.localKind}`;
+  const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} solar eclipse of ${clock.date(facts.maximumUtDays)} from ${facts.placeName}${seenAs}`;
   const scope = safetyScopeForPlace(facts.localKind === 'total');
   const below = facts.sunAltitudeDeg < -0.5 ? ' (the Sun is below the horizon then)' : `, the Sun ${Math.round(facts.sunAltitudeDeg)}° high`;
   const subtitle = `At maximum, ${clock.stamp(facts.maximumUtDays)}${below}: magnitude ${facts.magnitude.toFixed(3)}, obscuration ${percent(facts.obscuration)} of the Sun's disc. `

@@ -11,7 +11,7 @@ import type { SolarLocalEventName, SolarLocalKind } from '../../local/solar.ts';
 import { ENGLISH } from '../common.ts';
 import { safetyScopeForPlace, solarSafetyText } from './caution.ts';
 
-const KIND_TITLE: Record<SolarEclipse['kind'], string> = { total: 'Total', annular: 'Annular', hybrid: 'Hybrid', partial: 'Partial' };
+const KIND_WORDS: Record<SolarEclipse['kind'], string> = { total: 'total', annular: 'annular', hybrid: 'hybrid', partial: 'partial' };
 
 /** What each moment of the place's eclipse means, in our words. */
 export const SOLAR_MOMENT_WORDS: Readonly<Record<SolarLocalEventName, string>> = {
@@ -60,12 +60,13 @@ const percent = (fraction: number) => `${(fraction * 100).toFixed(1)} %`;
 /** Title, subtitle (with the short caution: the header band carries it) and small print (the long caution). */
 export function solarDiagramTexts(facts: SolarDiagramFacts, zoneName: string, generator: string, font: string, customTitle?: string) {
   const { eclipse, clock } = facts;
-  // The eclipse's kind, and what the place sees when that differs ("seen as partial").
-  const seenAs = facts.localKind === eclipse.kind ? '' : `, seen as ${facts.localKind}`;
-  const title = customTitle ?? `${KIND_TITLE[eclipse.kind]} solar eclipse of ${clock.date(facts.maximumUtDays)} from ${facts.placeName}${seenAs}`;
+  // What the place sees leads the title, the date first (a long place name is what a narrow page cuts);
+  // the eclipse's own kind follows in the subtitle when it differs.
+  const title = customTitle ?? `${clock.date(facts.maximumUtDays)}: ${KIND_WORDS[facts.localKind]} solar eclipse from ${facts.placeName}`;
+  const elsewhere = facts.localKind === eclipse.kind ? '' : ` The eclipse is ${KIND_WORDS[eclipse.kind]} elsewhere.`;
   const scope = safetyScopeForPlace(facts.localKind === 'total');
   const below = facts.sunAltitudeDeg < -0.5 ? ' (the Sun is below the horizon then)' : `, the Sun ${Math.round(facts.sunAltitudeDeg)}° high`;
-  const subtitle = `At maximum, ${clock.stamp(facts.maximumUtDays)}${below}: magnitude ${facts.magnitude.toFixed(3)}, obscuration ${percent(facts.obscuration)} of the Sun's disc. `
+  const subtitle = `At maximum, ${clock.stamp(facts.maximumUtDays)}${below}: magnitude ${facts.magnitude.toFixed(3)}, obscuration ${percent(facts.obscuration)} of the Sun's disc.${elsewhere} `
     + solarSafetyText('short', scope);
   const smallPrint = [
     `The Sun and the Moon from ${facts.placeName} at maximum, drawn to scale: north up, towards the celestial pole of date; east to the left, as the sky looks when you face it.`,

@@ -32,6 +32,7 @@ export const FLAGS: Readonly<Record<string, string>> = {
   markClock: '--mark-clock',
   areaNames: '--area-names',
   lang: '--lang',
+  inset: '--inset',
   style: '--style',
   outDir: '--out',
   jobs: '--jobs',

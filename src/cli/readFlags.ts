@@ -12,6 +12,7 @@ import { PROJECTION_NAMES } from '../figures/projection.ts';
 import { THEME_NAMES } from '../figures/theme.ts';
 import { MARK_CLOCKS } from '../figures/markClock.ts';
 import { AREA_NAMES_CHOICES } from '../figures/areaNames.ts';
+import { MAP_INSETS } from '../figures/insetNames.ts';
 import { BORDER_STYLES } from '../sphere/world.ts';
 import type { EclipseChoice, PlaceChoice } from '../settings/choose.ts';
 import { DPI_LIMITS, SIZE_PRESETS, SPAN_LIMITS, WIDTH_MM_LIMITS, type MapChoices, type PageChoice } from '../settings/mapSettings.ts';
@@ -78,6 +79,7 @@ export interface MapFlags extends SizeFlags, EclipseFlags {
   mark: string[];
   markClock?: string;
   areaNames?: string;
+  inset?: string;
   style?: string;
   lang?: string;
 }
@@ -157,5 +159,6 @@ export function mapChoicesFromFlags(flags: MapFlags, underlay?: Underlay<MapChoi
     markClock: take('markClock', (b) => b.markClock, (t) => parseChoice('--mark-clock', t, MARK_CLOCKS)) ?? 'map',
     areaNames: take('areaNames', (b) => b.areaNames, (t) => parseChoice('--area-names', t, AREA_NAMES_CHOICES)) ?? 'auto',
     ...given('lang', take('lang', (b) => b.lang, (t) => t)),
+    ...given('inset', take('inset', (b) => b.inset, (t) => parseChoice('--inset', t, MAP_INSETS))),
   };
 }

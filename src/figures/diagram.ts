@@ -7,14 +7,14 @@
  */
 import type { ShadowDiagram, SkyOffset } from '../eclipses/lunar/diagram.ts';
 import type { ContactName } from '../eclipses/lunar/contacts.ts';
-import { printedFigures } from '../eclipses/lunar/figures.ts';
-import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
-import { formatDuration } from '../words/common.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
+import { DIAGRAM_WORDS, diagramTexts, INSET_WORDS, MOMENT_WORDS, momentLabel } from '../words/lunar/diagram.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
+import { pageFrame, type LegendEntry } from './frame.ts';
+import { fillSwatch } from './layers.ts';
 import type { Theme } from './theme.ts';
-import { escapeXml, FONT_CREDIT, fitText, measureText, wrapText } from './typography.ts';
+import { FONT_CREDIT, measureText } from './typography.ts';
 
 export interface DiagramSceneInput {
   readonly diagram: ShadowDiagram;
@@ -29,68 +29,61 @@ export interface DiagramScene {
   readonly svg: string;
   readonly title: string;
   readonly description: string;
-  /** For tests, page pixels: the shadow's centre, pixels per radian, the labels' plates. */
+  /** For tests, page pixels: the shadow's centre, pixels per radian, the labels' plates, the body's room. */
   readonly centre: { readonly x: number; readonly y: number };
   readonly pxPerRad: number;
   readonly labelPlates: readonly Box[];
+  readonly body: Box;
 }
 
-const KIND_WORDS: Record<LunarEclipse['kind'], string> = { total: 'total', partial: 'partial', penumbral: 'penumbral' };
 const ARCMIN_RAD = Math.PI / (180 * 60);
 
-/** What each moment means for the Moon, in our words. */
-export const MOMENT_WORDS: Readonly<Record<ContactName | 'greatest', string>> = {
-  P1: 'touches the penumbra',
-  U1: 'touches the umbra',
-  U2: 'wholly inside the umbra',
-  greatest: 'deepest in the shadow',
-  U3: 'begins to leave the umbra',
-  U4: 'clear of the umbra',
-  P4: 'clear of the penumbra',
-};
+/** The Moon's path: a line with a casing, drawn alike on the figure and in its legend. */
+const pathInk = (theme: Theme, unit: number) => ({
+  casing: `stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}"`,
+  line: `stroke="${theme.field}" stroke-width="${n2(1.8 * unit)}"`,
+});
 
-/** The diagram's page: the circles and path on the left (or above, on tall pages), the timetable beside. */
+/** A drawn Moon: filled at greatest, a faint disc with an outline at a contact; figure and legend alike. */
+const moonInk = (theme: Theme, unit: number, fill: string | undefined) => (fill
+  ? `fill="${fill}" fill-opacity="0.9" stroke="${theme.text}" stroke-width="${n2(1.6 * unit)}"`
+  : `fill="${theme.halo}" fill-opacity="0.25" stroke="${theme.text}" stroke-width="${n2(1.1 * unit)}"`);
+
+/** The diagram's page: the circles and path on the left (or above, on tall pages), the timetable beside, on the shared page frame. */
 export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const { diagram, clock, theme, size } = input;
   const { eclipse } = diagram;
-  const layout = layoutFor(size);
-  const { unit, margin } = layout;
   const W = size.widthPx;
   const H = size.heightPx;
-  const contentWidth = W - 2 * margin;
-  const figures = printedFigures(eclipse);
   const greatestUt = eclipse.greatest.utDays;
   const first = eclipse.contacts.P1!.utDays;
   const last = eclipse.contacts.P4!.utDays;
   const zoneName = clock.zoneDescriptionBetween(first, last);
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays, greatestUt) : timeOnDay(clock, utDays, greatestUt));
+  const { title, subtitle, smallPrint } = diagramTexts(eclipse, clock, timeText, zoneName, input.generator, FONT_CREDIT, input.title);
 
-  const title = input.title ?? `Through the Earth's shadow: the ${KIND_WORDS[eclipse.kind]} lunar eclipse of ${clock.date(greatestUt)}`;
-  // A long title takes a second line rather than losing its end.
-  const wrapped = wrapText(title, layout.titleStyle, contentWidth);
-  const titleLines = wrapped.length <= 2 ? wrapped : [wrapped[0]!, fitText(wrapped.slice(1).join(' '), layout.titleStyle, contentWidth)];
-  const depth = eclipse.kind === 'penumbral'
-    ? `penumbral magnitude ${figures.penumbralMagnitude}`
-    : `umbral magnitude ${figures.umbralMagnitude}`;
-  const longest = eclipse.durations.totalSeconds !== undefined ? `totality ${formatDuration(eclipse.durations.totalSeconds)}`
-    : eclipse.durations.partialSeconds !== undefined ? `partial phase ${formatDuration(eclipse.durations.partialSeconds)}`
-      : `penumbral phase ${formatDuration(eclipse.durations.penumbralSeconds)}`;
-  const subtitle = `The Moon's path across the shadow, deepest at ${timeText(greatestUt)} (${depth}, ${longest}). Times: ${zoneName}.`;
-  const subtitleLines = wrapText(subtitle, layout.subtitleStyle, contentWidth);
-  const titleBaseline = margin + layout.titleStyle.sizePx * 0.95;
-  const subtitleBaseline = titleBaseline + (titleLines.length - 1) * layout.titleStyle.sizePx * 1.2 + layout.subtitleStyle.sizePx * 1.65;
-  const headerBottom = subtitleBaseline + (subtitleLines.length - 1) * layout.subtitleStyle.sizePx * 1.35 + 14 * unit;
-
-  const smallPrint = [
-    'Seen from the Earth\'s centre with the shadow held still: the line is the Moon\'s computed path relative to it.',
-    'North up, towards the celestial pole of date; east to the left, as the sky looks when you face it.',
-    `Shadow: ${eclipse.convention === 'danjon' ? 'Danjon' : 'Chauvenet'} convention, circles at greatest; ΔT ${eclipse.deltaT.seconds.toFixed(1)} s (${eclipse.deltaT.source}); gamma ${figures.gamma}.`,
-    'Predictions: weather and the local horizon decide what is seen. A lunar eclipse is safe to watch with the naked eye.',
-    `Type: ${FONT_CREDIT}. Made with ${input.generator}.`,
-  ].join(' ');
-  const smallLines = wrapText(smallPrint, layout.smallStyle, contentWidth);
-  const smallHeight = smallLines.length * layout.smallStyle.sizePx * 1.4;
+  const unitOf = layoutFor(size).unit;
+  const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
+  const path = pathInk(theme, unitOf);
+  const moonSwatch = (fill: string | undefined) => (x: number, y: number, s: number) =>
+    `<circle cx="${n2(x + s / 2)}" cy="${n2(y + s / 2)}" r="${n2(s * 0.42)}" ${moonInk(theme, unitOf, fill)}/>`;
+  const legend: LegendEntry[] = [
+    { label: DIAGRAM_WORDS.penumbra, swatch: fillSwatch(theme.sky.civil, theme, unitOf) },
+    { label: DIAGRAM_WORDS.umbra, swatch: fillSwatch(theme.sky.astronomical, theme, unitOf) },
+    { label: DIAGRAM_WORDS.moonAtGreatest, swatch: moonSwatch(moonFill) },
+    { label: DIAGRAM_WORDS.moonAtContact, swatch: moonSwatch(undefined) },
+    {
+      label: DIAGRAM_WORDS.path,
+      swatch: (x, y, s) => `<path d="M${n2(x)},${n2(y + s / 2)}h${n2(s)}" ${path.casing}/><path d="M${n2(x)},${n2(y + s / 2)}h${n2(s)}" ${path.line}/>`,
+    },
+  ];
+  const page = pageFrame({
+    size, theme, id: 'diagram', title, subtitle, description: `${subtitle} ${smallPrint}`, smallPrint, legend,
+    legendSetting: { swatchUnits: 14, gapUnits: 14, gapInWidth: true }, headerGapUnits: 14,
+  });
+  const { layout, contentWidth } = page;
+  const { unit, margin } = layout;
 
   // The timetable: one row per moment, in time order.
   const moments = [
@@ -99,7 +92,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   ].sort((a, b) => a.utDays - b.utDays);
   const rowStyle = layout.legendStyle;
   const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
-  const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? 'Greatest' : m.key, time: timeText(m.utDays), words: MOMENT_WORDS[m.key] }));
+  const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? DIAGRAM_WORDS.greatest : m.key, time: timeText(m.utDays), words: MOMENT_WORDS[m.key] }));
   const keyWidth = Math.max(...rowText.map((r) => measureText(r.label, { ...rowStyle, weight: 'semibold' })));
   const timeWidth = Math.max(...rowText.map((r) => measureText(r.time, rowStyle)));
   const wordsWidth = Math.max(...rowText.map((r) => measureText(r.words, rowStyle)));
@@ -108,8 +101,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const rowHeight = rowStyle.sizePx * 1.75;
   const tableHeight = headStyle.sizePx * 2 + rowText.length * rowHeight;
 
-  const bodyTop = headerBottom;
-  const bodyBottom = H - margin - smallHeight - 10 * unit;
+  const bodyTop = page.headerBottom;
+  const bodyBottom = H - margin - page.footerHeight - 10 * unit;
   // Wide pages put the timetable beside the circles; others put it below them.
   const side = W / H >= 1.2 && tableWidth < contentWidth * 0.45;
   const plot = side
@@ -136,10 +129,6 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const py = (o: SkyOffset) => cy - o.northRad * pxPerRad;
 
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${W}" height="${H}" viewBox="0 0 ${W} ${H}" role="img" aria-labelledby="diagram-title diagram-desc">`);
-  out.push(`<title id="diagram-title">${escapeXml(title)}</title>`);
-  out.push(`<desc id="diagram-desc">${escapeXml(`${subtitle} ${smallPrint}`)}</desc>`);
-  out.push(`<rect width="${W}" height="${H}" fill="${theme.paper}"/>`);
 
   // The shadow: penumbra, umbra, and a small cross on its axis.
   const edge = `stroke="${theme.textMuted}" stroke-width="${n2(0.9 * unit)}"`;
@@ -150,8 +139,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
 
   // The Moon's path, and an arrowhead on it after P4: the direction of motion.
   const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
-  out.push(`<path d="M${points.join('L')}" fill="none" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}" stroke-linejoin="round"/>`);
-  out.push(`<path d="M${points.join('L')}" fill="none" stroke="${theme.field}" stroke-width="${n2(1.8 * unit)}" stroke-linejoin="round"/>`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.casing} stroke-linejoin="round"/>`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.line} stroke-linejoin="round"/>`);
   const tip = diagram.path[diagram.path.length - 1]!;
   const before = diagram.path[diagram.path.length - 3]!;
   const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
@@ -163,12 +152,11 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   out.push(`<path d="M${arrow[1]}L${arrow[0]}L${arrow[2]}Z" fill="${theme.field}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(0.8 * unit)}"/>`);
 
   // The Moon at each contact (outlines) and at greatest (filled).
-  const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
   for (const c of diagram.contacts) {
-    out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" fill="${theme.halo}" fill-opacity="0.25" stroke="${theme.text}" stroke-width="${n2(1.1 * unit)}"/>`);
+    out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit, undefined)}/>`);
   }
   const g = diagram.greatest;
-  out.push(`<circle cx="${n2(px(g.offset))}" cy="${n2(py(g.offset))}" r="${n2(g.moonSemiDiameterRad * pxPerRad)}" fill="${moonFill}" fill-opacity="0.9" stroke="${theme.text}" stroke-width="${n2(1.6 * unit)}"/>`);
+  out.push(`<circle cx="${n2(px(g.offset))}" cy="${n2(py(g.offset))}" r="${n2(g.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit, moonFill)}/>`);
   for (const m of [...diagram.contacts, g]) {
     out.push(`<circle cx="${n2(px(m.offset))}" cy="${n2(py(m.offset))}" r="${n2(2.2 * unit)}" fill="${theme.text}"/>`);
   }
@@ -178,7 +166,10 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const labelStyle = layout.labelStyle;
   const taken: Box[] = [];
   const labelPlates: Box[] = [];
-  const labelled = [...diagram.contacts.map((c) => ({ ...c, text: `${c.name} ${timeText(c.moment.utDays)}` })), { ...g, name: 'greatest', text: `Greatest ${timeText(g.moment.utDays)}` }];
+  const labelled = [
+    ...diagram.contacts.map((c) => ({ ...c, text: momentLabel(c.name, timeText(c.moment.utDays)) })),
+    { ...g, name: 'greatest', text: momentLabel('greatest', timeText(g.moment.utDays)) },
+  ];
   for (const m of labelled) {
     const i = diagram.path.findIndex((p) => p.ttDays >= m.moment.ttDays);
     const a = diagram.path[Math.max(0, i - 1)]!;
@@ -214,8 +205,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const barb = 5 * unit;
   out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
   out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
-  out.push(textElement('N', ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
-  out.push(textElement('E', ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+  out.push(textElement(DIAGRAM_WORDS.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
+  out.push(textElement(DIAGRAM_WORDS.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
 
   const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
   const barArcmin = [60, 30, 20, 10].find((m) => m * ARCMIN_RAD * pxPerRad <= (plot.right - plot.left) * 0.3) ?? 10;
@@ -224,11 +215,10 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const sy = plot.bottom - scaleStyle.sizePx * 1.6;
   out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
   out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
-  const moonArcmin = (2 * moonRad) / ARCMIN_RAD;
-  out.push(textElement(`the Moon is ${moonArcmin.toFixed(1)}′ across`, sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+  out.push(textElement(DIAGRAM_WORDS.moonAcross(((2 * moonRad) / ARCMIN_RAD).toFixed(1)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
 
-  // Timetable, with a key to the fills.
-  out.push(textElement(`Times (${clocksChange ? 'each with its zone' : clock.abbreviation(greatestUt)})`, table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  // The timetable.
+  out.push(textElement(DIAGRAM_WORDS.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
   rowText.forEach((r, i) => {
     const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
     const strong = r.key === 'greatest';
@@ -236,33 +226,76 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
     out.push(textElement(r.time, table.left + keyWidth + gap, y, { ...rowStyle, weight: strong ? 'semibold' : 'regular' }, theme.text));
     out.push(textElement(r.words, table.left + keyWidth + timeWidth + 2 * gap, y, rowStyle, theme.textMuted));
   });
-  if (side) {
-    const keyTop = table.top + tableHeight + 18 * unit;
-    const swatch = 14 * unit;
-    const keys: { fill: string; label: string; line?: boolean }[] = [
-      { fill: theme.sky.civil, label: 'penumbra: part of the Sun hidden' },
-      { fill: theme.sky.astronomical, label: 'umbra: all of the Sun hidden' },
-      { fill: moonFill, label: 'the Moon at greatest' },
-      { fill: theme.field, label: 'the Moon\'s path; the arrow: its motion', line: true },
-    ];
-    keys.forEach((k, i) => {
-      const y = keyTop + i * rowHeight;
-      if (k.line) {
-        out.push(`<path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(3.6 * unit)}"/><path d="M${n2(table.left)},${n2(y + swatch * 0.4)}h${n2(swatch)}" stroke="${k.fill}" stroke-width="${n2(1.8 * unit)}"/>`);
-        out.push(textElement(k.label, table.left + swatch + 6 * unit, y + swatch * 0.7, rowStyle, theme.text));
-        return;
-      }
-      out.push(`<rect x="${n2(table.left)}" y="${n2(y)}" width="${n2(swatch)}" height="${n2(swatch * 0.8)}" fill="${k.fill}" stroke="${theme.textMuted}" stroke-width="${n2(0.6 * unit)}"/>`);
-      out.push(textElement(k.label, table.left + swatch + 6 * unit, y + swatch * 0.7, rowStyle, theme.text));
-    });
-  }
 
-  // Header and small print.
-  titleLines.forEach((line, i) => out.push(textElement(line, margin, titleBaseline + i * layout.titleStyle.sizePx * 1.2, layout.titleStyle, theme.text)));
-  subtitleLines.forEach((line, i) => out.push(textElement(line, margin, subtitleBaseline + i * layout.subtitleStyle.sizePx * 1.35, layout.subtitleStyle, theme.textMuted)));
-  smallLines.forEach((line, i) => {
-    out.push(textElement(line, margin, H - margin - smallHeight + layout.smallStyle.sizePx * (1 + i * 1.4) - layout.smallStyle.sizePx * 0.4, layout.smallStyle, theme.textMuted));
+  return {
+    svg: page.render({ layers: out, footer: 'page-bottom' }),
+    title,
+    description: `${subtitle} ${smallPrint}`,
+    centre: { x: cx, y: cy },
+    pxPerRad,
+    labelPlates,
+    body: { left: plot.left, top: plot.top, right: W - margin, bottom: bodyBottom },
+  };
+}
+
+/** The inset's shape: its width over its height, for a given diagram (the path's extent with its Moon, and a heading row). */
+export function diagramInsetAspect(diagram: ShadowDiagram, headingPx: number, widthPx: number): number {
+  const { spanX, spanY } = diagramExtent(diagram);
+  const inner = widthPx * 0.9;
+  return widthPx / ((inner * spanY) / spanX + headingPx + widthPx * 0.1);
+}
+
+function diagramExtent(diagram: ShadowDiagram) {
+  const moonRad = diagram.greatest.moonSemiDiameterRad;
+  const xs = [...diagram.path.map((p) => -p.eastRad), diagram.radii.penumbraRad, -diagram.radii.penumbraRad];
+  const ys = [...diagram.path.map((p) => p.northRad), diagram.radii.penumbraRad, -diagram.radii.penumbraRad];
+  return {
+    spanX: Math.max(...xs) - Math.min(...xs) + 2 * moonRad,
+    spanY: Math.max(...ys) - Math.min(...ys) + 2 * moonRad,
+    midX: (Math.max(...xs) + Math.min(...xs)) / 2,
+    midY: (Math.max(...ys) + Math.min(...ys)) / 2,
+  };
+}
+
+/**
+ * The diagram small, as an inset on a map: a paper panel in `box` with a heading, the shadow's
+ * circles, the Moon's path with its arrow, the Moon at each contact and at greatest; the times
+ * are the map's. The same geometry and inks as the full figure.
+ */
+export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }): string {
+  const { eclipse } = diagram;
+  const pad = (box.right - box.left) * 0.05;
+  const plot = { left: box.left + pad, right: box.right - pad, top: box.top + pad + headingStyle.sizePx * 1.3, bottom: box.bottom - pad };
+  const { spanX, spanY, midX, midY } = diagramExtent(diagram);
+  const pxPerRad = Math.min((plot.right - plot.left) / spanX, (plot.bottom - plot.top) / spanY);
+  const cx = (plot.left + plot.right) / 2 - midX * pxPerRad;
+  const cy = (plot.top + plot.bottom) / 2 + midY * pxPerRad;
+  const px = (o: SkyOffset) => cx - o.eastRad * pxPerRad;
+  const py = (o: SkyOffset) => cy - o.northRad * pxPerRad;
+  const path = pathInk(theme, unit * 0.6);
+  const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
+  const out: string[] = [];
+  out.push(`<rect x="${n2(box.left)}" y="${n2(box.top)}" width="${n2(box.right - box.left)}" height="${n2(box.bottom - box.top)}" rx="${n2(3 * unit)}" fill="${theme.paper}" fill-opacity="0.94" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
+  out.push(textElement(INSET_WORDS.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
+  const edge = `stroke="${theme.textMuted}" stroke-width="${n2(0.6 * unit)}"`;
+  out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.penumbraRad * pxPerRad)}" fill="${theme.sky.civil}" ${edge}/>`);
+  out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.umbraRad * pxPerRad)}" fill="${theme.sky.astronomical}" ${edge}/>`);
+  const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.casing} stroke-linejoin="round"/>`);
+  out.push(`<path d="M${points.join('L')}" fill="none" ${path.line} stroke-linejoin="round"/>`);
+  const tip = diagram.path[diagram.path.length - 1]!;
+  const before = diagram.path[diagram.path.length - 3]!;
+  const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
+  const head = 7 * unit;
+  const arrow = [2.6, 0, -2.6].map((a, i) => {
+    const r = i === 1 ? 0 : head;
+    return `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
   });
-  out.push('</svg>');
-  return { svg: out.join('\n'), title, description: `${subtitle} ${smallPrint}`, centre: { x: cx, y: cy }, pxPerRad, labelPlates };
+  out.push(`<path d="M${arrow.join('L')}Z" fill="${theme.field}"/>`);
+  for (const c of diagram.contacts) {
+    out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, undefined)}/>`);
+  }
+  const g = diagram.greatest;
+  out.push(`<circle cx="${n2(px(g.offset))}" cy="${n2(py(g.offset))}" r="${n2(g.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, moonFill)}/>`);
+  return `<g>${out.join('')}</g>`;
 }

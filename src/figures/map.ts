@@ -5,7 +5,10 @@
  * graticule, the field's lines, the Moon-up edges, the sub-lunar point,
  * labels; then title, legend and small print around the map.
  */
-import { geoPath, type GeoProjection } from 'd3-geo';
+import { geoContains, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
+import { shadowDiagram } from '../eclipses/lunar/diagram.ts';
+import { diagramInset, diagramInsetAspect } from './diagram.ts';
+import type { MapInset } from './insetNames.ts';
 import type { MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
@@ -44,7 +47,10 @@ export interface MapStyle {
   readonly fitPath?: boolean;
   /** Every word on the map, in the reader's language (default English). */
   readonly words?: LunarFigureWords;
+  /** A small figure inside the map, where it hides least land: the shadow diagram, or none (the default). */
+  readonly inset?: MapInset;
 }
+
 
 export type { MapMark } from './labels.ts';
 
@@ -90,6 +96,8 @@ export interface Scene {
   readonly basemapDetail: BasemapDetail;
   /** The plates of the labels on the map (page pixels): on the zone edges and field lines, and of the marked places. */
   readonly labelPlates: { readonly zones: readonly Box[]; readonly marks: readonly Box[] };
+  /** The inset's panel on the page, when there is one. */
+  readonly inset?: Box;
 }
 
 
@@ -345,6 +353,26 @@ export function composeScene(input: SceneInput): Scene {
   overlay.push(...labels);
   const zoneLabelPlates = [...taken];
   const marks = input.marks ?? [];
+  // The inset goes where it hides least land and covers no label, centre mark or marked place; later
+  // labels keep clear of it.
+  let insetBox: Box | undefined;
+  let insetSvg = '';
+  if (style.inset === 'diagram') {
+    const diagram = shadowDiagram(eclipse);
+    const headingStyle = { sizePx: layout.legendStyle.sizePx * 0.8, weight: 'semibold' as const };
+    // Scoring needs no fine coastline: the coarsest land keeps each test cheap on a detailed regional map.
+    const coarseLand = loadBasemap('110m').land as GeoPermissibleObjects;
+    const markPoints = marks.map((m) => projection([m.lonDeg, m.latDeg])).filter((p): p is [number, number] => p !== null);
+    insetBox = insetPlace(frame, (width) => diagramInsetAspect(diagram, headingStyle.sizePx * 1.3, width), taken, markPoints, 6 * unit, (point) => {
+      const lonLat = projection.invert?.(point);
+      if (!lonLat || !Number.isFinite(lonLat[0]) || !Number.isFinite(lonLat[1])) return false;
+      if (style.view.projection === 'globe' && angularDistanceDeg(focus, lonLat) > 90) return false;
+      const back = projection(lonLat);
+      return back !== null && Math.hypot(back[0] - point[0], back[1] - point[1]) < 1 && geoContains(coarseLand, lonLat);
+    });
+    taken.push(insetBox);
+    insetSvg = diagramInset(diagram, theme, insetBox, unit, headingStyle);
+  }
   const lineHits = marks.length === 0 ? () => 0 : lineHitCounter([
     ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]))),
     ...lines.map((l) => l.line.map((p) => projection([p[0]!, p[1]!]))),
@@ -395,6 +423,8 @@ export function composeScene(input: SceneInput): Scene {
     }
   }
 
+  if (insetSvg) overlay.push(insetSvg);
+
   return {
     svg: page.render({ layers: [...base, ...overlay], headerShiftPx: shiftDown, footer: { top: footerTop } }),
     title: texts.title,
@@ -407,5 +437,49 @@ export function composeScene(input: SceneInput): Scene {
     frame,
     basemapDetail: basemap.detail,
     labelPlates: { zones: zoneLabelPlates, marks: marked.plates },
+    ...(insetBox ? { inset: insetBox } : {}),
   };
+}
+
+/**
+ * Where an inset of a given shape goes inside the map's frame: spots on a 9 × 9 grid over the frame
+ * (corners first), at a quarter of the frame's width, else a fifth, else a sixth (never taller than
+ * 45 % of the frame). Spots that would cover a label plate or a marked place are ruled out; of the
+ * rest, the one that hides least land (a 10 × 10 grid of samples) wins, the first of equals. Should
+ * every spot at every width cover something, the smallest spot covering fewest wins.
+ */
+export function insetPlace(frame: Frame, aspectAt: (widthPx: number) => number, taken: readonly Box[], points: readonly [number, number][], padPx: number, isLand: (point: [number, number]) => boolean): Box {
+  const steps = [0, 1, 0.5, 0.25, 0.75, 0.125, 0.375, 0.625, 0.875];
+  let fallback: { box: Box; covered: number } | undefined;
+  for (const share of [0.24, 0.2, 0.16]) {
+    // The shape depends a little on the width (the heading keeps its size): settle it in two steps.
+    let width = frame.width * share;
+    for (let i = 0; i < 2; i++) width = Math.min(frame.width * share, frame.height * 0.45 * aspectAt(width));
+    const height = width / aspectAt(width);
+    const candidates: Box[] = steps.flatMap((fy) => steps.map((fx) => {
+      const left = frame.x + padPx + fx * (frame.width - 2 * padPx - width);
+      const top = frame.y + padPx + fy * (frame.height - 2 * padPx - height);
+      return { left, top, right: left + width, bottom: top + height };
+    }));
+    const coveredBy = (b: Box) => {
+      const around: Box = { left: b.left - padPx, top: b.top - padPx, right: b.right + padPx, bottom: b.bottom + padPx };
+      return taken.filter((t) => overlaps(t, around)).length + points.filter(([x, y]) => x >= around.left && x <= around.right && y >= around.top && y <= around.bottom).length;
+    };
+    const clear: Box[] = [];
+    for (const b of candidates) {
+      const covered = coveredBy(b);
+      if (covered === 0) clear.push(b);
+      else if (!fallback || covered <= fallback.covered) fallback = { box: b, covered };
+    }
+    if (clear.length === 0) continue;
+    const land = (b: Box) => {
+      let count = 0;
+      for (let i = 0; i < 10; i++) {
+        for (let j = 0; j < 10; j++) if (isLand([b.left + ((i + 0.5) * width) / 10, b.top + ((j + 0.5) * height) / 10])) count++;
+      }
+      return count;
+    };
+    return clear.map((b) => ({ b, s: land(b) })).reduce((best, c) => (c.s < best.s ? c : best)).b;
+  }
+  return fallback!.box;
 }

@@ -8,6 +8,7 @@
  */
 import { InputError } from '../errors.ts';
 import { ephemerisTime, sunPositionKm } from '../ephemeris/bodies.ts';
+import { SUN_RADIUS_KM } from '../ephemeris/constants.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { momentFromTT, type Moment } from '../ephemeris/time.ts';
 import { horizontal, type Observer } from '../ephemeris/topocentric.ts';
@@ -243,5 +244,60 @@ function pathDistances(eclipse: SolarEclipse, lonLat: LonLat, maximum: LocalShad
     nearPathEdge: nearestLimitKm !== undefined && nearestLimitKm < NEAR_EDGE_KM,
     ...(axisPoint ? { centralLineKm: chordKm(lonLat, axisPoint.lonLat) } : {}),
     ...(nearestLimitKm !== undefined ? { nearestLimitKm } : {}),
+  };
+}
+
+/**
+ * The Sun and the Moon as a place sees them at its maximum: the two discs to
+ * scale and where the Moon's centre lies from the Sun's. On the fundamental
+ * plane at the place's height the penumbral and umbral radii L1′, L2′ make the
+ * Sun's disc (L1′ + L2′)/2 and the Moon's (L1′ − L2′)/2, their centres
+ * Δ = √(u² + v²) apart (Meeus, Elements of Solar Eclipses, ch. 5; the same
+ * model as `magnitudeOf` and `obscurationOf`). Seen from the place, the Moon
+ * stands off the Sun by (u, v): u toward the east, v toward the north pole of
+ * date, so its position angle from the Sun's centre, north through east, is
+ * atan2(u, v).
+ */
+export interface SolarDiscs {
+  readonly maximum: Moment;
+  /** The Sun's apparent semi-diameter, radians (its radius over its distance). */
+  readonly sunSemiDiameterRad: number;
+  /** The Moon's semi-diameter in Sun radii: (L1′ − L2′)/(L1′ + L2′). */
+  readonly moonRadiusSunRadii: number;
+  /** Centre to centre, in Sun radii: 2Δ/(L1′ + L2′). */
+  readonly separationSunRadii: number;
+  /** Position angle of the Moon's centre from the Sun's, degrees from north through east, 0…360. */
+  readonly positionAngleDeg: number;
+  readonly magnitude: number;
+  readonly obscuration: number;
+  /** The Sun's apparent altitude and azimuth at maximum, degrees. */
+  readonly sunAltitudeDeg: number;
+  readonly sunAzimuthDeg: number;
+}
+
+export function solarDiscsAtMaximum(eclipse: SolarEclipse, observer: Observer): SolarDiscs {
+  const { latDeg, lonDeg } = observer;
+  if (!(Math.abs(latDeg) <= 90) || !(Math.abs(lonDeg) <= 180)) {
+    throw new InputError('observer', 'latitude −90…90° and longitude −180…180°', `${latDeg}, ${lonDeg}`, true);
+  }
+  const fit = eclipse.elements;
+  const place = geocentricPlace([lonDeg, latDeg]);
+  const s = localShadow(fit, place, localMaximumTT(fit, place, eclipse.greatest.ttDays));
+  const sum = s.penumbra + s.umbra;
+  const time = ephemerisTime(s.ttDays);
+  const sunKm = sunPositionKm(time);
+  const moment = momentFromTT(s.ttDays, fit.deltaTSeconds);
+  const sun = horizontal(sunKm, moment, { lonDeg, latDeg });
+  const angle = Math.atan2(s.u, s.v) / DEG;
+  return {
+    maximum: moment,
+    sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / Math.hypot(...sunKm)),
+    moonRadiusSunRadii: (s.penumbra - s.umbra) / sum,
+    separationSunRadii: (2 * s.distance) / sum,
+    positionAngleDeg: angle < 0 ? angle + 360 : angle,
+    magnitude: magnitudeOf(s),
+    obscuration: obscurationOf(s),
+    sunAltitudeDeg: sun.altitudeDeg,
+    sunAzimuthDeg: sun.azimuthDeg,
   };
 }

@@ -5,7 +5,7 @@
  * `at`, `zone`); the CLI shows its flags instead, a style its fields.
  */
 import { InputError } from '../errors.ts';
-import { eclipseNear, nextEclipse, type BodyChoice } from '../eclipses/kinds.ts';
+import { eclipseNear, nextEclipse, type BodyChoice, type Eclipse } from '../eclipses/kinds.ts';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { describePlace, resolvePlace, type PlaceMatch } from '../places/gazetteer.ts';
 import type { PlaceLabel } from '../places/label.ts';
@@ -29,6 +29,16 @@ export function chooseEclipse<B extends BodyChoice = 'lunar'>(when: When, choice
   const found = when.kind === 'next' ? nextEclipse(now, options) : eclipseNear(when.date, 7.5, options);
   if (!found) throw new InputError('when', WHEN_EXPECTED, when.kind === 'next' ? 'next (none within a year)' : when.text);
   return found as EclipseOf[B];
+}
+
+/**
+ * One eclipse of either body, or of the one asked for: the next after `now`,
+ * or the one within a week of a date. A date within reach of both a lunar and
+ * a solar eclipse (and on the date of neither) is an InputError naming both,
+ * parameter `body`.
+ */
+export function chooseEclipseOfBody(when: When, choice: EclipseChoice, now: Date, body: BodyChoice): Eclipse {
+  return chooseEclipse(when, choice, now, body);
 }
 
 /** A place by name, or a position [lon, lat] in degrees; `zone` (IANA) overrides the zone found there. */

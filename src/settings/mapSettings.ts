@@ -15,6 +15,7 @@ import { THEME_NAMES, THEMES, type ThemeName } from '../figures/theme.ts';
 import { MARK_CLOCKS, type MarkClock } from '../figures/markClock.ts';
 import { AREA_NAMES_CHOICES, type AreaNamesChoice } from '../figures/areaNames.ts';
 import type { MapStyle } from '../figures/map.ts';
+import { MAP_INSETS, type MapInset } from '../figures/insetNames.ts';
 import { BBOX_EXPECTED, checkNumber, checkPixelSize, isBoundingBox, isLonLat, LAT_LON_EXPECTED, type PixelSize } from './read.ts';
 import { choosePlace } from './choose.ts';
 import { chooseLanguage, LANGUAGES } from './language.ts';
@@ -119,6 +120,8 @@ export interface MapChoices extends ViewChoice, PageChoice {
   readonly areaNames: AreaNamesChoice;
   /** BCP 47 tag of the reader's language (default English). */
   readonly lang?: string;
+  /** A small figure inside the map; default none. */
+  readonly inset?: MapInset;
 }
 
 /** The defaults of what a map is asked for (the command line's and the house style's). */
@@ -152,7 +155,8 @@ export function mapSettings(choices: MapChoices): MapSettings {
   const areaNames = namesChoice === 'auto' ? view.projection !== 'region' && choices.preset !== 'card' : namesChoice === 'on';
   // A card of a solar eclipse shows its path unless another view is asked for (a lunar map has no path and ignores this).
   const fitPath = choices.preset === 'card' && choices.projection === 'equal-earth' && choices.bbox === undefined && choices.centre === undefined;
+  const inset = choices.inset === undefined ? 'none' : checkChoice('inset', choices.inset, MAP_INSETS);
   // English maps carry no words in their style, as before languages were offered.
   const words = language.tag === 'en' && language.lunar === LANGUAGES.en.lunar ? {} : { words: language.lunar.figures };
-  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}), ...words }, size, dpi, marks, words: language.lunar };
+  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}), ...(inset !== 'none' ? { inset } : {}), ...words }, size, dpi, marks, words: language.lunar };
 }

@@ -126,7 +126,7 @@ test('runBatch names outDir, the command line --out (an output folder whose thum
 
 test('every flag the table names is one the command line declares (its help); unknown names pass unchanged', async () => {
   let help = '';
-  for (const command of ['list', 'map', 'local', 'sky', 'caption', 'batch']) help += (await run([command, '--help'])).stdout;
+  for (const command of ['list', 'map', 'local', 'sky', 'diagram', 'caption', 'batch']) help += (await run([command, '--help'])).stdout;
   for (const [parameter, flag] of Object.entries(FLAGS)) {
     if (flag === 'WHEN') continue; // the argument, not an option: named "[when]" in help
     assert.ok(new RegExp(`(^|[\\s,])${flag}[\\s<]`).test(help), `${parameter} → ${flag} is declared`);

@@ -93,7 +93,7 @@ test('same inputs, same bytes: the SVG is pinned by its hash, and a PNG drawn tw
   assert.equal(meta.width, 1200);
   assert.equal(meta.height, 675);
 });
-const PINNED_SVG_SHA256 = 'ab4f6039b0ef8589329193bcdb06a2f0018315f6c86036cf68f0207d7f719e47';
+const PINNED_SVG_SHA256 = '46ed2295614d924ab66566ec2a1bf31daeffddbf8a764014b1e90689a61c39c7';
 
 test('times in a zone: --tz prints the zone\'s clock and names it, and a time after midnight carries its day (IANA tz database through Intl)', async () => {
   const s = scene(undefined, undefined, 'America/Denver', shadowDiagram(eclipseOn('2026-08-28')));

@@ -8,6 +8,7 @@ import { PROJECTION_NAMES, type View } from '../../figures/projection.ts';
 import { THEME_NAMES } from '../../figures/theme.ts';
 import { MARK_CLOCKS } from '../../figures/markClock.ts';
 import { AREA_NAMES_CHOICES } from '../../figures/areaNames.ts';
+import { MAP_INSETS } from '../../figures/insetNames.ts';
 import { checkOutputFolder, writeFileAtomic } from '../../outputs/files.ts';
 import { EXTENSION_FORMATS, MAP_FORMATS, type MapFormat } from '../../outputs/formatNames.ts';
 import type { CommandContext } from '../context.ts';
@@ -49,6 +50,7 @@ export function registerMap(program: Command, context: CommandContext): void {
     .option('--format <name>', `${MAP_FORMATS.join(', ')} (default: from --output, else png)`))
     .option('--mark <place>', 'mark a place with its time of the key phase (repeatable)', (value: string, previous: string[]) => [...previous, value], [] as string[])
     .option('--area-names <when>', `${AREA_NAMES_CHOICES.join(', ')}: continent and ocean names (auto: on world views, off on cards and regional views)`, 'auto')
+    .option('--inset <figure>', `${MAP_INSETS.join(' or ')}: a small figure inside the map, where it hides least land (diagram: the Moon's path through the shadow)`)
     .option('--mark-clock <clock>', `${MARK_CLOCKS.join(' or ')}: marked places' times on the map's clock (--tz), or each in its own zone`, 'map')
     .option('--style <file>', 'a house style (JSON or YAML, as for batch); options given here win');
   withLanguageOption(command)

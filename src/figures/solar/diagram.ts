@@ -1,0 +1,180 @@
+/**
+ * The solar diagram: the Sun and the Moon as one place sees them at its
+ * maximum, both discs to scale, the Moon's centre at its computed position
+ * angle from the Sun's; north up (towards the celestial pole of date), east to
+ * the left. Beside it the place's timetable. On the shared page frame, with
+ * the eye-safety caution in the header band and the small print.
+ */
+import type { CivilClock } from '../../ephemeris/civilTime.ts';
+import { timeOnDay } from '../../ephemeris/dayMark.ts';
+import type { SolarDiscs, SolarLocalCircumstances } from '../../local/solar.ts';
+import { SOLAR_DIAGRAM_WORDS, SOLAR_MOMENT_WORDS, solarDiagramTexts, solarMomentLabel, type SolarDiagramFacts } from '../../words/solar/diagram.ts';
+import { layoutFor, n2, textElement, type Box, type PageSize } from '../draw.ts';
+import { pageFrame, type LegendEntry } from '../frame.ts';
+import type { Theme } from '../theme.ts';
+import { FONT_CREDIT, measureText } from '../typography.ts';
+
+export interface SolarDiagramSceneInput {
+  readonly local: SolarLocalCircumstances;
+  readonly discs: SolarDiscs;
+  readonly placeName: string;
+  readonly clock: CivilClock;
+  readonly theme: Theme;
+  readonly size: PageSize;
+  readonly generator: string;
+  readonly title?: string;
+}
+
+export interface SolarDiagramScene {
+  readonly svg: string;
+  readonly title: string;
+  readonly description: string;
+  readonly facts: SolarDiagramFacts;
+  /** For tests, page pixels: the discs as drawn, and the body's room. */
+  readonly sun: { readonly x: number; readonly y: number; readonly r: number };
+  readonly moon: { readonly x: number; readonly y: number; readonly r: number };
+  readonly body: Box;
+}
+
+const ARCMIN_RAD = Math.PI / (180 * 60);
+const DEG = Math.PI / 180;
+
+/** The discs' ink, on the figure and in its legend alike. */
+const sunInk = (theme: Theme, unit: number) => `fill="${theme.track.penumbral}" stroke="${theme.text}" stroke-width="${n2(1.2 * unit)}"`;
+const moonInk = (theme: Theme, unit: number) => `fill="${theme.sky.night}" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"`;
+const moonOutlineInk = (theme: Theme, unit: number) => `fill="none" stroke="${theme.text}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(5 * unit)} ${n2(3 * unit)}"`;
+
+export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDiagramScene {
+  const { local, discs, clock, theme, size } = input;
+  const W = size.widthPx;
+  const H = size.heightPx;
+  const localKind = local.kind;
+  if (localKind === 'none') throw new Error('composeSolarDiagramScene: the place sees nothing of the eclipse');
+  const facts: SolarDiagramFacts = {
+    eclipse: local.eclipse,
+    placeName: input.placeName,
+    clock,
+    localKind,
+    maximumUtDays: discs.maximum.utDays,
+    magnitude: discs.magnitude,
+    obscuration: discs.obscuration,
+    sunAltitudeDeg: discs.sunAltitudeDeg,
+    positionAngleDeg: discs.positionAngleDeg,
+  };
+  const events = local.events;
+  const first = events[0]!.moment.utDays;
+  const last = events[events.length - 1]!.moment.utDays;
+  const zoneName = clock.zoneDescriptionBetween(first, last);
+  const clocksChange = clock.offsetChanges(first, last).length > 0;
+  const { title, subtitle, smallPrint } = solarDiagramTexts(facts, zoneName, input.generator, FONT_CREDIT, input.title);
+
+  const unitOf = layoutFor(size).unit;
+  const disc = (ink: string) => (x: number, y: number, s: number) => `<circle cx="${n2(x + s / 2)}" cy="${n2(y + s / 2)}" r="${n2(s * 0.42)}" ${ink}/>`;
+  const legend: LegendEntry[] = [
+    { label: SOLAR_DIAGRAM_WORDS.sun, swatch: disc(sunInk(theme, unitOf)) },
+    { label: SOLAR_DIAGRAM_WORDS.moonOverSun, swatch: disc(moonInk(theme, unitOf)) },
+    { label: SOLAR_DIAGRAM_WORDS.moonOutline, swatch: disc(moonOutlineInk(theme, unitOf)) },
+  ];
+  const page = pageFrame({
+    size, theme, id: 'solar-diagram', title, subtitle, description: `${subtitle} ${smallPrint}`, smallPrint, legend,
+    legendSetting: { swatchUnits: 14, gapUnits: 14, gapInWidth: true }, headerGapUnits: 14,
+  });
+  const { layout, contentWidth } = page;
+  const { unit, margin } = layout;
+
+  // The timetable: the place's contacts, maximum, and any sunrise or sunset inside the eclipse.
+  const rowStyle = layout.legendStyle;
+  const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
+  const rows = events.map((e) => ({
+    key: e.event,
+    label: solarMomentLabel(e.event),
+    time: clocksChange ? clock.stamp(e.moment.utDays, discs.maximum.utDays) : timeOnDay(clock, e.moment.utDays, discs.maximum.utDays),
+    words: `${SOLAR_MOMENT_WORDS[e.event]} · ${SOLAR_DIAGRAM_WORDS.sunAltitude(e.sunAltitudeDeg)}`,
+  }));
+  const keyWidth = Math.max(...rows.map((r) => measureText(r.label, { ...rowStyle, weight: 'semibold' })));
+  const timeWidth = Math.max(...rows.map((r) => measureText(r.time, rowStyle)));
+  const wordsWidth = Math.max(...rows.map((r) => measureText(r.words, rowStyle)));
+  const gap = 10 * unit;
+  const tableWidth = keyWidth + timeWidth + wordsWidth + 2 * gap;
+  const rowHeight = rowStyle.sizePx * 1.75;
+  const tableHeight = headStyle.sizePx * 2 + rows.length * rowHeight;
+
+  const bodyTop = page.headerBottom;
+  const bodyBottom = H - margin - page.footerHeight - 10 * unit;
+  const side = W / H >= 1.2 && tableWidth < contentWidth * 0.5;
+  const plot = side
+    ? { left: margin, top: bodyTop, right: W - margin - tableWidth - 24 * unit, bottom: bodyBottom }
+    : { left: margin, top: bodyTop, right: W - margin, bottom: bodyBottom - tableHeight - 12 * unit };
+  const table = side
+    ? { left: W - margin - tableWidth, top: bodyTop + 8 * unit }
+    : { left: margin + Math.max(0, (contentWidth - tableWidth) / 2), top: plot.bottom + 12 * unit };
+
+  // Scale: the Sun and the whole Moon fit the plot, centred on the pair, with room for the compass and scale bar.
+  const moonR = discs.moonRadiusSunRadii;
+  const pa = discs.positionAngleDeg * DEG;
+  // East to the left: the Moon's east offset moves it left on the page.
+  const moonDx = -discs.separationSunRadii * Math.sin(pa);
+  const moonDy = -discs.separationSunRadii * Math.cos(pa);
+  const minX = Math.min(-1, moonDx - moonR);
+  const maxX = Math.max(1, moonDx + moonR);
+  const minY = Math.min(-1, moonDy - moonR);
+  const maxY = Math.max(1, moonDy + moonR);
+  const room = 2 * layout.legendStyle.sizePx * 2.6;
+  const pxPerSunRadius = Math.min((plot.right - plot.left - room) / (maxX - minX), (plot.bottom - plot.top - room) / (maxY - minY));
+  const sunX = (plot.left + plot.right) / 2 - ((minX + maxX) / 2) * pxPerSunRadius;
+  const sunY = (plot.top + plot.bottom) / 2 - ((minY + maxY) / 2) * pxPerSunRadius;
+  const sun = { x: sunX, y: sunY, r: pxPerSunRadius };
+  const moon = { x: sunX + moonDx * pxPerSunRadius, y: sunY + moonDy * pxPerSunRadius, r: moonR * pxPerSunRadius };
+
+  const defs = `<defs><clipPath id="solar-disc"><circle cx="${n2(sun.x)}" cy="${n2(sun.y)}" r="${n2(sun.r)}"/></clipPath></defs>`;
+  const out: string[] = [];
+  out.push(`<circle cx="${n2(sun.x)}" cy="${n2(sun.y)}" r="${n2(sun.r)}" ${sunInk(theme, unit)}/>`);
+  // The Moon is seen only where it covers the Sun; its whole outline is drawn dashed.
+  out.push(`<circle cx="${n2(moon.x)}" cy="${n2(moon.y)}" r="${n2(moon.r)}" ${moonInk(theme, unit)} clip-path="url(#solar-disc)"/>`);
+  out.push(`<circle cx="${n2(moon.x)}" cy="${n2(moon.y)}" r="${n2(moon.r)}" ${moonOutlineInk(theme, unit)}/>`);
+  const dot = 2.2 * unit;
+  out.push(`<circle cx="${n2(sun.x)}" cy="${n2(sun.y)}" r="${n2(dot)}" fill="${theme.text}"/>`);
+  out.push(`<circle cx="${n2(moon.x)}" cy="${n2(moon.y)}" r="${n2(dot)}" fill="${theme.centreMark}"/>`);
+
+  // Compass (top left) and scale (bottom left), as on the lunar diagram.
+  const compassStyle = { sizePx: layout.legendStyle.sizePx, weight: 'semibold' as const };
+  const arm = 26 * unit;
+  const ox = plot.left + compassStyle.sizePx * 1.4 + arm;
+  const oy = plot.top + compassStyle.sizePx * 1.6 + arm;
+  const stroke = `stroke="${theme.text}" stroke-width="${n2(1.3 * unit)}" fill="none"`;
+  const barb = 5 * unit;
+  out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
+  out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
+  out.push(textElement(SOLAR_DIAGRAM_WORDS.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
+  out.push(textElement(SOLAR_DIAGRAM_WORDS.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+
+  const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
+  const pxPerArcmin = (pxPerSunRadius / discs.sunSemiDiameterRad) * ARCMIN_RAD;
+  const barArcmin = [20, 10, 5, 2].find((m) => m * pxPerArcmin <= (plot.right - plot.left) * 0.3) ?? 2;
+  const barPx = barArcmin * pxPerArcmin;
+  const sx = plot.left + 4 * unit;
+  const sy = plot.bottom - scaleStyle.sizePx * 1.6;
+  out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
+  out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
+  out.push(textElement(SOLAR_DIAGRAM_WORDS.sunAcross(((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD).toFixed(1)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+
+  // The timetable.
+  out.push(textElement(SOLAR_DIAGRAM_WORDS.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  rows.forEach((r, i) => {
+    const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
+    const strong = r.key === 'maximum';
+    out.push(textElement(r.label, table.left, y, { ...rowStyle, weight: 'semibold' }, theme.text));
+    out.push(textElement(r.time, table.left + keyWidth + gap, y, { ...rowStyle, weight: strong ? 'semibold' : 'regular' }, theme.text));
+    out.push(textElement(r.words, table.left + keyWidth + timeWidth + 2 * gap, y, rowStyle, theme.textMuted));
+  });
+
+  return {
+    svg: page.render({ defs, layers: out, footer: 'page-bottom' }),
+    title,
+    description: `${subtitle} ${smallPrint}`,
+    facts,
+    sun,
+    moon,
+    body: { left: plot.left, top: plot.top, right: W - margin, bottom: bodyBottom },
+  };
+}

@@ -1,0 +1,52 @@
+/**
+ * One solar eclipse and one place → the Sun and the Moon as the place sees
+ * them at maximum, as PNG, SVG, WebP or JPEG, with its caption (the caution in
+ * it, long form). A place that sees nothing of the eclipse with the Sun up is
+ * bad input: one InputError naming the parameter the place came from.
+ */
+import { InputError } from '../errors.ts';
+import type { SolarEclipse } from '../eclipses/solar/types.ts';
+import type { CivilClock } from '../ephemeris/civilTime.ts';
+import type { PageSize } from '../figures/draw.ts';
+import { composeSolarDiagramScene } from '../figures/solar/diagram.ts';
+import type { Theme } from '../figures/theme.ts';
+import { solarDiscsAtMaximum, solarLocalCircumstances } from '../local/solar.ts';
+import { rasterise } from '../raster/raster.ts';
+import { solarDiagramCaption } from '../words/solar/diagram.ts';
+import type { DiagramFormat } from './diagramFile.ts';
+
+export interface SolarDiagramRequest {
+  readonly eclipse: SolarEclipse;
+  /** Where the eclipse is seen from, and how it is named; `parameter` names where it came from, for errors. */
+  readonly place: { readonly name: string; readonly latDeg: number; readonly lonDeg: number; readonly parameter: string };
+  readonly clock: CivilClock;
+  readonly theme: Theme;
+  readonly size: PageSize;
+  readonly dpi: number;
+  readonly format: DiagramFormat;
+  readonly generator: string;
+  readonly title?: string;
+}
+
+export async function renderSolarDiagramFile(request: SolarDiagramRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
+  const { eclipse, place } = request;
+  const observer = { latDeg: place.latDeg, lonDeg: place.lonDeg };
+  const local = solarLocalCircumstances(eclipse, observer);
+  if (local.kind === 'none') {
+    throw new InputError(place.parameter, `a place that sees the solar eclipse of ${eclipse.id} with the Sun up`, `${place.name} (${local.events.length === 0 ? 'outside the Moon\'s shadow' : 'the Sun is down throughout'})`, true);
+  }
+  const scene = composeSolarDiagramScene({
+    local,
+    discs: solarDiscsAtMaximum(eclipse, observer),
+    placeName: place.name,
+    clock: request.clock,
+    theme: request.theme,
+    size: request.size,
+    generator: request.generator,
+    ...(request.title !== undefined ? { title: request.title } : {}),
+  });
+  const caption = solarDiagramCaption(scene.title, scene.facts);
+  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description, caption };
+  const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
+  return { bytes, svg: scene.svg, description: scene.description, caption };
+}

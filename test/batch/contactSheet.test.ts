@@ -44,7 +44,8 @@ test('the contact sheet: thumbnails load, links resolve, no console errors (head
     page.on('requestfailed', (request) => problems.push(`failed: ${request.url()}`));
     await page.goto(pathToFileURL(join(out, 'index.html')).href, { waitUntil: 'load' });
     const images = await page.$$eval('img', (nodes) => nodes.map((img) => ({ src: (img as HTMLImageElement).src, ok: (img as HTMLImageElement).complete && (img as HTMLImageElement).naturalWidth > 0 })));
-    assert.equal(images.length, 2);
+    // 2026: two lunar and two solar eclipses, each card with its thumbnail.
+    assert.equal(images.length, 4);
     for (const img of images) assert.ok(img.ok, `thumbnail did not load: ${img.src}`);
     const links = await page.$$eval('a', (nodes) => nodes.map((a) => (a as HTMLAnchorElement).href));
     assert.ok(links.length >= 2 * 4, `links: ${links.length}`);

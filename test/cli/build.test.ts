@@ -111,6 +111,6 @@ test('a map and a batch come out byte for byte the same from the compiled comman
   }
   assert.equal(files['built.png'], files['sources.png']);
   assert.equal(files['built batch'], files['sources batch']);
-  // Two lunar eclipses in 2026, each a PNG, a caption and a thumbnail; two solar ones, each a caption and its GeoJSON.
-  assert.equal(JSON.parse(files['built batch']!).length, 10);
+  // Two lunar eclipses in 2026, each a PNG, a caption and a thumbnail; two solar ones, each a PNG, a thumbnail, a caption and its GeoJSON.
+  assert.equal(JSON.parse(files['built batch']!).length, 14);
 });

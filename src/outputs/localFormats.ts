@@ -16,6 +16,7 @@ export const LOCAL_SCHEMA = 'umbracast.local/1';
 export { LOCAL_FORMATS, type LocalFormat } from './formatNames.ts';
 
 import type { PlaceLabel } from '../places/label.ts';
+import { foldIcsLine, icsText } from './icalendar.ts';
 export type { PlaceLabel } from '../places/label.ts';
 
 export interface LocalReport {
@@ -162,27 +163,6 @@ export function localCsv(report: LocalReport): string {
 // ---- iCalendar (RFC 5545) ------------------------------------------------------------------
 
 const icsTime = (moment: Moment) => isoSeconds(moment.utDays).replace(/[-:]/g, '');
-/** RFC 5545 §3.3.11: escape backslash, semicolon, comma and newlines in TEXT. */
-const icsText = (text: string) => text.replace(/\\/g, '\\\\').replace(/;/g, '\\;').replace(/,/g, '\\,').replace(/\r?\n/g, '\\n');
-
-/** RFC 5545 §3.1: lines longer than 75 octets are folded (CRLF + space), never inside a UTF-8 sequence. */
-function fold(line: string): string {
-  const out: string[] = [];
-  let current = '';
-  let octets = 0;
-  for (const char of line) {
-    const size = Buffer.byteLength(char);
-    if (octets + size > (out.length === 0 ? 75 : 74)) {
-      out.push(current);
-      current = '';
-      octets = 0;
-    }
-    current += char;
-    octets += size;
-  }
-  out.push(current);
-  return out.join('\r\n ');
-}
 
 interface Phase {
   readonly key: LunarPhaseKey;
@@ -262,5 +242,5 @@ export function localIcs(report: LocalReport, generator: string): string {
     );
   }
   lines.push('END:VCALENDAR');
-  return `${lines.map(fold).join('\r\n')}\r\n`;
+  return `${lines.map(foldIcsLine).join('\r\n')}\r\n`;
 }

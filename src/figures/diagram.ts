@@ -15,6 +15,7 @@ import { pageFrame, type LegendEntry } from './frame.ts';
 import { fillSwatch } from './layers.ts';
 import type { Theme } from './theme.ts';
 import { FONT_CREDIT, measureText } from './typography.ts';
+import { timetableLayout } from './timetable.ts';
 
 export interface DiagramSceneInput {
   readonly diagram: ShadowDiagram;
@@ -93,24 +94,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const rowStyle = layout.legendStyle;
   const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
   const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? DIAGRAM_WORDS.greatest : m.key, time: timeText(m.utDays), words: MOMENT_WORDS[m.key] }));
-  const keyWidth = Math.max(...rowText.map((r) => measureText(r.label, { ...rowStyle, weight: 'semibold' })));
-  const timeWidth = Math.max(...rowText.map((r) => measureText(r.time, rowStyle)));
-  const wordsWidth = Math.max(...rowText.map((r) => measureText(r.words, rowStyle)));
-  const gap = 10 * unit;
-  const tableWidth = keyWidth + timeWidth + wordsWidth + 2 * gap;
-  const rowHeight = rowStyle.sizePx * 1.75;
-  const tableHeight = headStyle.sizePx * 2 + rowText.length * rowHeight;
-
-  const bodyTop = page.headerBottom;
-  const bodyBottom = H - margin - page.footerHeight - 10 * unit;
-  // Wide pages put the timetable beside the circles; others put it below them.
-  const side = W / H >= 1.2 && tableWidth < contentWidth * 0.45;
-  const plot = side
-    ? { left: margin, top: bodyTop, right: W - margin - tableWidth - 24 * unit, bottom: bodyBottom }
-    : { left: margin, top: bodyTop, right: W - margin, bottom: bodyBottom - tableHeight - 12 * unit };
-  const table = side
-    ? { left: W - margin - tableWidth, top: bodyTop + 8 * unit }
-    : { left: margin + Math.max(0, (contentWidth - tableWidth) / 2), top: plot.bottom + 12 * unit };
+  const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rowText, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.45);
 
   // Scale: the whole path with its Moon, and the penumbra, fit inside the plot with room for labels.
   const moonRad = diagram.greatest.moonSemiDiameterRad;

@@ -13,6 +13,7 @@ import { layoutFor, n2, textElement, type Box, type PageSize } from '../draw.ts'
 import { pageFrame, type LegendEntry } from '../frame.ts';
 import type { Theme } from '../theme.ts';
 import { FONT_CREDIT, measureText } from '../typography.ts';
+import { timetableLayout } from '../timetable.ts';
 
 export interface SolarDiagramSceneInput {
   readonly local: SolarLocalCircumstances;
@@ -91,23 +92,7 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
     time: clocksChange ? clock.stamp(e.moment.utDays, discs.maximum.utDays) : timeOnDay(clock, e.moment.utDays, discs.maximum.utDays),
     words: `${SOLAR_MOMENT_WORDS[e.event]} · ${SOLAR_DIAGRAM_WORDS.sunAltitude(e.sunAltitudeDeg)}`,
   }));
-  const keyWidth = Math.max(...rows.map((r) => measureText(r.label, { ...rowStyle, weight: 'semibold' })));
-  const timeWidth = Math.max(...rows.map((r) => measureText(r.time, rowStyle)));
-  const wordsWidth = Math.max(...rows.map((r) => measureText(r.words, rowStyle)));
-  const gap = 10 * unit;
-  const tableWidth = keyWidth + timeWidth + wordsWidth + 2 * gap;
-  const rowHeight = rowStyle.sizePx * 1.75;
-  const tableHeight = headStyle.sizePx * 2 + rows.length * rowHeight;
-
-  const bodyTop = page.headerBottom;
-  const bodyBottom = H - margin - page.footerHeight - 10 * unit;
-  const side = W / H >= 1.2 && tableWidth < contentWidth * 0.5;
-  const plot = side
-    ? { left: margin, top: bodyTop, right: W - margin - tableWidth - 24 * unit, bottom: bodyBottom }
-    : { left: margin, top: bodyTop, right: W - margin, bottom: bodyBottom - tableHeight - 12 * unit };
-  const table = side
-    ? { left: W - margin - tableWidth, top: bodyTop + 8 * unit }
-    : { left: margin + Math.max(0, (contentWidth - tableWidth) / 2), top: plot.bottom + 12 * unit };
+  const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rows, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.5);
 
   // Scale: the Sun and the whole Moon fit the plot, centred on the pair, with room for the compass and scale bar.
   const moonR = discs.moonRadiusSunRadii;

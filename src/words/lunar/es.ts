@@ -1,11 +1,13 @@
 /**
  * Los eclipses de Luna en español: la tabla, el horario local, el calendario,
- * el resumen, el pie de foto y el texto alternativo, la hoja de contactos y las
- * palabras de las figuras. Reviewed wording; the trade's contact names (P1…U4),
- * Danjon, Chauvenet, ΔT and saros stay as astronomers write them.
+ * el resumen, el pie de foto y el texto alternativo, la hoja de contactos, las
+ * palabras de las figuras y las del diagrama de la sombra. Reviewed wording;
+ * the trade's contact names (P1…U4), Danjon, Chauvenet, ΔT, gamma and saros
+ * stay as astronomers write them.
  */
 import { COMMON_SPANISH } from '../common/es.ts';
 import { meantOnlyFor } from '../common.ts';
+import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
@@ -77,10 +79,57 @@ const FIGURES: LunarFigureWords = {
   },
 };
 
+const DIAGRAM: LunarDiagramWords = {
+  common: COMMON_SPANISH,
+  moments: {
+    P1: 'toca la penumbra',
+    U1: 'toca la umbra',
+    U2: 'por completo en la umbra',
+    greatest: 'en lo más hondo de la sombra',
+    U3: 'empieza a salir de la umbra',
+    U4: 'fuera de la umbra',
+    P4: 'fuera de la penumbra',
+  },
+  legend: {
+    penumbra: 'penumbra: parte del Sol oculta',
+    umbra: 'umbra: todo el Sol oculto',
+    moonAtGreatest: 'la Luna en el máximo',
+    moonAtContact: 'la Luna en cada contacto',
+    path: 'trayectoria de la Luna; la flecha: su avance',
+  },
+  compass: { north: 'N', east: 'E' },
+  greatest: 'Máximo',
+  moonAcross: (arcmin) => `la Luna mide ${arcmin}′ de diámetro`,
+  timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso horario'})`,
+  kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
+  title: (kindTitle, date) => `Eclipse ${kindTitle} de Luna del ${date}: a través de la sombra de la Tierra`,
+  depth: { penumbral: (m) => `magnitud penumbral ${m}`, umbral: (m) => `magnitud umbral ${m}` },
+  longest: { totality: (d) => `totalidad ${d}`, partial: (d) => `fase parcial ${d}`, penumbral: (d) => `fase penumbral ${d}` },
+  subtitle: (time, depth, longest, zone) => `La trayectoria de la Luna a través de la sombra, con el máximo a las ${time} (${depth}, ${longest}). Horas: ${zone}.`,
+  smallPrint: {
+    frame: 'Vista desde el centro de la Tierra, con la sombra fija: la línea es la trayectoria calculada de la Luna respecto a ella.',
+    orientation: 'El norte arriba, hacia el polo celeste de la fecha; el este a la izquierda, como se ve el cielo al mirarlo de frente.',
+    shadow: (convention, deltaT, source, gamma) => `Sombra: convención de ${convention}, círculos en el máximo; ΔT ${deltaT} s (${source}); gamma ${gamma}.`,
+    credits: (font, generator) => `Tipografía: ${font}. Hecho con ${generator}.`,
+  },
+  nakedEye: meantOnlyFor('lunar', 'Un eclipse de Luna puede observarse sin riesgo a simple vista.'),
+  caption: {
+    wholly: (from, to) => ` Está por completo dentro de la umbra desde las ${from} hasta las ${to}.`,
+    partly: (from, to) => ` Está en parte dentro de la umbra desde las ${from} hasta las ${to}.`,
+    never: ' No llega a entrar en la umbra.',
+    summary: (p1, greatest, p4, inner) => `La Luna entra en la penumbra de la Tierra a las ${p1}, alcanza lo más hondo de la sombra a las ${greatest} y sale de ella a las ${p4}.${inner}`,
+    altText: (side) =>
+      `Diagrama de dos círculos concéntricos, la penumbra de la Tierra, más clara, alrededor de su umbra, más oscura, y la trayectoria de la Luna, que los cruza de derecha a izquierda y pasa al ${side === 'north' ? 'norte' : 'sur'} del centro; la Luna aparece dibujada donde empieza y termina cada fase y en el máximo, cada una con su hora. El norte está arriba y el este a la izquierda.`,
+    file: (title, summary, altText) => `${title}. ${summary}\n\nTexto alternativo: ${altText}\n`,
+  },
+  inset: { heading: 'A través de la sombra · N arriba, E a la izquierda' },
+};
+
 export const LUNAR_SPANISH: LunarWords = {
   body: 'lunar',
   common: COMMON_SPANISH,
   figures: FIGURES,
+  diagram: DIAGRAM,
   kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   kind: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },

@@ -185,7 +185,7 @@ const DIAGRAM: SolarDiagramWords = {
   moments: {
     C1: 'la Luna toca el borde del Sol',
     C2: 'empieza la fase central',
-    maximum: 'el Sol, cubierto al máximo',
+    maximum: 'máxima ocultación del Sol',
     C3: 'termina la fase central',
     C4: 'la Luna deja el disco del Sol',
     sunrise: 'salida del Sol',
@@ -214,7 +214,7 @@ const DIAGRAM: SolarDiagramWords = {
     times: (zone, deltaT, source) => `Horas en ${zone}, reloj de 24 horas. ΔT ${deltaT} s (${source}).`,
     credits: (font, generator) => `Tipografía: ${font}. Hecho con ${generator}.`,
   },
-  greatestPoint: (position) => `el punto de máximo eclipse (${position})`,
+  greatestPoint: (position) => `el punto del máximo (${position})`,
   caption: {
     summary: (time, obscuration, place, magnitude) => `A las ${time}, la Luna cubre el ${obscuration} del disco solar visto desde ${place} (magnitud ${magnitude}).`,
     altText: (place, positionAngle) =>

@@ -100,7 +100,7 @@ const DIAGRAM: LunarDiagramWords = {
   compass: { north: 'N', east: 'E' },
   greatest: 'Máximo',
   moonAcross: (arcmin) => `la Luna mide ${arcmin}′ de diámetro`,
-  timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso horario'})`,
+  timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso'})`,
   kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   title: (kindTitle, date) => `Eclipse ${kindTitle} de Luna del ${date}: a través de la sombra de la Tierra`,
   depth: { penumbral: (m) => `magnitud penumbral ${m}`, umbral: (m) => `magnitud umbral ${m}` },
@@ -122,7 +122,7 @@ const DIAGRAM: LunarDiagramWords = {
       `Diagrama de dos círculos concéntricos, la penumbra de la Tierra, más clara, alrededor de su umbra, más oscura, y la trayectoria de la Luna, que los cruza de derecha a izquierda y pasa al ${side === 'north' ? 'norte' : 'sur'} del centro; la Luna aparece dibujada donde empieza y termina cada fase y en el máximo, cada una con su hora. El norte está arriba y el este a la izquierda.`,
     file: (title, summary, altText) => `${title}. ${summary}\n\nTexto alternativo: ${altText}\n`,
   },
-  inset: { heading: 'A través de la sombra · N arriba, E a la izquierda' },
+  inset: { heading: 'Por la sombra · N arriba, E a la izq.' },
 };
 
 export const LUNAR_SPANISH: LunarWords = {

@@ -105,11 +105,11 @@ const TEXT: SolarTextWords = {
     safetyHeading: { plain: 'SEGURIDAD OCULAR', markdown: 'Seguridad ocular' },
   },
   summary: {
-    missed: (place, id) => `Desde ${place} la sombra de la Luna pasa de largo: el ${id} no se ve ningún eclipse de Sol.`,
-    sunDown: (place, span) => `Desde ${place} el Sol está bajo el horizonte durante todo el eclipse (${span}): no se ve nada.`,
+    missed: (place, id) => `Desde ${place}, la sombra de la Luna pasa de largo: el ${id} no se ve ningún eclipse de Sol.`,
+    sunDown: (place, span) => `Desde ${place}, el Sol está bajo el horizonte durante todo el eclipse (${span}): no se ve nada.`,
     central: (place, kind, duration, from, to) =>
-      `Desde ${place} ${kind === 'total' ? 'el Sol queda totalmente eclipsado' : 'la Luna se ve entera dentro del disco solar, rodeada de un anillo brillante,'} durante ${duration}, de las ${from} a las ${to}.`,
-    partial: (place, percent) => `Desde ${place} el Sol se eclipsa en parte: como máximo, queda cubierto ${share(percent)} de su disco.`,
+      `Desde ${place}, ${kind === 'total' ? 'el Sol queda totalmente eclipsado' : 'la Luna se ve entera dentro del disco solar, rodeada de un anillo brillante,'} durante ${duration}, de las ${from} a las ${to}.`,
+    partial: (place, percent) => `Desde ${place}, el Sol se eclipsa en parte: como máximo, queda cubierto ${share(percent)} de su disco.`,
     runs: (span, localDate, stamp, altitude, up) =>
       `Horario del eclipse: ${span}${localDate === undefined ? '' : ` (${localDate})`}; máximo a las ${stamp}, ${up ? `con el Sol a ${altitude}° de altura` : `con el Sol bajo el horizonte (${altitude}°)`}.`,
     risesEclipsed: (stamp) => `El Sol sale ya eclipsado, a las ${stamp}.`,
@@ -159,7 +159,7 @@ const FIGURES: SolarFigureWords = {
     centralLine: (clock) => `Línea central, horas en ${clock}`,
     pathLimits: 'Límites de la franja',
     partialLimits: 'Límites del eclipse parcial',
-    riseSet: 'Eclipse en curso al salir o al ponerse el Sol',
+    riseSet: 'Eclipse en curso al salir o ponerse el Sol',
     greatest: 'Máximo del eclipse',
     contours: 'Líneas de igual oscurecimiento',
     town: 'Localidad marcada',
@@ -199,7 +199,7 @@ const DIAGRAM: SolarDiagramWords = {
   },
   compass: { north: 'N', east: 'E' },
   sunAcross: (arcmin) => `el Sol mide ${arcmin}′ de diámetro`,
-  timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso horario'})`,
+  timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso'})`,
   sunAltitude: { up: (degrees) => `Sol a ${degrees}°`, down: 'Sol bajo el horizonte' },
   kind: { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' },
   title: (date, kind, place) => `${date}: eclipse ${kind} de Sol desde ${place}`,

@@ -22,6 +22,8 @@ const whole = new Intl.NumberFormat('es', { maximumFractionDigits: 0 });
 /** A magnitude handed over as "0.957", written with the Spanish decimal comma (a no-op on "0,957"). */
 const decimal = (text: string) => decimalIn(text, COMMON_SPANISH);
 const list = (items: readonly string[]) => listWords(items, COMMON_SPANISH);
+/** "1 eclipse", "3 eclipses" (CLDR plural categories through Intl.PluralRules). */
+const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 /** "el 63 %" with its article; a share that rounds to "0 %" is still a bite out of the Sun: "menos del 1 %". */
 const share = (percent: string) => (/^0\s?%$/.test(percent) ? 'menos del 1 %' : `el ${percent}`);
 
@@ -81,6 +83,20 @@ const TEXT: SolarTextWords = {
     width: (km) => `franja de ${km} km de ancho`,
     saros: (n) => `saros ${n}`,
     noMap: 'Pie de foto y geometría GeoJSON; aún sin imagen del mapa.',
+    thumbnailAlt: (kind, date) => `Mapa del eclipse ${kind} del ${date}`,
+    lunarKind: (kind) => `${kind} de Luna`,
+  },
+  list: {
+    header: ['Fecha', 'Astro', 'Tipo', 'Máximo (UTC)', 'Magnitud', 'Mag. penumbral', 'Gamma', 'En la umbra', 'Totalidad', 'Fase central', 'Franja', 'Saros'],
+    body: { lunar: 'Luna', solar: 'Sol' },
+    kind: { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' },
+    eclipses: (lunar, solar) => `${counted(lunar, 'eclipse', 'eclipses')} de Luna y ${solar} de Sol`,
+    solarEclipses: (count) => `${counted(count, 'eclipse', 'eclipses')} de Sol`,
+    magnitudeNote: 'Magnitud: la de la umbra, para la Luna; la fracción del diámetro del Sol cubierta en el punto del máximo, para el Sol.',
+    solarNote: (k1, k2) =>
+      `Sol: fase central = totalidad o fase anular en la línea central, en el máximo del eclipse; franja = su anchura en ese punto; radio de la Luna k1 = ${decimal(k1)} (penumbra), k2 = ${decimal(k2)} (umbra y antumbra).`,
+    central: (minutes, seconds) => `${minutes}min ${seconds}s`,
+    pathWidth: (km) => `${km} km`,
   },
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },
   percent: (value) => `${value} %`,

@@ -11,7 +11,7 @@
  * saros, gamma and k1/k2 stay as astronomers write them.
  */
 import { COMMON_SPANISH } from '../common/es.ts';
-import { decimalIn, listWords } from '../common.ts';
+import { decimalIn, listWords, type ContinentName } from '../common.ts';
 import type { SolarWords } from './caution.ts';
 import type { SolarDiagramWords } from './diagram.ts';
 import type { SolarFigureWords } from './figures.ts';
@@ -65,7 +65,11 @@ const TEXT: SolarTextWords = {
     pathCrosses: (kind, countries, more) =>
       `La ${PATH[kind]} atraviesa ${list(more > 0 ? [...countries, plural.select(more) === 'one' ? 'otro país' : `otros ${more} países`] : countries)}.`,
     pathOverSea: (kind) => `La ${PATH[kind]} solo cruza mar abierto, sin tocar tierra de ningún país.`,
-    continent: (name, part) => (part === 'whole' ? name : part === 'most' ? `la mayor parte de ${name}` : `partes de ${name}`),
+    continent: (given, part) => {
+      // The continent as the shared words name it, should it arrive under its English name.
+      const name = COMMON_SPANISH.continents[given as ContinentName] ?? given;
+      return part === 'whole' ? name : part === 'most' ? `la mayor parte de ${name}` : `partes de ${name}`;
+    },
     partialSeen: (where) => `El eclipse parcial se ve desde ${where}.`,
     citiesIntro: 'Entre las grandes ciudades:',
     cityCentral: (city, kind, duration, from) => `en ${city}, ${kind === 'total' ? 'la totalidad' : 'la fase anular'} dura ${duration} a partir de las ${from}`,

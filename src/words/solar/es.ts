@@ -38,6 +38,9 @@ const PATH: Record<'total' | 'annular' | 'hybrid', string> = {
 /** The central phase by the eclipse's kind, with its article. */
 const CENTRAL: Record<'total' | 'annular' | 'hybrid', string> = { total: 'la totalidad', annular: 'la fase anular', hybrid: 'la fase central' };
 
+/** The calendar entry of the partial phases, which names the eclipse itself. */
+const PARTIAL_PHASES = 'Fases parciales del eclipse de Sol';
+
 const TEXT: SolarTextWords = {
   common: COMMON_SPANISH,
   events: {
@@ -139,11 +142,12 @@ const TEXT: SolarTextWords = {
     lowSun: (degrees) => `El Sol no pasa de ${degrees}° de altura: hace falta un horizonte bajo y despejado en su dirección.`,
   },
   calendar: {
-    partialTitle: 'Fases parciales del eclipse de Sol',
+    partialTitle: PARTIAL_PHASES,
     centralTitle: { total: 'Totalidad', annular: 'Fase anular' },
     cutShort: ' (Sol visible)',
     cutLong: ' (la parte con el Sol sobre el horizonte)',
-    description: (title, id, cut) => `${title} del eclipse ${id}${cut}; son predicciones, si el tiempo lo permite.`,
+    // The partial phases' title names the eclipse already; the central phase's does not.
+    description: (title, id, cut) => `${title}${title === PARTIAL_PHASES ? '' : ' del eclipse'} del ${id}${cut}; son predicciones, si el tiempo lo permite.`,
     notSeenTitle: (place) => `Eclipse de Sol, no visible desde ${place}`,
     notSeenDescription: 'Esta entrada solo señala la fecha: desde aquí no hay nada que ver.',
   },

@@ -103,6 +103,7 @@ const DIAGRAM: LunarDiagramWords = {
   timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso'})`,
   kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   title: (kindTitle, date) => `Eclipse ${kindTitle} de Luna del ${date}: a través de la sombra de la Tierra`,
+  shortTitle: (kindTitle, date) => `Eclipse ${kindTitle} de Luna del ${date}`,
   depth: { penumbral: (m) => `magnitud penumbral ${m}`, umbral: (m) => `magnitud umbral ${m}` },
   longest: { totality: (d) => `totalidad ${d}`, partial: (d) => `fase parcial ${d}`, penumbral: (d) => `fase penumbral ${d}` },
   subtitle: (time, depth, longest, zone) => `La trayectoria de la Luna a través de la sombra, con el máximo a las ${time} (${depth}, ${longest}). Horas: ${zone}.`,

@@ -226,7 +226,8 @@ const DIAGRAM: SolarDiagramWords = {
   timesHeading: (zone) => `Horas (${zone ?? 'cada una con su huso'})`,
   sunAltitude: { up: (degrees) => `Sol a ${degrees}°`, down: 'Sol bajo el horizonte' },
   kind: { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' },
-  title: (date, kind, place) => `${date}: eclipse ${kind} de Sol desde ${place}`,
+  // "en", not "desde": the title must fit a square page whole, and Spanish dates are long.
+  title: (date, kind, place) => `${date}: eclipse ${kind} de Sol en ${place}`,
   percent: (value) => `${value} %`,
   atMaximum: (stamp, sunAltitude, magnitude, obscuration) =>
     `En el máximo, ${stamp}${sunAltitude === undefined ? ' (con el Sol entonces bajo el horizonte)' : `, con el Sol a ${sunAltitude}° de altura`}: magnitud ${magnitude}, oscurecimiento del ${obscuration} del disco solar.`,

@@ -209,16 +209,16 @@ const SOLAR_DIAGRAM: SolarDiagramWords = {
     `Au maximum, ${stamp}${sunAltitude === undefined ? ' (le Soleil est alors sous l’horizon)' : `, Soleil à ${sunAltitude}° de hauteur`}${NBSP}: magnitude ${magnitude}, obscuration ${obscuration} du disque solaire.`,
   elsewhere: (kind) => `Ailleurs, l’éclipse est ${kind}.`,
   smallPrint: {
-    drawn: (place) => `Le Soleil et la Lune vus depuis ${place} au maximum, à l’échelle${NBSP}: nord en haut, vers le pôle céleste de la date${NBSP}; est à gauche, comme le ciel apparaît quand on lui fait face.`,
+    drawn: (place) => `Le Soleil et la Lune vus depuis ${place} au moment du maximum, à l’échelle${NBSP}: nord en haut, vers le pôle céleste de la date${NBSP}; est à gauche, comme le ciel apparaît quand on lui fait face.`,
     terms: `Magnitude${NBSP}: fraction du diamètre du Soleil couverte${NBSP}; obscuration${NBSP}: fraction de son disque.`,
     times: (zone, deltaT, source) => `Heures en ${zone}, sur 24${NBSP}h. ΔT ${deltaT}${NBSP}s (${source}).`,
     credits: (font, generator) => `Caractères${NBSP}: ${font}. Réalisé avec ${generator}.`,
   },
-  greatestPoint: (position) => `le point du maximum (${position})`,
+  greatestPoint: (position) => `le point de l’éclipse maximale (${position})`,
   caption: {
-    summary: (time, obscuration, place, magnitude) => `À ${time}, la Lune couvre ${obscuration} du disque solaire vu depuis ${place} (magnitude ${magnitude}).`,
+    summary: (time, obscuration, place, magnitude) => `À ${time}, vue depuis ${place}, la Lune couvre ${obscuration} du disque solaire (magnitude ${magnitude}).`,
     altText: (place, positionAngle) =>
-      `Schéma à l’échelle du disque du Soleil avec, devant lui, le disque sombre de la Lune, vus depuis ${place} au maximum${NBSP}; le centre de la Lune est à l’angle de position ${positionAngle}°, compté du nord vers l’est${NBSP}; nord en haut, est à gauche${NBSP}; les heures de l’éclipse sont données à côté.`,
+      `Schéma à l’échelle du disque du Soleil avec, devant lui, le disque sombre de la Lune, vus depuis ${place} au moment du maximum${NBSP}; le centre de la Lune est à l’angle de position ${positionAngle}°, compté du nord vers l’est${NBSP}; nord en haut, est à gauche${NBSP}; les heures de l’éclipse sont données à côté.`,
     file: (title, summary, caution, altText) => `${title}. ${summary}\n\n${caution}\n\nTexte alternatif${NBSP}: ${altText}\n`,
   },
 };

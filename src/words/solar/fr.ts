@@ -35,6 +35,8 @@ const BAND: Record<'total' | 'annular' | 'hybrid', string> = {
 /** « de la totalité », « de l’annularité », « de la phase centrale » (every central word is feminine). */
 const ofThe = (word: string) => (/^[aeiouhéè]/i.test(word) ? `de l’${word}` : `de la ${word}`);
 
+const PARTIAL_PHASES = 'Phases partielles de l’éclipse de Soleil';
+
 /** Text of solar eclipses in French: local events, caption, alt text, contact sheet. */
 const SOLAR_TEXT: SolarTextWords = {
   common: COMMON_FRENCH,
@@ -122,11 +124,12 @@ const SOLAR_TEXT: SolarTextWords = {
     lowSun: (degrees) => `Le Soleil ne dépasse pas ${degrees}° de hauteur${NBSP}: il faut un horizon bas et dégagé dans sa direction.`,
   },
   calendar: {
-    partialTitle: 'Phases partielles de l’éclipse de Soleil',
+    partialTitle: PARTIAL_PHASES,
     centralTitle: { total: 'Totalité', annular: 'Annularité' },
     cutShort: ' (Soleil levé)',
     cutLong: ' (la partie où le Soleil est au-dessus de l’horizon)',
-    description: (title, id, cut) => `${title} du ${id}${cut}${NBSP}; prévisions, si la météo le permet.`,
+    // « Phases partielles de l’éclipse de Soleil du … », « Totalité de l’éclipse du … ».
+    description: (title, id, cut) => `${title}${title === PARTIAL_PHASES ? '' : ' de l’éclipse'} du ${id}${cut}${NBSP}; prévisions, si la météo le permet.`,
     notSeenTitle: (place) => `Éclipse de Soleil, invisible depuis ${place}`,
     notSeenDescription: `Cette entrée ne fait que marquer la date${NBSP}: il n’y a rien à voir d’ici.`,
   },

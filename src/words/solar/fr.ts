@@ -22,6 +22,7 @@ import type { SolarKindWord, SolarTextWords } from './text.ts';
 const NBSP = '\u00a0';
 const plural = new Intl.PluralRules('fr');
 const list = (items: readonly string[]) => listWords(items, COMMON_FRENCH);
+const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 
 /** Adjectives after « éclipse » (feminine). */
 const KIND_ADJECTIVE: Record<SolarKindWord, string> = { total: 'totale', annular: 'annulaire', hybrid: 'hybride', partial: 'partielle' };
@@ -85,6 +86,21 @@ const SOLAR_TEXT: SolarTextWords = {
     width: (km) => `bande de ${km}${NBSP}km de large`,
     saros: (n) => `saros ${n}`,
     noMap: `Légende et géométrie GeoJSON${NBSP}; pas encore d’image de la carte.`,
+    thumbnailAlt: (kind, date) => `Carte de visibilité de l’${kind} du ${date}`,
+    // The French lunar kind already names the Moon (« éclipse totale de Lune »).
+    lunarKind: (kind) => kind,
+  },
+  list: {
+    header: ['Date', 'Astre', 'Type', 'Maximum (UTC)', 'Magnitude', 'Mag. pénombrale', 'Gamma', 'Dans l’ombre', 'Totalité', 'Phase centrale', 'Bande', 'Saros'],
+    body: { lunar: 'Lune', solar: 'Soleil' },
+    kind: { total: 'totale', annular: 'annulaire', hybrid: 'hybride', partial: 'partielle' },
+    eclipses: (lunar, solar) => `${counted(lunar, 'éclipse de Lune', 'éclipses de Lune')} et ${counted(solar, 'éclipse de Soleil', 'éclipses de Soleil')}`,
+    solarEclipses: (count) => counted(count, 'éclipse de Soleil', 'éclipses de Soleil'),
+    magnitudeNote: `Magnitude${NBSP}: pour la Lune, celle de l’ombre${NBSP}; pour le Soleil, la fraction de son diamètre couverte, au point de l’éclipse maximale.`,
+    solarNote: (k1, k2) =>
+      `Soleil${NBSP}: phase centrale = totalité ou annularité sur la ligne centrale au maximum de l’éclipse, bande = sa largeur en ce point${NBSP}; rayon de la Lune k1${NBSP}=${NBSP}${k1} (pénombre), k2${NBSP}=${NBSP}${k2} (ombre et anti-ombre).`,
+    central: (minutes, seconds) => `${minutes}min ${seconds}s`,
+    pathWidth: (km) => `${km}${NBSP}km`,
   },
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes}${NBSP}min ${seconds}${NBSP}s`, seconds: (seconds) => `${seconds}${NBSP}s` },
   percent: (value) => `${value}${NBSP}%`,

@@ -110,7 +110,8 @@ const SOLAR_TEXT: SolarTextWords = {
     header: (zone) => ['Étape', 'Ce qui se passe', `Heure locale (${zone})`, 'UTC', 'Haut. Soleil', 'Az. Soleil', 'Soleil levé'],
     yes: 'oui',
     no: 'non',
-    title: (kind, id, place, coordinates, zone) => `Éclipse ${KIND_ADJECTIVE[kind]} de Soleil ${id} vue depuis ${place} (${coordinates}${NBSP}; ${zone})`,
+    // The eclipse's kind, which the place may not see: the place comes after « circonstances locales ».
+    title: (kind, id, place, coordinates, zone) => `Éclipse ${KIND_ADJECTIVE[kind]} de Soleil ${id}${NBSP}: circonstances locales pour ${place} (${coordinates}${NBSP}; ${zone})`,
     seen: {
       total: (m) => `Vue d’ici${NBSP}: totale (magnitude ${m}).`,
       annular: (m, o) => `Vue d’ici${NBSP}: annulaire (magnitude ${m}, ${o} du disque solaire couvert).`,
@@ -203,11 +204,11 @@ const SOLAR_FIGURES: SolarFigureWords = {
 const SOLAR_DIAGRAM: SolarDiagramWords = {
   common: COMMON_FRENCH,
   moments: {
-    C1: 'la Lune touche le Soleil',
+    C1: 'la Lune touche le disque',
     C2: 'la phase centrale commence',
-    maximum: 'le Soleil est le plus couvert',
+    maximum: 'couverture maximale',
     C3: 'la phase centrale s’achève',
-    C4: 'la Lune quitte le Soleil',
+    C4: 'la Lune quitte le disque',
     sunrise: 'lever du Soleil',
     sunset: 'coucher du Soleil',
   },
@@ -215,7 +216,7 @@ const SOLAR_DIAGRAM: SolarDiagramWords = {
   legend: {
     sun: 'le disque du Soleil',
     moonOverSun: 'la Lune devant le Soleil',
-    moonOutline: 'le contour de la Lune (invisible sur le ciel)',
+    moonOutline: 'le contour de la Lune (invisible dans le ciel)',
   },
   compass: { north: 'N', east: 'E' },
   sunAcross: (arcmin) => `diamètre du Soleil${NBSP}: ${arcmin}′`,

@@ -127,7 +127,7 @@ const DIAGRAM: LunarDiagramWords = {
       `Schéma de deux cercles concentriques, la pénombre de la Terre, plus claire, autour de son ombre, plus sombre, traversés de droite à gauche par le trajet de la Lune, qui passe au ${side === 'north' ? 'nord' : 'sud'} du centre${NBSP}; la Lune est dessinée au début et à la fin de chaque phase et au maximum, chaque fois avec son heure. Nord en haut, est à gauche.`,
     file: (title, summary, altText) => `${title}. ${summary}\n\nTexte alternatif${NBSP}: ${altText}\n`,
   },
-  inset: { heading: 'À travers l’ombre · N en haut, E à gauche' },
+  inset: { heading: 'Trajet de la Lune · N en haut, E à gauche' },
 };
 
 export const LUNAR_FRENCH: LunarWords = {

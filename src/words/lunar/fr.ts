@@ -108,6 +108,7 @@ const DIAGRAM: LunarDiagramWords = {
   kindTitle: DIAGRAM_KIND_TITLE,
   // « ombre » is the umbra throughout: an eclipse by the penumbra is said to cross the penumbra only.
   title: (kindTitle, date) => `${kindTitle} du ${date}${NBSP}: la Lune dans ${kindTitle === DIAGRAM_KIND_TITLE.penumbral ? 'la pénombre' : 'l’ombre'} de la Terre`,
+  shortTitle: (kindTitle, date) => `${kindTitle} du ${date}`,
   depth: { penumbral: (m) => `magnitude pénombrale ${m}`, umbral: (m) => `magnitude ombrale ${m}` },
   longest: { totality: (d) => `totalité ${d}`, partial: (d) => `phase partielle ${d}`, penumbral: (d) => `phase de pénombre ${d}` },
   subtitle: (time, depth, longest, zone) => `Le trajet de la Lune, au plus près du centre de l’ombre à ${time} (${depth}, ${longest}). Heures${NBSP}: ${zone}.`,

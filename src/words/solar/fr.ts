@@ -36,6 +36,12 @@ const BAND: Record<'total' | 'annular' | 'hybrid', string> = {
 /** « de la totalité », « de l’annularité », « de la phase centrale » (every central word is feminine). */
 const ofThe = (word: string) => (/^[aeiouhéè]/i.test(word) ? `de l’${word}` : `de la ${word}`);
 
+/** « à Oviedo », « au point de l’éclipse maximale », « au Caire », « aux Sables » : à contracted with a leading article. */
+const atPlace = (place: string) => {
+  const article = /^(le|les) (.*)$/i.exec(place);
+  return article ? `${article[1]!.toLowerCase() === 'le' ? 'au' : 'aux'} ${article[2]}` : `à ${place}`;
+};
+
 const PARTIAL_PHASES = 'Phases partielles de l’éclipse de Soleil';
 
 /** Text of solar eclipses in French: local events, caption, alt text, contact sheet. */
@@ -223,7 +229,7 @@ const SOLAR_DIAGRAM: SolarDiagramWords = {
   timesHeading: (zone) => `Heures (${zone ?? 'chacune avec son fuseau'})`,
   sunAltitude: { up: (degrees) => `Soleil à ${degrees}°`, down: 'Soleil couché' },
   kind: { total: 'totale', annular: 'annulaire', hybrid: 'hybride', partial: 'partielle' },
-  title: (date, kind, place) => `${date}${NBSP}: éclipse ${kind} de Soleil vue depuis ${place}`,
+  title: (date, kind, place) => `${date}${NBSP}: éclipse ${kind} de Soleil ${atPlace(place)}`,
   percent: (value) => `${value}${NBSP}%`,
   atMaximum: (stamp, sunAltitude, magnitude, obscuration) =>
     `Au maximum, ${stamp}${sunAltitude === undefined ? ' (le Soleil est alors sous l’horizon)' : `, Soleil à ${sunAltitude}° de hauteur`}${NBSP}: magnitude ${magnitude}, obscuration ${obscuration} du disque solaire.`,

@@ -1,12 +1,13 @@
 /**
  * Les éclipses de Lune en français : le tableau, l’horaire local, le
  * calendrier, le résumé, la légende et le texte alternatif, la planche
- * contact et les mots des figures. Typographie française (espace insécable
+ * contact, les mots des figures et ceux du schéma de l’ombre. Typographie française (espace insécable
  * avant « : » et « ; », guillemets « »). Reviewed wording; the trade's contact
  * names (P1…U4), Danjon, Chauvenet, ΔT and saros stay as astronomers write them.
  */
 import { COMMON_FRENCH } from '../common/fr.ts';
 import { meantOnlyFor } from '../common.ts';
+import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
@@ -79,10 +80,62 @@ const FIGURES: LunarFigureWords = {
   },
 };
 
+const DIAGRAM_KIND_TITLE = { total: 'Éclipse totale de Lune', partial: 'Éclipse partielle de Lune', penumbral: 'Éclipse de Lune par la pénombre' } as const;
+
+/** The shadow diagram in French: the Moon's path through the Earth's shadow. */
+const DIAGRAM: LunarDiagramWords = {
+  common: COMMON_FRENCH,
+  moments: {
+    P1: 'touche la pénombre',
+    U1: 'touche l’ombre',
+    U2: 'entièrement dans l’ombre',
+    greatest: 'au plus près du centre de l’ombre',
+    U3: 'commence à sortir de l’ombre',
+    U4: 'sortie de l’ombre',
+    P4: 'sortie de la pénombre',
+  },
+  legend: {
+    penumbra: `pénombre${NBSP}: Soleil en partie caché`,
+    umbra: `ombre${NBSP}: Soleil entièrement caché`,
+    moonAtGreatest: 'la Lune au maximum',
+    moonAtContact: 'la Lune à chaque contact',
+    path: `trajet de la Lune${NBSP}; la flèche${NBSP}: son sens de déplacement`,
+  },
+  compass: { north: 'N', east: 'E' },
+  greatest: 'Maximum',
+  moonAcross: (arcmin) => `diamètre de la Lune${NBSP}: ${arcmin}′`,
+  timesHeading: (zone) => `Heures (${zone ?? 'chacune avec son fuseau'})`,
+  kindTitle: DIAGRAM_KIND_TITLE,
+  // « ombre » is the umbra throughout: an eclipse by the penumbra is said to cross the penumbra only.
+  title: (kindTitle, date) => `${kindTitle} du ${date}${NBSP}: la Lune dans ${kindTitle === DIAGRAM_KIND_TITLE.penumbral ? 'la pénombre' : 'l’ombre'} de la Terre`,
+  shortTitle: (kindTitle, date) => `${kindTitle} du ${date}`,
+  depth: { penumbral: (m) => `magnitude pénombrale ${m}`, umbral: (m) => `magnitude ombrale ${m}` },
+  longest: { totality: (d) => `totalité ${d}`, partial: (d) => `phase partielle ${d}`, penumbral: (d) => `phase de pénombre ${d}` },
+  subtitle: (time, depth, longest, zone) => `Le trajet de la Lune, au plus près du centre de l’ombre à ${time} (${depth}, ${longest}). Heures${NBSP}: ${zone}.`,
+  smallPrint: {
+    frame: `Vu depuis le centre de la Terre, l’ombre et la pénombre tenues fixes${NBSP}: la ligne est le trajet calculé de la Lune par rapport à elles.`,
+    orientation: `Nord en haut, vers le pôle céleste de la date${NBSP}; est à gauche, comme le ciel apparaît quand on lui fait face.`,
+    shadow: (convention, deltaT, source, gamma) => `Ombre${NBSP}: convention de ${convention}, cercles au maximum${NBSP}; ΔT ${deltaT}${NBSP}s (${source})${NBSP}; gamma ${gamma}.`,
+    credits: (font, generator) => `Caractères${NBSP}: ${font}. Réalisé avec ${generator}.`,
+  },
+  nakedEye: FIGURES.nakedEye,
+  caption: {
+    wholly: (from, to) => ` Elle est entièrement dans l’ombre de ${from} à ${to}.`,
+    partly: (from, to) => ` Elle est en partie dans l’ombre de ${from} à ${to}.`,
+    never: ' Elle n’atteint jamais l’ombre.',
+    summary: (p1, greatest, p4, inner) => `La Lune entre dans la pénombre de la Terre à ${p1}, passe au plus près du centre de l’ombre à ${greatest} et quitte la pénombre à ${p4}.${inner}`,
+    altText: (side) =>
+      `Schéma de deux cercles concentriques, la pénombre de la Terre, plus claire, autour de son ombre, plus sombre, traversés de droite à gauche par le trajet de la Lune, qui passe au ${side === 'north' ? 'nord' : 'sud'} du centre${NBSP}; la Lune est dessinée au début et à la fin de chaque phase et au maximum, chaque fois avec son heure. Nord en haut, est à gauche.`,
+    file: (title, summary, altText) => `${title}. ${summary}\n\nTexte alternatif${NBSP}: ${altText}\n`,
+  },
+  inset: { heading: 'Trajet de la Lune · N en haut, E à gauche' },
+};
+
 export const LUNAR_FRENCH: LunarWords = {
   body: 'lunar',
   common: COMMON_FRENCH,
   figures: FIGURES,
+  diagram: DIAGRAM,
   kindTitle: { total: 'Éclipse totale de Lune', partial: 'Éclipse partielle de Lune', penumbral: 'Éclipse de Lune par la pénombre' },
   kind: { total: 'éclipse totale de Lune', partial: 'éclipse partielle de Lune', penumbral: 'éclipse de Lune par la pénombre' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },

@@ -25,13 +25,13 @@ const KIND_OBLIQUE: Record<SolarKindWord, string> = { total: 'totalen', annular:
 /** The central path, after „in der“ (dative feminine); „Totalitätszone“ as in the caution. */
 const PATH_IN = {
   total: 'Totalitätszone',
-  annular: 'Zone der ringförmigen Finsternis',
+  annular: 'Zone der Ringförmigkeit',
   hybrid: 'zentralen Zone (teils total, teils ringförmig)',
 } as const;
 /** The same path as subject (nominative). */
 const PATH_SUBJECT = {
   total: 'Die Totalitätszone',
-  annular: 'Die Zone der ringförmigen Finsternis',
+  annular: 'Die Zone der Ringförmigkeit',
   hybrid: 'Die zentrale Zone (teils total, teils ringförmig)',
 } as const;
 /** The central phase with its article. */

@@ -79,7 +79,10 @@ const TEXT: SolarTextWords = {
       `Länder in der ${PATH_IN[kind]}: ${list(more > 0 ? [...countries, more === 1 ? 'ein weiteres' : `${more} weitere`] : countries)}.`,
     pathOverSea: (kind) => `${PATH_SUBJECT[kind]} liegt ganz über offenem Meer und berührt kein Land.`,
     // Dative, after the „in“ of partialSeen: „in Afrika, großen Teilen von Europa und Teilen von Asien“.
-    continent: (name, share) => (share === 'whole' ? name : share === 'most' ? `großen Teilen von ${name}` : `Teilen von ${name}`),
+    continent: (english, share) => {
+      const name = (COMMON_GERMAN.continents as Readonly<Record<string, string>>)[english] ?? english;
+      return share === 'whole' ? name : share === 'most' ? `großen Teilen von ${name}` : `Teilen von ${name}`;
+    },
     partialSeen: (where) => `Eine partielle Finsternis ist in ${where} zu sehen.`,
     citiesIntro: 'Unter den größten Städten:',
     cityCentral: (city, kind, duration, from) => `${city} erlebt ab ${from} ${duration} lang die ${kind === 'total' ? 'Totalität' : 'Ringphase'}`,
@@ -161,7 +164,7 @@ const FIGURES: SolarFigureWords = {
     centralOnLine: (phase, duration) => `${phase} ${duration} auf der Zentrallinie`,
     pathWidth: (km) => `Zonenbreite ${km} km`,
     separator: ' · ',
-    timesIn: (zone) => `Zeiten in ${zone}, 24-Stunden-Uhr; „+1 Tag“: der Tag nach dem Datum im Titel.`,
+    timesIn: (zone) => `Zeiten: ${zone}, 24-Stunden-Uhr; „+1 Tag“: der Tag nach dem Datum im Titel.`,
     shading: 'Schattierung: der größte verdeckte Anteil der Sonnenscheibe, solange die Sonne über dem Horizont steht (oberer Rand über einem Horizont auf Meereshöhe, mit Standardrefraktion).',
     moonRadii: (k1, k2) => `Mondradius k1 = ${k1} (partielle Phasen), k2 = ${k2} (Zone)`,
     elements: (deltaT, source, moonRadii) =>
@@ -171,7 +174,7 @@ const FIGURES: SolarFigureWords = {
   legend: {
     ramp: ['Sonne unter 20 % verdeckt', '20–40 %', '40–60 %', '60–80 %', 'über 80 % (Sonne am Himmel)'],
     path: { total: 'Totalitätszone', annular: 'Zone der Ringförmigkeit', hybrid: 'Zone (total oder ringförmig)' },
-    centralLine: (clock) => `Zentrallinie, Zeiten in ${clock}`,
+    centralLine: (clock) => `Zentrallinie mit Zeiten (${clock})`,
     pathLimits: 'Grenzen der Zone',
     partialLimits: 'Grenzen der partiellen Finsternis',
     riseSet: 'Finsternis bei Sonnenauf- oder -untergang im Gange',
@@ -227,7 +230,7 @@ const DIAGRAM: SolarDiagramWords = {
   smallPrint: {
     drawn: (place) => `Sonne und Mond von ${place} aus im Maximum, maßstabsgetreu: Norden oben, zum Himmelspol des Datums; Osten links, wie der Himmel dem Betrachter erscheint.`,
     terms: 'Größe: der bedeckte Anteil des Sonnendurchmessers; Bedeckungsgrad: der bedeckte Anteil der Sonnenscheibe.',
-    times: (zone, deltaT, source) => `Zeiten in ${zone}, 24-Stunden-Uhr. ΔT ${deltaT} s (${source}).`,
+    times: (zone, deltaT, source) => `Zeiten: ${zone}, 24-Stunden-Uhr. ΔT ${deltaT} s (${source}).`,
     credits: (font, generator) => `Schrift: ${font}. Erstellt mit ${generator}.`,
   },
   // The name stands after „von … aus“: the coordinates lead, so no article has to be declined.

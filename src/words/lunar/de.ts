@@ -92,7 +92,7 @@ const DIAGRAM: LunarDiagramWords = {
   legend: {
     penumbra: 'Halbschatten: Sonne teilweise verdeckt',
     umbra: 'Kernschatten: Sonne ganz verdeckt',
-    moonAtGreatest: 'der Mond zur Finsternismitte',
+    moonAtGreatest: 'der Mond im Maximum',
     moonAtContact: 'der Mond bei jedem Kontakt',
     path: 'Bahn des Mondes; der Pfeil: seine Bewegungsrichtung',
   },
@@ -118,7 +118,7 @@ const DIAGRAM: LunarDiagramWords = {
     never: ' Den Kernschatten erreicht er nicht.',
     summary: (p1, greatest, p4, inner) => `Der Mond tritt um ${p1} in den Halbschatten der Erde ein, steht um ${greatest} am tiefsten im Schatten und verlässt ihn um ${p4}.${inner}`,
     altText: (side) =>
-      `Diagramm zweier konzentrischer Kreise, des helleren Halbschattens der Erde um ihren dunkleren Kernschatten; die Bahn des Mondes kreuzt sie von rechts nach links, ${side === 'north' ? 'nördlich' : 'südlich'} der Mitte. Der Mond ist dort gezeichnet, wo jede Phase beginnt und endet, und zur Finsternismitte, jeweils mit der Uhrzeit beschriftet. Norden ist oben, Osten links.`,
+      `Diagramm zweier konzentrischer Kreise, des helleren Halbschattens der Erde um ihren dunkleren Kernschatten; die Bahn des Mondes kreuzt sie von rechts nach links, ${side === 'north' ? 'nördlich' : 'südlich'} der Mitte. Der Mond ist dort gezeichnet, wo jede Phase beginnt und endet, und im Maximum, jeweils mit der Uhrzeit beschriftet. Norden ist oben, Osten links.`,
     file: (title, summary, altText) => `${title}. ${summary}\n\nAlternativtext: ${altText}\n`,
   },
   inset: { heading: 'Durch den Schatten · N oben, O links' },

@@ -16,6 +16,8 @@ import type { SolarDiagramWords } from './diagram.ts';
 import type { SolarFigureWords } from './figures.ts';
 import type { SolarKindWord, SolarTextWords } from './text.ts';
 
+const plural = new Intl.PluralRules('de');
+const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 const list = (items: readonly string[]) => listWords(items, COMMON_GERMAN);
 /** A number the code writes with a full stop ("1.042"), with the German decimal comma. */
 const decimal = (text: string) => decimalIn(text, COMMON_GERMAN);
@@ -99,6 +101,21 @@ const TEXT: SolarTextWords = {
     width: (km) => `Zonenbreite ${km} km`,
     saros: (n) => `Saros ${n}`,
     noMap: 'Bildunterschrift und GeoJSON-Geometrie; noch kein Kartenbild.',
+    thumbnailAlt: (kind, date) => `Sichtbarkeitskarte: ${kind} vom ${date}`,
+    // The German lunar kind already names the Moon („totale Mondfinsternis“).
+    lunarKind: (kind) => kind,
+  },
+  list: {
+    header: ['Datum', 'Gestirn', 'Art', 'Maximum (UTC)', 'Größe', 'Halbsch.-Gr.', 'Gamma', 'Im Kernschatten', 'Totalität', 'Zentral', 'Zone', 'Saros'],
+    body: { lunar: 'Mond', solar: 'Sonne' },
+    kind: { total: 'total', annular: 'ringförmig', hybrid: 'hybrid', partial: 'partiell' },
+    eclipses: (lunar, solar) => `${counted(lunar, 'Mondfinsternis', 'Mondfinsternisse')} und ${counted(solar, 'Sonnenfinsternis', 'Sonnenfinsternisse')}`,
+    solarEclipses: (count) => counted(count, 'Sonnenfinsternis', 'Sonnenfinsternisse'),
+    magnitudeNote: 'Größe: beim Mond die des Kernschattens; bei der Sonne der bedeckte Anteil ihres Durchmessers, am Ort des Maximums.',
+    solarNote: (k1, k2) =>
+      `Sonne: Zentral = Dauer der Totalität oder Ringphase auf der Zentrallinie im Maximum, Zone = deren Breite dort; Mondradius k1 = ${k1} (Halbschatten), k2 = ${k2} (Kernschatten und Antumbra).`,
+    central: (minutes, seconds) => `${minutes}min ${seconds}s`,
+    pathWidth: (km) => `${km} km`,
   },
   // SI unit symbols (DIN 1301) for lengths to the second: no abbreviation point to clash with a sentence's full stop.
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },

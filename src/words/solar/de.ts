@@ -87,7 +87,7 @@ const TEXT: SolarTextWords = {
     },
     partialSeen: (where) => `Eine partielle Finsternis ist in ${where} zu sehen.`,
     citiesIntro: 'Unter den größten Städten:',
-    cityCentral: (city, kind, duration, from) => `${city} erlebt ab ${from} ${duration} lang die ${kind === 'total' ? 'Totalität' : 'Ringphase'}`,
+    cityCentral: (city, kind, duration, from) => `${city} erlebt die ${kind === 'total' ? 'Totalität' : 'Ringphase'} ${duration} lang, ab ${from}`,
     cityPartial: (city, percent, at, when) =>
       `${city} sieht ${when === 'maximum' ? `um ${at}` : when === 'sunrise' ? `bei Sonnenaufgang um ${at}` : `bei Sonnenuntergang um ${at}`} ${percent} der Sonne bedeckt`,
     altText: (kind, date, path, partial) => [`Karte der ${KIND_OBLIQUE[kind]} Sonnenfinsternis vom ${date}.`, path, partial].filter((p) => p).join(' '),
@@ -161,7 +161,7 @@ const TEXT: SolarTextWords = {
     centralTitle: { total: 'Totalität', annular: 'Ringphase' },
     cutShort: ' (Sonne sichtbar)',
     cutLong: ' (der Teil mit der Sonne über dem Horizont)',
-    description: (title, id, cut) => `${title} der Finsternis ${id}${cut}; Vorhersage, sofern das Wetter mitspielt.`,
+    description: (title, id, cut) => `${title} am ${id}${cut}; Vorhersage, sofern das Wetter mitspielt.`,
     notSeenTitle: (place) => `Sonnenfinsternis, in ${place} nicht sichtbar`,
     notSeenDescription: 'Dieser Eintrag markiert nur das Datum; von hier aus ist nichts zu sehen.',
   },

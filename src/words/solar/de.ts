@@ -239,7 +239,8 @@ const DIAGRAM: SolarDiagramWords = {
   timesHeading: (zone) => `Zeiten (${zone ?? 'jeweils mit eigener Zone'})`,
   sunAltitude: { up: (degrees) => `Sonne ${degrees}°`, down: 'Sonne unter Horizont' },
   kind: { total: 'total', annular: 'ringförmig', hybrid: 'hybrid', partial: 'partiell' },
-  title: (date, kind, place) => `${date}: ${ATTRIBUTIVE[kind] ?? kind} Sonnenfinsternis von ${place} aus`,
+  // „in Palermo“, not „von Palermo aus“: a narrow page cuts the title's end, which must then be the place, not „aus“.
+  title: (date, kind, place) => `${date}: ${ATTRIBUTIVE[kind] ?? kind} Sonnenfinsternis in ${place}`,
   percent: (value) => `${value} %`,
   atMaximum: (stamp, sunAltitude, magnitude, obscuration) =>
     `Im Maximum um ${stamp}${sunAltitude === undefined ? ' (die Sonne steht dann unter dem Horizont)' : `, Sonne ${sunAltitude}° hoch`}: Größe ${magnitude}, Bedeckungsgrad ${obscuration}.`,

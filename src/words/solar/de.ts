@@ -28,7 +28,6 @@ const KIND_TITLE: Record<SolarKindWord, string> = {
   hybrid: 'Hybride Sonnenfinsternis (teils total, teils ringförmig)',
   partial: 'Partielle Sonnenfinsternis',
 };
-/** The adjective in the genitive and dative feminine: „der totalen Sonnenfinsternis“. */
 /** Kind titles without the hybrid's gloss: the local table's heading. */
 const KIND_TITLE_SHORT: Record<SolarKindWord, string> = {
   total: 'Totale Sonnenfinsternis',
@@ -36,6 +35,7 @@ const KIND_TITLE_SHORT: Record<SolarKindWord, string> = {
   hybrid: 'Hybride Sonnenfinsternis',
   partial: 'Partielle Sonnenfinsternis',
 };
+/** The adjective in the genitive and dative feminine: „der totalen Sonnenfinsternis“. */
 const KIND_OBLIQUE: Record<SolarKindWord, string> = { total: 'totalen', annular: 'ringförmigen', hybrid: 'hybriden', partial: 'partiellen' };
 /** The central path, after „in der“ (dative feminine); „Totalitätszone“ as in the caution. */
 const PATH_IN = {

@@ -102,6 +102,7 @@ const DIAGRAM: LunarDiagramWords = {
   timesHeading: (zone) => `Zeiten (${zone ?? 'jeweils mit eigener Zone'})`,
   kindTitle: { total: 'Totale Mondfinsternis', partial: 'Partielle Mondfinsternis', penumbral: 'Halbschatten-Mondfinsternis' },
   title: (kindTitle, date) => `${kindTitle} vom ${date}: der Weg durch den Erdschatten`,
+  shortTitle: (kindTitle, date) => `${kindTitle} vom ${date}`,
   depth: { penumbral: (m) => `Halbschattengröße ${m}`, umbral: (m) => `Kernschattengröße ${m}` },
   longest: { totality: (d) => `Totalität ${d}`, partial: (d) => `partielle Phase ${d}`, penumbral: (d) => `Halbschattenphase ${d}` },
   subtitle: (time, depth, longest, zone) => `Der Weg des Mondes durch den Schatten, am tiefsten um ${time} (${depth}, ${longest}). Zeiten: ${zone}.`,

@@ -6,6 +6,7 @@
  */
 import { COMMON_GERMAN } from '../common/de.ts';
 import { meantOnlyFor } from '../common.ts';
+import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
@@ -77,10 +78,58 @@ const FIGURES: LunarFigureWords = {
   },
 };
 
+const DIAGRAM: LunarDiagramWords = {
+  common: COMMON_GERMAN,
+  moments: {
+    P1: 'berührt den Halbschatten',
+    U1: 'berührt den Kernschatten',
+    U2: 'ganz im Kernschatten',
+    greatest: 'am tiefsten im Schatten',
+    U3: 'beginnt, den Kernschatten zu verlassen',
+    U4: 'hat den Kernschatten verlassen',
+    P4: 'hat den Halbschatten verlassen',
+  },
+  legend: {
+    penumbra: 'Halbschatten: Sonne teilweise verdeckt',
+    umbra: 'Kernschatten: Sonne ganz verdeckt',
+    moonAtGreatest: 'der Mond im Maximum',
+    moonAtContact: 'der Mond bei jedem Kontakt',
+    path: 'Bahn des Mondes; der Pfeil: seine Bewegungsrichtung',
+  },
+  compass: { north: 'N', east: 'O' },
+  greatest: 'Maximum',
+  moonAcross: (arcmin) => `Monddurchmesser ${arcmin}′`,
+  timesHeading: (zone) => `Zeiten (${zone ?? 'jeweils mit eigener Zone'})`,
+  kindTitle: { total: 'Totale Mondfinsternis', partial: 'Partielle Mondfinsternis', penumbral: 'Halbschatten-Mondfinsternis' },
+  title: (kindTitle, date) => `${kindTitle} vom ${date}: der Weg durch den Erdschatten`,
+  shortTitle: (kindTitle, date) => `${kindTitle} vom ${date}`,
+  depth: { penumbral: (m) => `Halbschattengröße ${m}`, umbral: (m) => `Kernschattengröße ${m}` },
+  longest: { totality: (d) => `Totalität ${d}`, partial: (d) => `partielle Phase ${d}`, penumbral: (d) => `Halbschattenphase ${d}` },
+  subtitle: (time, depth, longest, zone) => `Der Weg des Mondes durch den Schatten, am tiefsten um ${time} (${depth}, ${longest}). Zeiten: ${zone}.`,
+  smallPrint: {
+    frame: 'Vom Erdmittelpunkt aus gesehen, mit festgehaltenem Schatten: Die Linie ist die berechnete Bahn des Mondes relativ zu ihm.',
+    orientation: 'Norden oben, zum Himmelspol des Datums; Osten links, wie der Himmel dem Betrachter erscheint.',
+    shadow: (convention, deltaT, source, gamma) => `Schatten: Konvention nach ${convention}, Kreise zur Finsternismitte; ΔT ${deltaT} s (${source}); Gamma ${gamma}.`,
+    credits: (font, generator) => `Schrift: ${font}. Erstellt mit ${generator}.`,
+  },
+  nakedEye: meantOnlyFor('lunar', 'Eine Mondfinsternis kann man gefahrlos mit bloßem Auge beobachten.'),
+  caption: {
+    wholly: (from, to) => ` Von ${from} bis ${to} steht er ganz im Kernschatten.`,
+    partly: (from, to) => ` Von ${from} bis ${to} steht er teilweise im Kernschatten.`,
+    never: ' Den Kernschatten erreicht er nicht.',
+    summary: (p1, greatest, p4, inner) => `Der Mond tritt um ${p1} in den Halbschatten der Erde ein, steht um ${greatest} am tiefsten im Schatten und verlässt ihn um ${p4}.${inner}`,
+    altText: (side) =>
+      `Diagramm zweier konzentrischer Kreise, des helleren Halbschattens der Erde um ihren dunkleren Kernschatten; die Bahn des Mondes kreuzt sie von rechts nach links, ${side === 'north' ? 'nördlich' : 'südlich'} der Mitte. Der Mond ist dort gezeichnet, wo jede Phase beginnt und endet, und im Maximum, jeweils mit der Uhrzeit beschriftet. Norden ist oben, Osten links.`,
+    file: (title, summary, altText) => `${title}. ${summary}\n\nAlternativtext: ${altText}\n`,
+  },
+  inset: { heading: 'Durch den Schatten · N oben, O links' },
+};
+
 export const LUNAR_GERMAN: LunarWords = {
   body: 'lunar',
   common: COMMON_GERMAN,
   figures: FIGURES,
+  diagram: DIAGRAM,
   kindTitle: { total: 'Totale Mondfinsternis', partial: 'Partielle Mondfinsternis', penumbral: 'Halbschatten-Mondfinsternis' },
   kind: { total: 'totale Mondfinsternis', partial: 'partielle Mondfinsternis', penumbral: 'Halbschatten-Mondfinsternis' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },

@@ -9,7 +9,8 @@ import type { ShadowDiagram, SkyOffset } from '../eclipses/lunar/diagram.ts';
 import type { ContactName } from '../eclipses/lunar/contacts.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { DIAGRAM_WORDS, diagramTexts, INSET_WORDS, MOMENT_WORDS, momentLabel } from '../words/lunar/diagram.ts';
+import { diagramTexts, lunarDiagramWords, momentLabel, moonAcrossWords } from '../words/lunar/diagram.ts';
+import type { LunarWords } from '../words/lunar/text.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
 import { fillSwatch } from './layers.ts';
@@ -24,6 +25,8 @@ export interface DiagramSceneInput {
   readonly size: PageSize;
   readonly generator: string;
   readonly title?: string;
+  /** The reader's lunar words (settings/language.ts); English when not given. */
+  readonly words?: LunarWords;
 }
 
 export interface DiagramScene {
@@ -62,7 +65,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const zoneName = clock.zoneDescriptionBetween(first, last);
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays, greatestUt) : timeOnDay(clock, utDays, greatestUt));
-  const { title, subtitle, smallPrint } = diagramTexts(eclipse, clock, timeText, zoneName, input.generator, FONT_CREDIT, input.title);
+  const { title, subtitle, smallPrint } = diagramTexts(eclipse, clock, timeText, zoneName, input.generator, FONT_CREDIT, input.title, input.words);
+  const words = lunarDiagramWords(input.words);
 
   const unitOf = layoutFor(size).unit;
   const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
@@ -70,12 +74,12 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const moonSwatch = (fill: string | undefined) => (x: number, y: number, s: number) =>
     `<circle cx="${n2(x + s / 2)}" cy="${n2(y + s / 2)}" r="${n2(s * 0.42)}" ${moonInk(theme, unitOf, fill)}/>`;
   const legend: LegendEntry[] = [
-    { label: DIAGRAM_WORDS.penumbra, swatch: fillSwatch(theme.sky.civil, theme, unitOf) },
-    { label: DIAGRAM_WORDS.umbra, swatch: fillSwatch(theme.sky.astronomical, theme, unitOf) },
-    { label: DIAGRAM_WORDS.moonAtGreatest, swatch: moonSwatch(moonFill) },
-    { label: DIAGRAM_WORDS.moonAtContact, swatch: moonSwatch(undefined) },
+    { label: words.legend.penumbra, swatch: fillSwatch(theme.sky.civil, theme, unitOf) },
+    { label: words.legend.umbra, swatch: fillSwatch(theme.sky.astronomical, theme, unitOf) },
+    { label: words.legend.moonAtGreatest, swatch: moonSwatch(moonFill) },
+    { label: words.legend.moonAtContact, swatch: moonSwatch(undefined) },
     {
-      label: DIAGRAM_WORDS.path,
+      label: words.legend.path,
       swatch: (x, y, s) => `<path d="M${n2(x)},${n2(y + s / 2)}h${n2(s)}" ${path.casing}/><path d="M${n2(x)},${n2(y + s / 2)}h${n2(s)}" ${path.line}/>`,
     },
   ];
@@ -93,7 +97,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   ].sort((a, b) => a.utDays - b.utDays);
   const rowStyle = layout.legendStyle;
   const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
-  const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? DIAGRAM_WORDS.greatest : m.key, time: timeText(m.utDays), words: MOMENT_WORDS[m.key] }));
+  const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? words.greatest : m.key, time: timeText(m.utDays), words: words.moments[m.key] }));
   const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rowText, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.45);
 
   // Scale: the whole path with its Moon, and the penumbra, fit inside the plot with room for labels.
@@ -151,8 +155,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const taken: Box[] = [];
   const labelPlates: Box[] = [];
   const labelled = [
-    ...diagram.contacts.map((c) => ({ ...c, text: momentLabel(c.name, timeText(c.moment.utDays)) })),
-    { ...g, name: 'greatest', text: momentLabel('greatest', timeText(g.moment.utDays)) },
+    ...diagram.contacts.map((c) => ({ ...c, text: momentLabel(c.name, timeText(c.moment.utDays), input.words) })),
+    { ...g, name: 'greatest', text: momentLabel('greatest', timeText(g.moment.utDays), input.words) },
   ];
   for (const m of labelled) {
     const i = diagram.path.findIndex((p) => p.ttDays >= m.moment.ttDays);
@@ -189,8 +193,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const barb = 5 * unit;
   out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
   out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
-  out.push(textElement(DIAGRAM_WORDS.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
-  out.push(textElement(DIAGRAM_WORDS.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+  out.push(textElement(words.compass.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
+  out.push(textElement(words.compass.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
 
   const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
   const barArcmin = [60, 30, 20, 10].find((m) => m * ARCMIN_RAD * pxPerRad <= (plot.right - plot.left) * 0.3) ?? 10;
@@ -199,10 +203,10 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const sy = plot.bottom - scaleStyle.sizePx * 1.6;
   out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
   out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
-  out.push(textElement(DIAGRAM_WORDS.moonAcross(((2 * moonRad) / ARCMIN_RAD).toFixed(1)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+  out.push(textElement(moonAcrossWords((2 * moonRad) / ARCMIN_RAD, input.words), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
 
   // The timetable.
-  out.push(textElement(DIAGRAM_WORDS.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  out.push(textElement(words.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
   rowText.forEach((r, i) => {
     const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
     const strong = r.key === 'greatest';
@@ -246,7 +250,7 @@ function diagramExtent(diagram: ShadowDiagram) {
  * circles, the Moon's path with its arrow, the Moon at each contact and at greatest; the times
  * are the map's. The same geometry and inks as the full figure.
  */
-export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }): string {
+export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }, lunar?: LunarWords): string {
   const { eclipse } = diagram;
   const pad = (box.right - box.left) * 0.05;
   const plot = { left: box.left + pad, right: box.right - pad, top: box.top + pad + headingStyle.sizePx * 1.3, bottom: box.bottom - pad };
@@ -260,7 +264,7 @@ export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, uni
   const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
   const out: string[] = [];
   out.push(`<rect x="${n2(box.left)}" y="${n2(box.top)}" width="${n2(box.right - box.left)}" height="${n2(box.bottom - box.top)}" rx="${n2(3 * unit)}" fill="${theme.paper}" fill-opacity="0.94" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
-  out.push(textElement(INSET_WORDS.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
+  out.push(textElement(lunarDiagramWords(lunar).inset.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
   const edge = `stroke="${theme.textMuted}" stroke-width="${n2(0.6 * unit)}"`;
   out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.penumbraRad * pxPerRad)}" fill="${theme.sky.civil}" ${edge}/>`);
   out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.umbraRad * pxPerRad)}" fill="${theme.sky.astronomical}" ${edge}/>`);

@@ -120,8 +120,7 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
   const layout = layoutFor(size);
   const { unit, margin } = layout;
   const H = size.heightPx;
-  const moonRadii = `Moon radius k1 = ${K_PENUMBRA} (partial phases), k2 = ${K_UMBRA} (path)`;
-  const texts = solarMapTexts(eclipse, clock, input.generator, { basemap: BASEMAP_CREDIT, font: FONT_CREDIT, moonRadii }, style.title);
+  const texts = solarMapTexts(eclipse, clock, input.generator, { basemap: BASEMAP_CREDIT, font: FONT_CREDIT, moonRadii: [K_PENUMBRA, K_UMBRA] }, style.title);
   const caution = mapCaution(eclipse, 'short');
   const view: View = (style.fitPath && pathView(eclipse)) || style.view;
 

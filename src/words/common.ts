@@ -151,6 +151,13 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
   return formats;
 }
 
+/** A whole number in the language's digits ("7"; to two digits with `minimumDigits` 2: "07"), through Intl. */
+export function wholeIn(value: number, words: CommonWords = ENGLISH, minimumDigits: 1 | 2 = 1): string {
+  const [whole, twoDigits] = integerFormats(words.locale);
+  // `+ 0`: the -0 of a rounded small negative prints as 0.
+  return (minimumDigits === 2 ? twoDigits : whole).format(value + 0);
+}
+
 /**
  * Decimal numbers inside a text written with a full stop ("1.234", "69.2 s")
  * in the language's decimal sign, as Intl.NumberFormat writes it ("1,234" in

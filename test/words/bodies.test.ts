@@ -23,13 +23,17 @@ import { SOLAR_ENGLISH, solarSafetyText, type SolarSafetyForm, type SolarSafetyS
 
 const SRC = resolve(dirname(fileURLToPath(import.meta.url)), '../../src');
 
-/** Every source file a module reaches through its relative imports (static `from '…'` and `import '…'`), itself included. */
+/**
+ * Every source file a module reaches at run time through its relative imports (static `from '…'` and
+ * `import '…'`), itself included. Type-only imports and re-exports (`import type`, `export type`) are
+ * erased by TypeScript and carry no words, so they are not followed.
+ */
 function reachable(entry: string): Set<string> {
   const seen = new Set<string>();
   const visit = (file: string) => {
     if (seen.has(file)) return;
     seen.add(file);
-    const text = readFileSync(file, 'utf8');
+    const text = readFileSync(file, 'utf8').replace(/(?:import|export)\s+type\s+[^;]*?from\s*'[^']+'/g, '');
     for (const match of text.matchAll(/(?:from|import)\s*\(?\s*'(\.{1,2}\/[^']+)'/g)) visit(resolve(dirname(file), match[1]!));
   };
   visit(resolve(SRC, entry));

@@ -8,7 +8,9 @@
 import type { CivilClock } from '../../ephemeris/civilTime.ts';
 import { timeOnDay } from '../../ephemeris/dayMark.ts';
 import type { SolarDiscs, SolarLocalCircumstances } from '../../local/solar.ts';
-import { SOLAR_DIAGRAM_WORDS, SOLAR_MOMENT_WORDS, solarDiagramTexts, solarMomentLabel, type SolarDiagramFacts } from '../../words/solar/diagram.ts';
+import type { SolarWords } from '../../words/solar/caution.ts';
+import { solarDiagramTexts, solarDiagramWords, solarMomentLabel, solarSunAltitudeWords, type SolarDiagramFacts } from '../../words/solar/diagram.ts';
+import { fixedIn } from '../../words/common.ts';
 import { layoutFor, n2, textElement, type Box, type PageSize } from '../draw.ts';
 import { pageFrame, type LegendEntry } from '../frame.ts';
 import type { Theme } from '../theme.ts';
@@ -24,6 +26,8 @@ export interface SolarDiagramSceneInput {
   readonly size: PageSize;
   readonly generator: string;
   readonly title?: string;
+  /** The reader's solar words (settings/language.ts); English when not given. */
+  readonly words?: SolarWords;
 }
 
 export interface SolarDiagramScene {
@@ -67,14 +71,15 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   const last = events[events.length - 1]!.moment.utDays;
   const zoneName = clock.zoneDescriptionBetween(first, last);
   const clocksChange = clock.offsetChanges(first, last).length > 0;
-  const { title, subtitle, smallPrint } = solarDiagramTexts(facts, zoneName, input.generator, FONT_CREDIT, input.title);
+  const { title, subtitle, smallPrint } = solarDiagramTexts(facts, zoneName, input.generator, FONT_CREDIT, input.title, input.words);
+  const words = solarDiagramWords(input.words);
 
   const unitOf = layoutFor(size).unit;
   const disc = (ink: string) => (x: number, y: number, s: number) => `<circle cx="${n2(x + s / 2)}" cy="${n2(y + s / 2)}" r="${n2(s * 0.42)}" ${ink}/>`;
   const legend: LegendEntry[] = [
-    { label: SOLAR_DIAGRAM_WORDS.sun, swatch: disc(sunInk(theme, unitOf)) },
-    { label: SOLAR_DIAGRAM_WORDS.moonOverSun, swatch: disc(moonInk(theme, unitOf)) },
-    { label: SOLAR_DIAGRAM_WORDS.moonOutline, swatch: disc(moonOutlineInk(theme, unitOf)) },
+    { label: words.legend.sun, swatch: disc(sunInk(theme, unitOf)) },
+    { label: words.legend.moonOverSun, swatch: disc(moonInk(theme, unitOf)) },
+    { label: words.legend.moonOutline, swatch: disc(moonOutlineInk(theme, unitOf)) },
   ];
   const page = pageFrame({
     size, theme, id: 'solar-diagram', title, subtitle, description: `${subtitle} ${smallPrint}`, smallPrint, legend,
@@ -88,9 +93,9 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
   const rows = events.map((e) => ({
     key: e.event,
-    label: solarMomentLabel(e.event),
+    label: solarMomentLabel(e.event, input.words),
     time: clocksChange ? clock.stamp(e.moment.utDays, discs.maximum.utDays) : timeOnDay(clock, e.moment.utDays, discs.maximum.utDays),
-    words: `${SOLAR_MOMENT_WORDS[e.event]} · ${SOLAR_DIAGRAM_WORDS.sunAltitude(e.sunAltitudeDeg)}`,
+    words: `${words.moments[e.event]} · ${solarSunAltitudeWords(e.sunAltitudeDeg, input.words)}`,
   }));
   const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rows, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.5);
 
@@ -130,8 +135,8 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   const barb = 5 * unit;
   out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
   out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
-  out.push(textElement(SOLAR_DIAGRAM_WORDS.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
-  out.push(textElement(SOLAR_DIAGRAM_WORDS.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+  out.push(textElement(words.compass.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
+  out.push(textElement(words.compass.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
 
   const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
   const pxPerArcmin = (pxPerSunRadius / discs.sunSemiDiameterRad) * ARCMIN_RAD;
@@ -141,10 +146,10 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   const sy = plot.bottom - scaleStyle.sizePx * 1.6;
   out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
   out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
-  out.push(textElement(SOLAR_DIAGRAM_WORDS.sunAcross(((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD).toFixed(1)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+  out.push(textElement(words.sunAcross(fixedIn((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD, 1, words.common)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
 
   // The timetable.
-  out.push(textElement(SOLAR_DIAGRAM_WORDS.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  out.push(textElement(words.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
   rows.forEach((r, i) => {
     const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
     const strong = r.key === 'maximum';

@@ -16,6 +16,7 @@ import type { CivilClock } from '../../ephemeris/civilTime.ts';
 import type { Moment } from '../../ephemeris/time.ts';
 import { localView, phaseAt, type EclipsePhase, type LocalCircumstances, type LocalEvent, type LocalEventName, type LocalView, type SkyClass } from '../../local/lunar.ts';
 import { ENGLISH, meantOnlyFor, type CommonWords, type TextFor } from '../common.ts';
+import { LUNAR_DIAGRAM_ENGLISH, type LunarDiagramWords } from './diagram.ts';
 import { LUNAR_FIGURES_ENGLISH, type LunarFigureWords } from './figures.ts';
 
 /** The three stretches of a lunar eclipse a calendar can hold. */
@@ -30,6 +31,13 @@ export interface LunarWords {
   readonly common: CommonWords;
   /** The map's and the sky figure's words (figures.ts), in the same language. */
   readonly figures: LunarFigureWords;
+  /**
+   * The shadow diagram's words (diagram.ts). Optional only while the translations are being written, so that
+   * the shape can be merged before them: a language lacking them is refused for the diagram and the map's
+   * diagram inset (settings/language.ts, checkLanguageForBodies), never mixed with English; once every language
+   * has them this becomes required and that rule goes.
+   */
+  readonly diagram?: LunarDiagramWords;
   /** "Total", as a title starts. */
   readonly kindTitle: Readonly<Record<EclipseKind, string>>;
   /** "total", inside a sentence or a table. */
@@ -147,6 +155,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   body: 'lunar',
   common: ENGLISH,
   figures: LUNAR_FIGURES_ENGLISH,
+  diagram: LUNAR_DIAGRAM_ENGLISH,
   kindTitle: { total: 'Total', partial: 'Partial', penumbral: 'Penumbral' },
   kind: { total: 'total', partial: 'partial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },

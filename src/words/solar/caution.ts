@@ -1,77 +1,49 @@
 /**
- * The eye-safety caution that every solar-eclipse output carries, in one
- * place so it can be reviewed and translated, and so that no other caution
- * (above all the lunar one: a lunar eclipse may be watched with the naked
- * eye) can stand in for it. Its content follows the standard for direct
- * solar viewers, ISO 12312-2, and the advice health authorities give; the
- * wording is our own. Outputs defer to local health authorities.
+ * The solar words of one language (`SolarWords`): the eye-safety caution that
+ * every solar-eclipse output carries (its sentences and the rule that puts
+ * them together are in safety.ts, re-exported here), the reader text of the
+ * local formats and captions (text.ts), the map's words (figures.ts) and the
+ * solar diagram's (diagram.ts). One catalogue per language, in
+ * words/solar/<tag>.ts; English below. Nothing here imports the lunar words,
+ * so the lunar naked-eye line can never reach a solar output.
  *
- * Scope: `totality` where totality can be seen (the place is in the path of
- * a total eclipse), `no-totality` where it cannot (outside the path, or any
- * partial or annular eclipse), `whole-eclipse` for maps and catalogues of a
- * total or hybrid eclipse, which serve readers on both sides of the limits.
+ * The caution's content follows the standard for direct solar viewers,
+ * ISO 12312-2, and the advice health authorities give; the wording is our
+ * own. Outputs defer to local health authorities.
  */
-import { ENGLISH, meantOnlyFor, type CommonWords, type TextFor } from '../common.ts';
+import { ENGLISH, type CommonWords } from '../common.ts';
+import { SOLAR_DIAGRAM_ENGLISH, type SolarDiagramWords } from './diagram.ts';
+import { SOLAR_FIGURES_ENGLISH, type SolarFigureWords } from './figures.ts';
+import { SOLAR_CAUTION_ENGLISH, type SolarCautionWords } from './safety.ts';
+import { SOLAR_TEXT_ENGLISH, type SolarTextWords } from './text.ts';
 
-export type SolarSafetyForm = 'short' | 'long';
-export type SolarSafetyScope = 'totality' | 'no-totality' | 'whole-eclipse';
+export {
+  safetyScopeForEclipse, safetyScopeForPlace, solarSafetyText, SOLAR_CAUTION_ENGLISH,
+  type SolarCautionWords, type SolarSafetyForm, type SolarSafetyScope,
+} from './safety.ts';
 
-/** The solar words, one catalogue per language; so far the caution alone. */
+/** The solar words, one catalogue per language. */
 export interface SolarWords {
   readonly body: 'solar';
   readonly common: CommonWords;
-  readonly caution: {
-    /** Sentences of the long form, in the order printed; the scope picks totality, noTotality or both. */
-    readonly long: {
-      readonly viewers: string; readonly neverUnprotected: string; readonly totality: string; readonly noTotality: string;
-      readonly optics: string; readonly children: string; readonly authorities: string;
-    };
-    /** The short form: viewers, then one of totality / noTotality / both, then the rest. */
-    readonly short: { readonly viewers: string; readonly totality: string; readonly noTotality: string; readonly both: string; readonly rest: string };
-  };
+  readonly caution: SolarCautionWords;
+  // `text`, `figures` and `diagram` are optional only while the translations are being written, so that
+  // the catalogue's shape can be merged before them: a language lacking one is refused for the outputs that
+  // need it (settings/language.ts, checkLanguageForBodies), never mixed with English. Once every language
+  // has them, they become required and that rule goes.
+  /** The local formats' words, the summary, the caption and alt text, the contact sheet's solar cards (text.ts). */
+  readonly text?: SolarTextWords;
+  /** Every word of the solar map: legend, line labels, marks, small print, caption and alt text (figures.ts). */
+  readonly figures?: SolarFigureWords;
+  /** The solar diagram's words: the Sun and the Moon from a place at maximum, and its caption (diagram.ts). */
+  readonly diagram?: SolarDiagramWords;
 }
 
 export const SOLAR_ENGLISH: SolarWords = {
   body: 'solar',
   common: ENGLISH,
-  caution: {
-    long: {
-      viewers: 'Look at the Sun only through eclipse glasses or handheld viewers that meet ISO 12312-2, or watch an image of it projected onto a card.',
-      neverUnprotected: 'Never look at a partial or annular phase without protection, however much of the Sun is covered: even a thin sliver can injure the eye.',
-      totality: 'Only in the path of totality, and only while the Moon hides the Sun completely, may viewers come off; put them back on at the first bright light.',
-      noTotality: 'Outside the path of totality, at no time is it safe to look without a filter.',
-      optics: 'Binoculars, telescopes and cameras need a proper solar filter fitted over the front of the instrument; never look through them with eclipse glasses alone.',
-      children: 'Children should watch only with an adult beside them.',
-      authorities: 'Follow the advice of your local health authorities.',
-    },
-    short: {
-      viewers: 'Eye safety: watch only through ISO 12312-2 eclipse viewers or by projection; never look at a partial or annular phase unprotected, however much of the Sun is covered.',
-      totality: 'Viewers off only while totality hides the Sun completely, back on at the first bright light.',
-      noTotality: 'Outside the path of totality, at no time is it safe to look without a filter.',
-      both: 'In the path, viewers off only while totality hides the Sun completely, back on at the first bright light; outside it, at no time is it safe to look without a filter.',
-      rest: 'No binoculars, telescopes or cameras without a front solar filter. Supervise children; follow local health advice.',
-    },
-  },
+  caution: SOLAR_CAUTION_ENGLISH,
+  text: SOLAR_TEXT_ENGLISH,
+  figures: SOLAR_FIGURES_ENGLISH,
+  diagram: SOLAR_DIAGRAM_ENGLISH,
 };
-
-/** The caution, short (for map headers, captions, one-line formats) or long (for pages, alt text, local reports). */
-export function solarSafetyText(form: SolarSafetyForm, scope: SolarSafetyScope, words: SolarWords = SOLAR_ENGLISH): TextFor<'solar'> {
-  if (form === 'short') {
-    const short = words.caution.short;
-    const middle = scope === 'totality' ? short.totality : scope === 'no-totality' ? short.noTotality : short.both;
-    return meantOnlyFor('solar', [short.viewers, middle, short.rest].join(' '));
-  }
-  const long = words.caution.long;
-  const middle = scope === 'totality' ? [long.totality] : scope === 'no-totality' ? [long.noTotality] : [long.totality, long.noTotality];
-  return meantOnlyFor('solar', [long.viewers, long.neverUnprotected, ...middle, long.optics, long.children, long.authorities].join(' '));
-}
-
-/** Which scope fits a place: totality seen there or not. */
-export function safetyScopeForPlace(seesTotality: boolean): SolarSafetyScope {
-  return seesTotality ? 'totality' : 'no-totality';
-}
-
-/** Which scope fits a whole eclipse: only total and hybrid eclipses have anywhere to take viewers off. */
-export function safetyScopeForEclipse(kind: 'total' | 'annular' | 'hybrid' | 'partial'): SolarSafetyScope {
-  return kind === 'total' || kind === 'hybrid' ? 'whole-eclipse' : 'no-totality';
-}

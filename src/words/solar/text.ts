@@ -9,7 +9,7 @@
 import type { CivilClock } from '../../ephemeris/civilTime.ts';
 import { LOW_SUN_DEG, NEAR_EDGE_KM } from '../../eclipses/solar/constants.ts';
 import type { SolarLocalCircumstances, SolarLocalEventName, SolarLocalKind } from '../../local/solar.ts';
-import { ENGLISH, listWords, type CommonWords } from '../common.ts';
+import { ENGLISH, listWords, wholeIn, type CommonWords } from '../common.ts';
 
 export type SolarKindWord = 'total' | 'annular' | 'hybrid' | 'partial';
 /** How much of a continent sees the partial eclipse. */
@@ -45,9 +45,59 @@ export interface SolarTextWords {
     readonly saros: (n: number) => string;
     readonly noMap: string;
   };
+  /** A central phase's length: "4 min 28 s" (`seconds` already two digits), and under a minute "52 s". */
+  readonly minutesSeconds: { readonly minutes: (minutes: string, seconds: string) => string; readonly seconds: (seconds: string) => string };
+  /** A share of the Sun's disc as a whole percentage: "74 %". */
+  readonly percent: (value: string) => string;
+  /** The timetable's words for the central phase's edges: "totality begins"; `unseen` names a central phase the place does not see. */
+  readonly centralEdge: { readonly edge: (central: string, edge: 'begins' | 'ends') => string; readonly unseen: string };
+  /** The local table and markdown (the trade's contact names C1…C4 stay as they are). */
+  readonly local: {
+    readonly eventLabel: { readonly maximum: string; readonly sunrise: string; readonly sunset: string };
+    /** The seven column heads: event, what happens, local time (`zone`), UTC, Sun altitude, Sun azimuth, Sun up. */
+    readonly header: (zone: string) => readonly [string, string, string, string, string, string, string];
+    readonly yes: string;
+    readonly no: string;
+    readonly title: (kind: SolarKindWord, id: string, place: string, coordinates: string, zone: string) => string;
+    readonly seen: {
+      readonly total: (magnitude: string) => string;
+      readonly annular: (magnitude: string, obscuration: string) => string;
+      readonly partial: (magnitude: string, obscuration: string) => string;
+      readonly none: string;
+    };
+    readonly timeNote: (zoneDescription: string) => string;
+    readonly modelNote: (k1: string, k2: string, deltaT: string, source: string, predictions: string) => string;
+    /** The caution's heading: in capitals before the table and in calendar entries, as a bold label in markdown. */
+    readonly safetyHeading: { readonly plain: string; readonly markdown: string };
+  };
+  /** The newsletter summary of what one place sees. */
+  readonly summary: {
+    readonly missed: (place: string, id: string) => string;
+    readonly sunDown: (place: string, span: string) => string;
+    readonly central: (place: string, kind: 'total' | 'annular', duration: string, from: string, to: string) => string;
+    readonly partial: (place: string, percent: string) => string;
+    /** The eclipse's span; `localDate` when the place's date differs from the eclipse's UTC date; the Sun's altitude at maximum. */
+    readonly runs: (span: string, localDate: string | undefined, stamp: string, altitude: string, up: boolean) => string;
+    readonly risesEclipsed: (stamp: string) => string;
+    readonly setsEclipsed: (stamp: string) => string;
+    readonly nearEdge: (km: string) => string;
+    readonly lowSun: (degrees: string) => string;
+  };
+  /** The iCalendar entries of one place. */
+  readonly calendar: {
+    readonly partialTitle: string;
+    readonly centralTitle: { readonly total: string; readonly annular: string };
+    /** Said of a phase cut to the time the Sun is up: short in the entry's title, long in its description. */
+    readonly cutShort: string;
+    readonly cutLong: string;
+    readonly description: (title: string, id: string, cut: string) => string;
+    readonly notSeenTitle: (place: string) => string;
+    readonly notSeenDescription: string;
+  };
 }
 
 const KIND_TITLE: Record<SolarKindWord, string> = { total: 'Total', annular: 'Annular', hybrid: 'Hybrid (total and annular)', partial: 'Partial' };
+const KIND_TITLE_SHORT: Record<SolarKindWord, string> = { total: 'Total', annular: 'Annular', hybrid: 'Hybrid', partial: 'Partial' };
 const PATH_NAME = { total: 'path of totality', annular: 'path of the annular eclipse', hybrid: 'central path (total in parts, annular in others)' } as const;
 
 export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
@@ -93,17 +143,73 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
     saros: (n) => `saros ${n}`,
     noMap: 'Caption and GeoJSON geometry; no map picture yet.',
   },
+  minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },
+  percent: (value) => `${value} %`,
+  centralEdge: { edge: (central, edge) => `${central} ${edge}`, unseen: 'central phase (Sun below the horizon)' },
+  local: {
+    eventLabel: { maximum: 'Maximum', sunrise: 'Sunrise', sunset: 'Sunset' },
+    header: (zone) => ['Event', 'What happens', `Local (${zone})`, 'UTC', 'Sun alt.', 'Sun az.', 'Sun up'],
+    yes: 'yes',
+    no: 'no',
+    title: (kind, id, place, coordinates, zone) => `${KIND_TITLE_SHORT[kind]} solar eclipse ${id} from ${place} (${coordinates}; ${zone})`,
+    seen: {
+      total: (m) => `Seen here: total (magnitude ${m}).`,
+      annular: (m, o) => `Seen here: annular (magnitude ${m}, ${o} of the Sun's disc covered).`,
+      partial: (m, o) => `Seen here: partial (magnitude ${m}, ${o} of the Sun's disc covered at maximum).`,
+      none: 'Seen here: nothing.',
+    },
+    timeNote: (zone) =>
+      `Local time: ${zone}. Times to the second. Sun altitude: its centre, with refraction (Saemundsson) from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.`,
+    modelNote: (k1, k2, deltaT, source, predictions) =>
+      `Moon radius k1 = ${k1} (penumbra: C1, C4, magnitude), k2 = ${k2} (umbra and antumbra: C2, C3); smooth lunar limb, sea-level observer; ΔT ${deltaT} s (${source}). ${predictions}`,
+    safetyHeading: { plain: 'EYE SAFETY', markdown: 'Eye safety' },
+  },
+  summary: {
+    missed: (place, id) => `From ${place} the Moon's shadow misses: no eclipse of the Sun is seen on ${id}.`,
+    sunDown: (place, span) => `From ${place} the Sun is below the horizon for the whole eclipse (${span}): nothing is seen.`,
+    central: (place, kind, duration, from, to) =>
+      `From ${place} ${kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,'} for ${duration}, ${from} to ${to}.`,
+    partial: (place, percent) => `From ${place} the Sun is partly eclipsed: at most ${percent} of its disc covered.`,
+    runs: (span, localDate, stamp, altitude, up) =>
+      `The eclipse runs ${span}${localDate === undefined ? '' : ` on ${localDate}`}; maximum at ${stamp} with the Sun ${altitude}° ${up ? 'up' : 'below the horizon'}.`,
+    risesEclipsed: (stamp) => `The Sun rises already eclipsed, at ${stamp}.`,
+    setsEclipsed: (stamp) => `The Sun sets still eclipsed, at ${stamp}.`,
+    nearEdge: (km) =>
+      `This place lies within ${km} km of the path's edge: the Moon's uneven limb and the uncertainty of ΔT can move the edge by a kilometre or more, so the central phase may be shorter or missed.`,
+    lowSun: (degrees) => `The Sun stands below ${degrees}° at best: a clear, low horizon in its direction is needed.`,
+  },
+  calendar: {
+    partialTitle: 'Partial phases of the solar eclipse',
+    centralTitle: { total: 'Totality', annular: 'Annularity' },
+    cutShort: ' (Sun up)',
+    cutLong: ' (the part with the Sun above the horizon)',
+    description: (title, id, cut) => `${title} of ${id}${cut}; predictions, weather permitting.`,
+    notSeenTitle: (place) => `Solar eclipse, not visible from ${place}`,
+    notSeenDescription: 'This entry only marks the date; there is nothing to see from here.',
+  },
 };
 
+/**
+ * The text words of a solar catalogue (English when none is given). A
+ * catalogue without them is refused before any output is made
+ * (checkLanguageForBodies); reaching here without them is a fault.
+ */
+export function solarTextWords(solar?: { readonly text?: SolarTextWords; readonly common: CommonWords }): SolarTextWords {
+  if (solar === undefined) return SOLAR_TEXT_ENGLISH;
+  if (solar.text === undefined) throw new Error(`solar text words missing for ${solar.common.locale}`);
+  return solar.text;
+}
+
 /** "4 min 28 s", "52 s": central durations to the second. */
-export function minutesAndSeconds(seconds: number): string {
+export function minutesAndSeconds(seconds: number, words: SolarTextWords = SOLAR_TEXT_ENGLISH): string {
   const whole = Math.round(seconds);
   const minutes = Math.floor(whole / 60);
-  return minutes === 0 ? `${whole} s` : `${minutes} min ${String(whole % 60).padStart(2, '0')} s`;
+  return minutes === 0 ? words.minutesSeconds.seconds(wholeIn(whole, words.common))
+    : words.minutesSeconds.minutes(wholeIn(minutes, words.common), wholeIn(whole % 60, words.common, 2));
 }
 
 /** A fraction as a whole percentage: "74 %". */
-export const percentWords = (fraction: number): string => `${Math.round(fraction * 100)} %`;
+export const percentWords = (fraction: number, words: SolarTextWords = SOLAR_TEXT_ENGLISH): string => words.percent(wholeIn(Math.round(fraction * 100), words.common));
 
 /** A wall-clock time to the second with its own zone's name: "13:27:10 CDT". */
 export function clockSeconds(clock: CivilClock, utDays: number): string {
@@ -113,39 +219,38 @@ export function clockSeconds(clock: CivilClock, utDays: number): string {
 /** What one local event is, in words, given what the place sees. */
 export function solarEventWords(kind: SolarLocalKind, event: SolarLocalEventName, words: SolarTextWords = SOLAR_TEXT_ENGLISH): string {
   if (event !== 'C2' && event !== 'C3') return words.events[event];
-  const central = kind === 'total' || kind === 'annular' ? words.central[kind] : 'central phase (Sun below the horizon)';
-  return `${central} ${event === 'C2' ? 'begins' : 'ends'}`;
+  // Where the place does not see the central phase with the Sun up, its edges are named as such.
+  const central = kind === 'total' || kind === 'annular' ? words.central[kind] : words.centralEdge.unseen;
+  return words.centralEdge.edge(central, event === 'C2' ? 'begins' : 'ends');
 }
 
 /** What the place sees, in two or three sentences, from the circumstances alone. */
-export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilClock, placeName: string): string {
+export function solarLocalSummary(local: SolarLocalCircumstances, clock: CivilClock, placeName: string, words: SolarTextWords = SOLAR_TEXT_ENGLISH): string {
+  const w = words.summary;
+  const common = words.common;
   const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
   const c1 = find('C1');
   const c4 = find('C4');
-  if (!c1 || !c4) return `From ${placeName} the Moon's shadow misses: no eclipse of the Sun is seen on ${local.eclipse.id}.`;
-  if (local.kind === 'none') {
-    return `From ${placeName} the Sun is below the horizon for the whole eclipse (${clock.range(c1.moment.utDays, c4.moment.utDays)}): nothing is seen.`;
-  }
+  if (!c1 || !c4) return w.missed(placeName, local.eclipse.id);
+  if (local.kind === 'none') return w.sunDown(placeName, clock.range(c1.moment.utDays, c4.moment.utDays));
   const sentences: string[] = [];
   const c2 = find('C2');
   const c3 = find('C3');
   const maximum = find('maximum')!;
   if ((local.kind === 'total' || local.kind === 'annular') && c2 && c3 && local.centralSeconds !== undefined) {
-    const what = local.kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,';
-    sentences.push(`From ${placeName} ${what} for ${minutesAndSeconds(local.centralSeconds)}, ${clockSeconds(clock, c2.moment.utDays)} to ${clockSeconds(clock, c3.moment.utDays)}.`);
+    sentences.push(w.central(placeName, local.kind, minutesAndSeconds(local.centralSeconds, words), clockSeconds(clock, c2.moment.utDays), clockSeconds(clock, c3.moment.utDays)));
   } else {
-    sentences.push(`From ${placeName} the Sun is partly eclipsed: at most ${percentWords(local.obscurationSeen)} of its disc covered.`);
+    sentences.push(w.partial(placeName, percentWords(local.obscurationSeen, words)));
   }
   // The local date is named where it is not the eclipse's UTC date (across the date line, or late in the UTC day).
-  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? '' : ` on ${clock.date(c1.moment.utDays)}`;
-  sentences.push(`The eclipse runs ${clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays)}${localDate}; maximum at ${clock.stamp(maximum.moment.utDays)} with the Sun ${Math.round(maximum.sunAltitudeDeg)}° ${maximum.sunUp ? 'up' : 'below the horizon'}.`);
+  const localDate = clock.isoDate(c1.moment.utDays) === local.eclipse.id ? undefined : clock.date(c1.moment.utDays);
+  sentences.push(w.runs(clock.range(c1.moment.utDays, c4.moment.utDays, c1.moment.utDays), localDate, clock.stamp(maximum.moment.utDays),
+    wholeIn(Math.round(maximum.sunAltitudeDeg), common), maximum.sunUp));
   const rise = find('sunrise');
   const set = find('sunset');
-  if (rise) sentences.push(`The Sun rises already eclipsed, at ${clock.stamp(rise.moment.utDays)}.`);
-  if (set) sentences.push(`The Sun sets still eclipsed, at ${clock.stamp(set.moment.utDays)}.`);
-  if (local.nearPathEdge) {
-    sentences.push(`This place lies within ${NEAR_EDGE_KM} km of the path's edge: the Moon's uneven limb and the uncertainty of ΔT can move the edge by a kilometre or more, so the central phase may be shorter or missed.`);
-  }
-  if (local.lowSun) sentences.push(`The Sun stands below ${LOW_SUN_DEG}° at best: a clear, low horizon in its direction is needed.`);
+  if (rise) sentences.push(w.risesEclipsed(clock.stamp(rise.moment.utDays)));
+  if (set) sentences.push(w.setsEclipsed(clock.stamp(set.moment.utDays)));
+  if (local.nearPathEdge) sentences.push(w.nearEdge(wholeIn(NEAR_EDGE_KM, common)));
+  if (local.lowSun) sentences.push(w.lowSun(wholeIn(LOW_SUN_DEG, common)));
   return sentences.join(' ');
 }

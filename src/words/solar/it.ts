@@ -32,6 +32,12 @@ const atThePercent = (percent: string) => (readWithVowel(percent) ? `all’${per
 /** "il 13 agosto 2026", "l’8 agosto 2026": a date as the object of a sentence. */
 const theDate = (date: string) => (/^(8|11)\s/.test(date) ? `l’${date}` : `il ${date}`);
 
+/** The Sun's altitude below the horizon, said as a depth: "con il Sole 4° sotto l’orizzonte". */
+const belowHorizon = (altitude: string) => {
+  const depth = altitude.replace(/^[-−]/, '');
+  return /^0(\D|$)/.test(depth) ? 'con il Sole sull’orizzonte' : `con il Sole ${depth}° sotto l’orizzonte`;
+};
+
 /** "eclissi totale di Sole"; the hybrid kind says what it is in brackets, after the noun. */
 const KIND: Record<SolarKindWord, string> = { total: 'totale', annular: 'anulare', hybrid: 'ibrida', partial: 'parziale' };
 const eclipseOfTheSun = (kind: SolarKindWord) => `eclissi ${KIND[kind]} di Sole${kind === 'hybrid' ? ' (totale e anulare)' : ''}`;
@@ -124,13 +130,17 @@ export const SOLAR_TEXT_ITALIAN: SolarTextWords = {
     },
     pathOverSea: (kind) => `La ${PATH_NAME[kind]} passa solo sul mare aperto, senza toccare la terraferma di alcun paese.`,
     // Every continent's name starts with a vowel: "tutta l’Europa", "gran parte dell’Asia".
-    continent: (name, share) => (share === 'whole' ? `tutta l’${name}` : share === 'most' ? `gran parte dell’${name}` : `parte dell’${name}`),
+    // A continent's English name (countries-list's) is put into Italian here; a name already translated passes as it is.
+    continent: (english, share) => {
+      const name = (COMMON_ITALIAN.continents as Readonly<Record<string, string>>)[english] ?? english;
+      return share === 'whole' ? `tutta l’${name}` : share === 'most' ? `gran parte dell’${name}` : `parte dell’${name}`;
+    },
     partialSeen: (where) => `L’eclissi parziale è visibile in ${where}.`,
     citiesIntro: 'Tra le città più grandi:',
     cityCentral: (city, kind, duration, from) => `${city} vede ${kind === 'total' ? 'la totalità' : 'l’anello'} per ${duration} dalle ${from}`,
     cityPartial: (city, percent, at, when) =>
-      when === 'maximum' ? `${city} vede la Luna coprire ${thePercent(percent)} del Sole alle ${at}`
-        : `${city} vede ${when === 'sunrise' ? 'sorgere' : 'tramontare'} il Sole coperto ${atThePercent(percent)}, alle ${at}`,
+      when === 'maximum' ? `${city} vede la Luna coprire ${/^0(\D|$)/.test(percent) ? 'meno dell’1 %' : thePercent(percent)} del Sole alle ${at}`
+        : `${city} vede ${when === 'sunrise' ? 'sorgere' : 'tramontare'} il Sole coperto ${/^0(\D|$)/.test(percent) ? 'per meno dell’1 %' : atThePercent(percent)}, alle ${at}`,
     altText: (kind, date, path, partial) => [`Mappa dell’${eclipseOfTheSun(kind)} ${ofDate(date)}.`, path, partial].filter((p) => p).join(' '),
     file: (caption, alt) => `${caption}\n\nTesto alternativo: ${alt}\n`,
   },
@@ -170,9 +180,9 @@ export const SOLAR_TEXT_ITALIAN: SolarTextWords = {
     sunDown: (place, span) => `Da ${place} il Sole è sotto l’orizzonte per tutta l’eclissi (${span}): non si vede nulla.`,
     central: (place, kind, duration, from, to) =>
       `Da ${place} ${kind === 'total' ? 'il Sole è totalmente eclissato' : 'la Luna sta tutta dentro il disco del Sole, lasciandone visibile un anello luminoso,'} per ${duration}, dalle ${from} alle ${to}.`,
-    partial: (place, percent) => `Da ${place} il Sole è eclissato in parte: al massimo la Luna ne copre ${thePercent(percent)} del disco.`,
+    partial: (place, percent) => `Da ${place} il Sole è eclissato in parte: al massimo la Luna copre ${thePercent(percent)} del suo disco.`,
     runs: (span, localDate, stamp, altitude, up) =>
-      `Orario dell’eclissi: ${span}${localDate === undefined ? '' : `, ${theDate(localDate)}`}; massimo alle ${stamp}, ${up ? `con il Sole alto ${altitude}°` : `con il Sole sotto l’orizzonte (${altitude}°)`}.`,
+      `Orario dell’eclissi: ${span}${localDate === undefined ? '' : `, ${theDate(localDate)}`}; massimo alle ${stamp}, ${up ? `con il Sole alto ${altitude}°` : belowHorizon(altitude)}.`,
     risesEclipsed: (stamp) => `Il Sole sorge già eclissato, alle ${stamp}.`,
     setsEclipsed: (stamp) => `Il Sole tramonta ancora eclissato, alle ${stamp}.`,
     nearEdge: (km) =>

@@ -17,6 +17,13 @@ import type { SolarKindWord, SolarTextWords } from './text.ts';
 
 const list = (items: readonly string[]) => listWords(items, COMMON_PORTUGUESE);
 const number = (text: string) => decimalIn(text, COMMON_PORTUGUESE);
+/** The Sun's altitude below the horizon, said as a depth: "com o Sol 4° abaixo do horizonte". */
+const belowHorizon = (altitude: string) => {
+  const depth = altitude.replace(/^[-−]/, '');
+  return /^0(\D|$)/.test(depth) ? 'com o Sol no horizonte' : `com o Sol ${depth}° abaixo do horizonte`;
+};
+/** A share that rounds to "0 %" is said as less than one percent. */
+const underOne = (percent: string) => (/^0(\D|$)/.test(percent) ? 'menos de 1 %' : percent);
 
 /** "eclipse total do Sol"; the hybrid kind says what it is in brackets, after the noun. */
 const KIND: Record<SolarKindWord, string> = { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' };
@@ -110,13 +117,17 @@ export const SOLAR_TEXT_PORTUGUESE: SolarTextWords = {
     },
     pathOverSea: (kind) => `A ${PATH_NAME[kind]} passa apenas por mar aberto, sem tocar terra de nenhum país.`,
     // "toda a Europa", "grande parte da Ásia", "partes da África": every continent's name is feminine.
-    continent: (name, share) => (share === 'whole' ? `toda a ${name}` : share === 'most' ? `grande parte da ${name}` : `partes da ${name}`),
+    // A continent's English name (countries-list's) is put into Portuguese here; a name already translated passes as it is.
+    continent: (english, share) => {
+      const name = (COMMON_PORTUGUESE.continents as Readonly<Record<string, string>>)[english] ?? english;
+      return share === 'whole' ? `toda a ${name}` : share === 'most' ? `grande parte da ${name}` : `partes da ${name}`;
+    },
     partialSeen: (where) => `Vê-se um eclipse parcial em ${where}.`,
     citiesIntro: 'Entre as maiores cidades:',
     cityCentral: (city, kind, duration, from) => `${city} vê ${kind === 'total' ? 'a totalidade' : 'o anel'} durante ${duration}, a partir das ${from}`,
     cityPartial: (city, percent, at, when) =>
-      when === 'maximum' ? `${city} vê a Lua cobrir ${percent} do Sol às ${at}`
-        : `${city} vê o Sol ${when === 'sunrise' ? 'nascer' : 'pôr-se'} com ${percent} do disco coberto, às ${at}`,
+      when === 'maximum' ? `${city} vê a Lua cobrir ${underOne(percent)} do Sol às ${at}`
+        : `${city} vê o Sol ${when === 'sunrise' ? 'nascer' : 'pôr-se'} com ${underOne(percent)} do disco coberto, às ${at}`,
     altText: (kind, date, path, partial) => [`Mapa do ${eclipseOfTheSun(kind)} de ${date}.`, path, partial].filter((p) => p).join(' '),
     file: (caption, alt) => `${caption}\n\nTexto alternativo: ${alt}\n`,
   },
@@ -158,7 +169,7 @@ export const SOLAR_TEXT_PORTUGUESE: SolarTextWords = {
       `De ${place}, ${kind === 'total' ? 'o Sol fica totalmente eclipsado' : 'a Lua fica inteiramente dentro do disco do Sol, deixando à volta um anel brilhante,'} durante ${duration}, das ${from} às ${to}.`,
     partial: (place, percent) => `De ${place}, o Sol fica parcialmente eclipsado: no máximo, a Lua cobre ${percent} do seu disco.`,
     runs: (span, localDate, stamp, altitude, up) =>
-      `Horário do eclipse: ${span}${localDate === undefined ? '' : `, a ${localDate}`}; máximo às ${stamp}, ${up ? `com o Sol a ${altitude}° de altura` : `com o Sol abaixo do horizonte (${altitude}°)`}.`,
+      `Horário do eclipse: ${span}${localDate === undefined ? '' : `, a ${localDate}`}; máximo às ${stamp}, ${up ? `com o Sol a ${altitude}° de altura` : belowHorizon(altitude)}.`,
     risesEclipsed: (stamp) => `O Sol nasce já eclipsado, às ${stamp}.`,
     setsEclipsed: (stamp) => `O Sol põe-se ainda eclipsado, às ${stamp}.`,
     nearEdge: (km) =>

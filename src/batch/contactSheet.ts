@@ -9,16 +9,12 @@ import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import type { SolarEclipseRecord } from '../eclipses/solar/record.ts';
 import type { EclipseBody } from '../eclipses/kinds.ts';
 import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
-import { minutesAndSeconds, SOLAR_TEXT_ENGLISH } from '../words/solar/text.ts';
+import { minutesAndSeconds, solarTextWords, type SolarTextWords } from '../words/solar/text.ts';
 import { isPlainRelativePath } from '../outputs/files.ts';
-import { decimalIn, formatDuration, roundToMinute } from '../words/common.ts';
-import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
-import { chooseLanguage } from '../settings/language.ts';
+import { decimalIn, fixedIn, formatDuration, roundToMinute, wholeIn } from '../words/common.ts';
+import type { LunarWords } from '../words/lunar/text.ts';
+import { chooseLanguage, hasSolarWords, LANGUAGES, type Language } from '../settings/language.ts';
 import type { Manifest } from './manifest.ts';
-
-const WORDS = LUNAR_ENGLISH;
-/** After a lunar kind on a sheet that holds solar eclipses too. */
-const WORDS_LUNAR_SUFFIX = ' lunar';
 
 /** Solar cards: a warm rule on top, the caution boxed so that it cannot be missed (only on sheets holding a solar eclipse). */
 const SOLAR_CARD_STYLE = `
@@ -27,10 +23,16 @@ const SOLAR_CARD_STYLE = `
 
 /** The words of a batch's style language (its `lang` field); a manifest from elsewhere with a tag not offered reads in English. */
 export function styleWords(style: Readonly<Record<string, unknown>>): LunarWords {
+  return styleLanguage(style).lunar;
+}
+
+/** The language of a batch's style (its `lang` field), both kinds' words; a tag not offered, or one whose solar words are not written yet, reads in English. */
+function styleLanguage(style: Readonly<Record<string, unknown>>): Language {
   try {
-    return chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined).lunar;
+    const language = chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined);
+    return hasSolarWords(language) ? language : { ...language, solar: LANGUAGES.en.solar };
   } catch {
-    return chooseLanguage(undefined).lunar;
+    return chooseLanguage(undefined);
   }
 }
 
@@ -57,18 +59,18 @@ function figuresFromRecord(r: EclipseRecord): EclipseRecord['printed'] {
 export function sheetTitle(fromIso: string, toIsoExclusive: string, bodies: readonly EclipseBody[] = ['lunar'], style: Readonly<Record<string, unknown>> = {}): string {
   const lastDay = new Date(Date.parse(toIsoExclusive) - 1).toISOString().slice(0, 10);
   if (!bodies.includes('solar')) return styleWords(style).sheet.title(fromIso.slice(0, 10), lastDay);
-  return SOLAR_TEXT_ENGLISH.sheet.title(bodies.includes('lunar'), fromIso.slice(0, 10), lastDay);
+  return solarTextWords(styleLanguage(style).solar).sheet.title(bodies.includes('lunar'), fromIso.slice(0, 10), lastDay);
 }
 
 /** A solar card's facts: greatest, magnitude, the central phase and path width at greatest, saros. */
-function solarFacts(r: SolarEclipseRecord, clock: ReturnType<typeof civilClock>, greatestUtDays: number): string[] {
-  const s = SOLAR_TEXT_ENGLISH.sheet;
+function solarFacts(r: SolarEclipseRecord, clock: ReturnType<typeof civilClock>, greatestUtDays: number, WORDS: LunarWords, text: SolarTextWords): string[] {
+  const s = text.sheet;
   const minute = new Date(Math.round(Date.parse(r.greatest) / 60_000) * 60_000).toISOString().slice(11, 16);
   return [
     clock.zone === 'UTC' ? WORDS.sheet.greatestUtc(minute) : WORDS.sheet.greatestLocal(clock.stamp(greatestUtDays)),
-    s.magnitude(r.magnitude.toFixed(3)),
-    ...(r.durations.central !== undefined && r.kind !== 'partial' ? [s.central(r.kind, minutesAndSeconds(r.durations.central))] : []),
-    ...(r.pathWidthKm !== undefined ? [s.width(r.pathWidthKm.toFixed(0))] : []),
+    s.magnitude(fixedIn(r.magnitude, 3, text.common)),
+    ...(r.durations.central !== undefined && r.kind !== 'partial' ? [s.central(r.kind, minutesAndSeconds(r.durations.central, text))] : []),
+    ...(r.pathWidthKm !== undefined ? [s.width(wholeIn(Math.round(r.pathWidthKm), text.common))] : []),
     s.saros(r.saros),
   ];
 }
@@ -87,7 +89,10 @@ export function pngSize(head: Uint8Array): [number, number] | undefined {
  */
 export function contactSheet(manifest: Manifest, title: string, thumbSize: (path: string) => [number, number] | undefined = () => undefined): string {
   const tz = typeof manifest.style.tz === 'string' ? manifest.style.tz : 'UTC';
-  const WORDS = styleWords(manifest.style);
+  const language = styleLanguage(manifest.style);
+  const WORDS = language.lunar;
+  const SOLAR = language.solar;
+  const solarText = solarTextWords(SOLAR);
   const clock = civilClock(tz, 'zone', WORDS.common.clock);
   const w = WORDS.sheet;
   const duration = (minutes: number) => formatDuration(minutes * 60, 'long', WORDS.common);
@@ -102,12 +107,13 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const solar = entry.body === 'solar' ? entry.record : undefined;
     // A kind this version does not know (a manifest from another) is printed as it stands.
     const kind = solar
-      ? (SOLAR_TEXT_ENGLISH.sheet.kind as Readonly<Record<string, string>>)[solar.kind] ?? solar.kind
-      : `${(WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind}${mixed ? WORDS_LUNAR_SUFFIX : ''}`;
+      ? (solarText.sheet.kind as Readonly<Record<string, string>>)[solar.kind] ?? solar.kind
+      : mixed ? solarText.sheet.lunarKind((WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind)
+        : (WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind;
     const r = entry.record;
     // The figures as the maps print them: rounded once, from the full value (record.printed).
     const p = entry.body !== 'solar' ? entry.record.printed ?? figuresFromRecord(entry.record) : undefined;
-    const facts = solar ? solarFacts(solar, clock, greatestUtDays) : !p ? [] : [
+    const facts = solar ? solarFacts(solar, clock, greatestUtDays, WORDS, solarText) : !p ? [] : [
       clock.zone === 'UTC' ? w.greatestUtc(p.greatestUtc.slice(11)) : w.greatestLocal(clock.stamp(greatestUtDays)),
       r.kind === 'penumbral' ? w.penumbralMagnitude(decimalIn(p.penumbralMagnitude, WORDS.common)) : w.umbralMagnitude(decimalIn(p.umbralMagnitude, WORDS.common)),
       ...(p.minutes.total !== undefined ? [w.totality(duration(p.minutes.total))] : []),
@@ -122,11 +128,11 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
     const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(solar ? solarText.sheet.thumbnailAlt(kind, date) : w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
       : '';
     // Beside every solar eclipse, the eye-safety caution (short form, scoped to the eclipse's kind); nothing else of it is lunar.
     const caution = solar
-      ? `\n      <p class="caution"><strong>${escapeXml(solarSafetyText('short', safetyScopeForEclipse(solar.kind)))}</strong></p>${thumb ? '' : `\n      <p>${escapeXml(SOLAR_TEXT_ENGLISH.sheet.noMap)}</p>`}`
+      ? `\n      <p class="caution"><strong>${escapeXml(solarSafetyText('short', safetyScopeForEclipse(solar.kind), SOLAR))}</strong></p>${thumb ? '' : `\n      <p>${escapeXml(solarText.sheet.noMap)}</p>`}`
       : '';
     return `    <article class="${solar ? `solar ${escapeXml(r.kind)}` : escapeXml(r.kind)}" id="${escapeXml(r.id)}">
       ${image ? `${image}\n      ` : ''}<h2>${escapeXml(date)} <small>${escapeXml(kind)}</small></h2>

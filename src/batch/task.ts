@@ -56,8 +56,10 @@ export async function renderEclipse(input: TaskInput): Promise<TaskResult> {
 /** A solar eclipse: its maps and thumbnail, caption and alt text, the geometry as GeoJSON, the places' local tables; every one with the caution. */
 async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: string, write: Write): Promise<void> {
   const { eclipse, style, generator } = input;
-  const clock = civilClock(style.tz);
+  // The style's language (its `lang`): the maps, caption and local tables all speak it.
   const settings = mapSettings(mapChoicesOf(style));
+  const { solar } = settings;
+  const clock = civilClock(style.tz, 'zone', solar.common.clock);
   // The style's pictures, each drawn with the caution in its header band; the geometry as GeoJSON always.
   let png: Uint8Array | undefined;
   for (const format of style.formats.filter((f) => f !== 'geojson')) {
@@ -69,11 +71,11 @@ async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: s
     png ??= (await renderMapFile({ eclipse, ...settings, format: 'png', generator })).bytes;
     await write(`thumbs/${stem}.png`, 'thumbnail', await sharp(png).resize({ width: THUMBNAIL_WIDTH_PX }).png().toBuffer());
   }
-  await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock })));
-  await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse))}\n`);
+  await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock, solar }), solar.text));
+  await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse, { solar }))}\n`);
   const slugs = stylePlaces(style.places).map((p) => p.slug);
   for (const [i, name] of style.places.entries()) {
-    const report = solarLocalReport(eclipse, choosePlace({ place: name }, true, 'places'));
+    const report = solarLocalReport(eclipse, choosePlace({ place: name }, true, 'places'), solar);
     for (const format of style.localFormats) {
       const text = { table: solarLocalTable, markdown: solarLocalMarkdown, csv: solarLocalCsv, json: solarLocalJson, ics: (r: typeof report) => solarLocalIcs(r, generator) }[format](report);
       await write(`${stem}-${slugs[i]!}.${LOCAL_EXTENSIONS[format]}`, 'local', text);

@@ -9,7 +9,7 @@ import type { ShadowDiagram, SkyOffset } from '../eclipses/lunar/diagram.ts';
 import type { ContactName } from '../eclipses/lunar/contacts.ts';
 import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
-import { diagramTexts, lunarDiagramWords, momentLabel, moonAcrossWords } from '../words/lunar/diagram.ts';
+import { diagramTexts, LUNAR_DIAGRAM_ENGLISH, lunarDiagramWords, momentLabel, moonAcrossWords, type LunarDiagramWords } from '../words/lunar/diagram.ts';
 import type { LunarWords } from '../words/lunar/text.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
@@ -250,7 +250,7 @@ function diagramExtent(diagram: ShadowDiagram) {
  * circles, the Moon's path with its arrow, the Moon at each contact and at greatest; the times
  * are the map's. The same geometry and inks as the full figure.
  */
-export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }, lunar?: LunarWords): string {
+export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, unit: number, headingStyle: { sizePx: number; weight: 'semibold' }, words: LunarDiagramWords = LUNAR_DIAGRAM_ENGLISH): string {
   const { eclipse } = diagram;
   const pad = (box.right - box.left) * 0.05;
   const plot = { left: box.left + pad, right: box.right - pad, top: box.top + pad + headingStyle.sizePx * 1.3, bottom: box.bottom - pad };
@@ -264,7 +264,7 @@ export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, uni
   const moonFill = theme.track[eclipse.kind === 'total' ? 'total' : eclipse.kind === 'partial' ? 'partial' : 'penumbral'];
   const out: string[] = [];
   out.push(`<rect x="${n2(box.left)}" y="${n2(box.top)}" width="${n2(box.right - box.left)}" height="${n2(box.bottom - box.top)}" rx="${n2(3 * unit)}" fill="${theme.paper}" fill-opacity="0.94" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"/>`);
-  out.push(textElement(lunarDiagramWords(lunar).inset.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
+  out.push(textElement(words.inset.heading, box.left + pad, box.top + pad + headingStyle.sizePx * 0.85, headingStyle, theme.text));
   const edge = `stroke="${theme.textMuted}" stroke-width="${n2(0.6 * unit)}"`;
   out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.penumbraRad * pxPerRad)}" fill="${theme.sky.civil}" ${edge}/>`);
   out.push(`<circle cx="${n2(cx)}" cy="${n2(cy)}" r="${n2(diagram.radii.umbraRad * pxPerRad)}" fill="${theme.sky.astronomical}" ${edge}/>`);

@@ -8,6 +8,7 @@
 import { geoContains, geoPath, type GeoPermissibleObjects, type GeoProjection } from 'd3-geo';
 import { shadowDiagram } from '../eclipses/lunar/diagram.ts';
 import { diagramInset, diagramInsetAspect } from './diagram.ts';
+import type { LunarDiagramWords } from '../words/lunar/diagram.ts';
 import type { MapInset } from './insetNames.ts';
 import type { MultiLineString, Position } from 'geojson';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
@@ -49,6 +50,8 @@ export interface MapStyle {
   readonly words?: LunarFigureWords;
   /** A small figure inside the map, where it hides least land: the shadow diagram, or none (the default). */
   readonly inset?: MapInset;
+  /** The inset's words, in the map's language (default English). */
+  readonly diagramWords?: LunarDiagramWords;
 }
 
 
@@ -371,7 +374,7 @@ export function composeScene(input: SceneInput): Scene {
       return back !== null && Math.hypot(back[0] - point[0], back[1] - point[1]) < 1 && geoContains(coarseLand, lonLat);
     });
     taken.push(insetBox);
-    insetSvg = diagramInset(diagram, theme, insetBox, unit, headingStyle);
+    insetSvg = diagramInset(diagram, theme, insetBox, unit, headingStyle, style.diagramWords);
   }
   const lineHits = marks.length === 0 ? () => 0 : lineHitCounter([
     ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]))),

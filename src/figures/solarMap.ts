@@ -20,6 +20,7 @@ import { BASEMAP_CREDIT, detailForScale, loadBasemap, type BasemapDetail } from 
 import { fieldRegion, FIELD_STEPS_DEG, obscurationField } from './solarField.ts';
 import { pathPolygons } from '../visibility/solar/path.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
+import type { SolarWords } from '../words/solar/caution.ts';
 import { contourLabel, mapCaution, riseSetLabel, solarLegendWords, solarMapTexts } from '../words/solar/figures.ts';
 import { labelElement, layoutFor, n2, overlaps, plateBox, type Box } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
@@ -50,6 +51,8 @@ export interface SolarSceneInput {
   /** "umbracast 0.1.0", for the small print. */
   readonly generator: string;
   readonly marks?: readonly MapMark[];
+  /** The reader's solar words (settings/language.ts); English when not given. */
+  readonly words?: SolarWords;
 }
 
 export interface SolarScene {
@@ -120,13 +123,15 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
   const layout = layoutFor(size);
   const { unit, margin } = layout;
   const H = size.heightPx;
-  const texts = solarMapTexts(eclipse, clock, input.generator, { basemap: BASEMAP_CREDIT, font: FONT_CREDIT, moonRadii: [K_PENUMBRA, K_UMBRA] }, style.title);
-  const caution = mapCaution(eclipse, 'short');
+  // The basemap's credit in the reader's language (the shared words carry it); English as world.ts gives it.
+  const basemapCredit = input.words ? input.words.common.credits.basemap : BASEMAP_CREDIT;
+  const texts = solarMapTexts(eclipse, clock, input.generator, { basemap: basemapCredit, font: FONT_CREDIT, moonRadii: [K_PENUMBRA, K_UMBRA] }, style.title, input.words);
+  const caution = mapCaution(eclipse, 'short', input.words);
   const view: View = (style.fitPath && pathView(eclipse)) || style.view;
 
   const strokes = SOLAR_STROKES(theme);
   const clockLabel = clock.zoneDescriptionBetween(eclipse.contacts.P1!.utDays, eclipse.contacts.P4!.utDays).replace(/^the /, '');
-  const words = solarLegendWords(eclipse, `in ${clockLabel}`);
+  const words = solarLegendWords(eclipse, clockLabel, input.words);
   const marksGiven = (input.marks ?? []).length > 0;
   const legend: LegendEntry[] = [
     ...words.ramp.map((label, k) => ({ label, swatch: zoneSwatch(theme.solar.ramp[k]!, theme, unit) })),
@@ -295,16 +300,16 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
     for (const line of c.lines) {
       for (const p of spreadAlong(line.map(onPage), 5)) {
         if (placed >= 2) break;
-        const plate = plateBox(contourLabel(c.level), p[0], p[1] + contourStyle.sizePx * 0.35, contourStyle, unit);
+        const plate = plateBox(contourLabel(c.level, input.words), p[0], p[1] + contourStyle.sizePx * 0.35, contourStyle, unit);
         if (lineHits(plate) > 0) continue;
-        if (place(contourLabel(c.level), p[0], p[1] + contourStyle.sizePx * 0.35, contourStyle)) placed++;
+        if (place(contourLabel(c.level, input.words), p[0], p[1] + contourStyle.sizePx * 0.35, contourStyle)) placed++;
       }
     }
   }
   // One label for the rise/set curves of each kind, where one fits.
   for (const kind of [...new Set(riseSet.map((r) => `${r.contact} ${r.sun}`))]) {
     const curves = riseSet.filter((r) => `${r.contact} ${r.sun}` === kind);
-    const text = riseSetLabel(curves[0]!.contact, curves[0]!.sun);
+    const text = riseSetLabel(curves[0]!.contact, curves[0]!.sun, input.words);
     const spots = curves.flatMap((r) => spreadAlong(r.points.map(onPage), 4));
     spots.some((p) => place(text, p[0], p[1] + contourStyle.sizePx * 0.35, { ...contourStyle, weight: 'regular' }));
   }

@@ -10,9 +10,10 @@ import { CONTACT_ORDER } from '../eclipses/lunar/contacts.ts';
 import { fixed, PRINTED_PLACES } from '../eclipses/lunar/figures.ts';
 import { julianDateOfIsoDate } from '../ephemeris/calendar.ts';
 import type { CatalogueDocument, CatalogueRecord, EclipseRecord, SolarEclipseRecord } from './catalogueRecord.ts';
-import { decimalIn, deltaTModelIn, formatDuration } from '../words/common.ts';
+import { decimalIn, deltaTModelIn, formatDuration, wholeIn } from '../words/common.ts';
 import { LUNAR_ENGLISH, type LunarWords } from '../words/lunar/text.ts';
-import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
+import { safetyScopeForEclipse, solarSafetyText, type SolarWords } from '../words/solar/caution.ts';
+import { SOLAR_TEXT_ENGLISH, solarTextWords } from '../words/solar/text.ts';
 import { dateWordsIn } from '../ephemeris/civilTime.ts';
 
 export type CatalogueFormat = 'table' | 'json' | 'csv';
@@ -59,36 +60,22 @@ export function catalogueCsv(doc: CatalogueDocument): string {
 }
 
 /**
- * The words of a catalogue holding both kinds (the lunar ones come from the
- * lunar catalogue of words). The columns read across both kinds: the
- * magnitude is the umbral one for a lunar eclipse and the fraction of the
- * Sun's diameter covered for a solar one.
- */
-const BOTH = {
-  header: ['Date', 'Body', 'Kind', 'Greatest (UTC)', 'Magnitude', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Central', 'Path', 'Saros'],
-  numeric: [false, false, false, false, true, true, true, true, true, true, true, true],
-  body: { lunar: 'Moon', solar: 'Sun' },
-  solarKind: { total: 'total', annular: 'annular', hybrid: 'hybrid', partial: 'partial' },
-  eclipses: (lunar: number, solar: number) => `${lunar} lunar and ${solar} solar ${lunar + solar === 1 ? 'eclipse' : 'eclipses'}`,
-  solarEclipses: (count: number) => `${count} solar ${count === 1 ? 'eclipse' : 'eclipses'}`,
-  magnitudeNote: 'Magnitude: of the umbra for the Moon; of the Sun\'s diameter covered, at the greatest point, for the Sun.',
-  solarNote: (k1: number, k2: number) =>
-    `Sun: central = totality or annularity on the central line at greatest eclipse, path = its width there; Moon radius k1 = ${k1} (penumbra), k2 = ${k2} (umbra and antumbra).`,
-  centralSeconds: (seconds: number) => `${Math.floor(seconds / 60)}m ${String(seconds % 60).padStart(2, '0')}s`,
-} as const;
-
-/**
  * `bodies`: which kinds were searched (lunar, solar or all), for the heading's count when none was found;
- * `words`: the language of a table of lunar eclipses (default English; a table holding solar eclipses is English so far).
+ * `words`: the reader's lunar words (default English); `solar`: the reader's solar words, for a table holding
+ * solar eclipses, whose columns then read across both kinds (words/solar/text.ts, `list`).
  */
-export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar' | 'all' = 'lunar', words: LunarWords = LUNAR_ENGLISH): string {
+export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar' | 'all' = 'lunar', words: LunarWords = LUNAR_ENGLISH, solarWords?: SolarWords): string {
   const w = words.table;
+  const common = words.common;
   const decimal = (text: string) => decimalIn(text, words.common);
   const julianOf = (id: string) => julianDateOfIsoDate(id, dateWordsIn(words.common.clock));
   const solar = doc.eclipses.filter(isSolar);
   const both = solar.length > 0;
+  // A table holding a solar eclipse needs the solar words (a language lacking them is refused: checkLanguageForBodies);
+  // one without, only the count of a search that took in solar eclipses, in English where they are not written yet.
+  const BOTH = (both ? solarTextWords(solarWords) : solarWords?.text ?? SOLAR_TEXT_ENGLISH).list;
   const header = both ? BOTH.header : w.catalogueHeader;
-  const numeric = both ? BOTH.numeric : [false, false, false, true, true, true, true, true, true];
+  const numeric = both ? [false, false, false, false, true, true, true, true, true, true, true, true] : [false, false, false, true, true, true, true, true, true];
   const minutes = (value: number | undefined) => (value !== undefined ? formatDuration(value * 60, 'compact', words.common) : w.absent);
   const date = (id: string) => (julianOf(id) ? w.julianBeside(id, julianOf(id)!) : id);
   // Every lunar figure as printed elsewhere: rounded once, from the full value (record.printed).
@@ -99,10 +86,10 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
       : [date(e.id), w.kind[e.kind], e.printed.greatestUtc, ...figures, String(e.saros)];
   };
   const solarRow = (e: SolarEclipseRecord): string[] => [
-    date(e.id), BOTH.body.solar, BOTH.solarKind[e.kind], isoMinute(e.greatest),
-    fixed(e.magnitude, PRINTED_PLACES.magnitude), w.absent, fixed(e.gamma, PRINTED_PLACES.gamma), w.absent, w.absent,
-    e.durations.central !== undefined ? BOTH.centralSeconds(e.durations.central) : w.absent,
-    e.pathWidthKm !== undefined ? `${Math.round(e.pathWidthKm)} km` : w.absent,
+    date(e.id), BOTH.body.solar, BOTH.kind[e.kind], isoMinute(e.greatest),
+    decimal(fixed(e.magnitude, PRINTED_PLACES.magnitude)), w.absent, decimal(fixed(e.gamma, PRINTED_PLACES.gamma)), w.absent, w.absent,
+    e.durations.central !== undefined ? BOTH.central(wholeIn(Math.floor(e.durations.central / 60), common), wholeIn(e.durations.central % 60, common, 2)) : w.absent,
+    e.pathWidthKm !== undefined ? BOTH.pathWidth(wholeIn(Math.round(e.pathWidthKm), common)) : w.absent,
     String(e.saros),
   ];
   const rows = doc.eclipses.map((e) => (isSolar(e) ? solarRow(e) : lunarRow(e)));
@@ -119,17 +106,17 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
   const notes = [
     w.catalogueTimes(words.convention[doc.convention], julian),
     deltaTs.length > 0 ? w.deltaTNote(decimal(w.deltaTSpan([Math.min(...deltaTs), Math.max(...deltaTs)])), sources, deltaTModelIn(doc.deltaTModel, words.common)) : w.deltaTModelOnly(deltaTModelIn(doc.deltaTModel, words.common)),
-    ...(both ? [BOTH.magnitudeNote, BOTH.solarNote(radii!.penumbra, radii!.umbra)] : []),
+    ...(both ? [BOTH.magnitudeNote, BOTH.solarNote(decimal(String(radii!.penumbra)), decimal(String(radii!.umbra)))] : []),
   ];
   // The caution first, whenever a solar eclipse is listed.
-  const caution = both ? [catalogueCaution(solar), ''] : [];
+  const caution = both ? [catalogueCaution(solar, solarWords), ''] : [];
   if (rows.length === 0) return `${title}\n${notes.join('\n')}\n`;
   return [...caution, title, '', line(header), line(widths.map((w) => '─'.repeat(w))), ...rows.map(line), '', ...notes, ''].join('\n');
 }
 
 /** The short caution for the solar records of a table: totality somewhere among them or not. */
-function catalogueCaution(solar: readonly SolarEclipseRecord[]): string {
-  return solarSafetyText('short', solar.some((e) => safetyScopeForEclipse(e.kind) === 'whole-eclipse') ? 'whole-eclipse' : 'no-totality');
+function catalogueCaution(solar: readonly SolarEclipseRecord[], words?: SolarWords): string {
+  return solarSafetyText('short', solar.some((e) => safetyScopeForEclipse(e.kind) === 'whole-eclipse') ? 'whole-eclipse' : 'no-totality', words);
 }
 
 /** "2024-04-08 18:17" from an ISO instant with seconds, rounded to the minute as the lunar rows are. */

@@ -8,6 +8,7 @@ import type { Theme } from '../figures/theme.ts';
 import { rasterise } from '../raster/raster.ts';
 import { diagramCaption } from '../words/lunar/diagram.ts';
 import type { SkyFormat } from './formatNames.ts';
+import type { LunarWords } from '../words/lunar/text.ts';
 
 /** The diagram is written in the sky figure's formats. */
 export type DiagramFormat = SkyFormat;
@@ -21,6 +22,8 @@ export interface DiagramRequest {
   readonly format: DiagramFormat;
   readonly generator: string;
   readonly title?: string;
+  /** The reader's lunar words (settings/language.ts); English when not given. The clock should speak the same language. */
+  readonly lunar?: LunarWords;
 }
 
 export async function renderDiagramFile(request: DiagramRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
@@ -32,8 +35,9 @@ export async function renderDiagramFile(request: DiagramRequest): Promise<{ byte
     size: request.size,
     generator: request.generator,
     ...(request.title !== undefined ? { title: request.title } : {}),
+    ...(request.lunar !== undefined ? { words: request.lunar } : {}),
   });
-  const caption = diagramCaption(scene.title, request.eclipse, request.clock);
+  const caption = diagramCaption(scene.title, request.eclipse, request.clock, request.lunar);
   if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description, caption };
   const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
   return { bytes, svg: scene.svg, description: scene.description, caption };

@@ -19,6 +19,8 @@ import { composeSolarScene, type SolarScene } from '../figures/solarMap.ts';
 import { solarLocalCircumstances } from '../local/solar.ts';
 import { solarCaptionFile, solarMapCaptionWords, solarMarkWords } from '../words/solar/figures.ts';
 import { solarGeoJson } from './solarGeojson.ts';
+import { ENGLISH } from '../words/common.ts';
+import type { SolarWords } from '../words/solar/caution.ts';
 
 import type { MapFormat } from './formatNames.ts';
 export { MAP_FORMATS, type MapFormat } from './formatNames.ts';
@@ -71,6 +73,8 @@ export function markLabel(eclipse: LunarEclipse, place: PlaceLabel, mapClock?: C
 /** A solar eclipse's map: the same request, another eclipse. */
 export interface SolarMapRequest extends Omit<MapRequest, 'eclipse'> {
   readonly eclipse: SolarEclipse;
+  /** The reader's solar words: the map, its marks, caption and alt text (default English). */
+  readonly solar?: SolarWords;
 }
 
 export interface SolarMapFile {
@@ -93,33 +97,33 @@ export async function renderMapFile(request: MapRequest | SolarMapRequest): Prom
  * "Tromsø · total 11:05, 2 min 14 s", "Cairo · 63 % at 10:07", "Perth · not seen": what a place sees of a
  * solar eclipse with the Sun up, at its best moment, on the map's clock (or, given none, its own).
  */
-export function solarMarkLabel(eclipse: SolarEclipse, place: PlaceLabel, mapClock?: CivilClock): string {
+export function solarMarkLabel(eclipse: SolarEclipse, place: PlaceLabel, mapClock?: CivilClock, solar?: SolarWords): string {
   const local = solarLocalCircumstances(eclipse, { lonDeg: place.lonDeg, latDeg: place.latDeg });
-  const clock = mapClock ?? civilClock(place.tz);
+  const clock = mapClock ?? civilClock(place.tz, 'zone', (solar?.common ?? ENGLISH).clock);
   const when = (utDays: number) => (mapClock === undefined ? clock.stamp(utDays) : timeOnDay(clock, utDays, eclipse.greatest.utDays));
   const maximum = local.events.find((e) => e.event === 'maximum');
-  if (local.kind === 'none' || !maximum) return solarMarkWords(place.name, { kind: 'none', share: 0 });
+  if (local.kind === 'none' || !maximum) return solarMarkWords(place.name, { kind: 'none', share: 0 }, solar);
   if (maximum.sunUp) {
     return solarMarkWords(place.name, {
       kind: local.kind, share: local.obscurationSeen, time: when(maximum.moment.utDays),
       ...(local.kind !== 'partial' && local.centralSeconds !== undefined ? { centralSeconds: local.centralSeconds } : {}),
-    });
+    }, solar);
   }
   // The Sun is down at maximum: the best seen is as it rises into, or sets during, the eclipse.
   const edge = local.events.find((e) => e.event === 'sunrise' && e.moment.ttDays > maximum.moment.ttDays)
     ?? [...local.events].reverse().find((e) => e.event === 'sunset' && e.moment.ttDays < maximum.moment.ttDays);
-  if (!edge) return solarMarkWords(place.name, { kind: 'none', share: 0 });
-  return solarMarkWords(place.name, { kind: 'partial', share: local.obscurationSeen, time: when(edge.moment.utDays), at: edge.event as 'sunrise' | 'sunset' });
+  if (!edge) return solarMarkWords(place.name, { kind: 'none', share: 0 }, solar);
+  return solarMarkWords(place.name, { kind: 'partial', share: local.obscurationSeen, time: when(edge.moment.utDays), at: edge.event as 'sunrise' | 'sunset' }, solar);
 }
 
 async function renderSolarMapFile(request: SolarMapRequest): Promise<SolarMapFile> {
   const { eclipse, style } = request;
   // GeoJSON is the eclipse's geometry (outputs/solarGeojson.ts), with the caution on the collection and each feature.
-  if (request.format === 'geojson') return { bytes: Buffer.from(`${JSON.stringify(solarGeoJson(eclipse))}\n`) };
-  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: solarMarkLabel(eclipse, p, style.markClock === 'town' ? undefined : style.clock) }));
-  const scene = composeSolarScene({ eclipse, style, size: request.size, generator: request.generator, marks });
-  const caption = solarMapCaptionWords(eclipse, style.clock, scene.subtitle);
-  const captionFile = solarCaptionFile(caption.caption, caption.altText);
+  if (request.format === 'geojson') return { bytes: Buffer.from(`${JSON.stringify(solarGeoJson(eclipse, request.solar ? { solar: request.solar } : {}))}\n`) };
+  const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: solarMarkLabel(eclipse, p, style.markClock === 'town' ? undefined : style.clock, request.solar) }));
+  const scene = composeSolarScene({ eclipse, style, size: request.size, generator: request.generator, marks, ...(request.solar ? { words: request.solar } : {}) });
+  const caption = solarMapCaptionWords(eclipse, style.clock, scene.subtitle, request.solar);
+  const captionFile = solarCaptionFile(caption.caption, caption.altText, request.solar);
   if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene, caption, captionFile };
   const rasters = await rasteriseSet(scene.svg, [request.format], { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
   return { bytes: rasters.files.get(request.format)!, scene, caption, captionFile };

@@ -29,9 +29,9 @@ import { cityAt, cityCount, type CityRow } from '../places/geonames.ts';
 import { timeZoneOfPlace } from '../places/timeZone.ts';
 import { loadBasemap } from '../sphere/world.ts';
 import { greatestObscurationSeen, solarLocalCircumstances } from '../local/solar.ts';
-import { coordinatesText, countryName, listWords } from '../words/common.ts';
-import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
-import { minutesAndSeconds, percentWords, SOLAR_TEXT_ENGLISH, type SolarShareWord, type SolarTextWords } from '../words/solar/text.ts';
+import { coordinatesText, countryName, fixedIn, listWords } from '../words/common.ts';
+import { safetyScopeForEclipse, solarSafetyText, type SolarWords } from '../words/solar/caution.ts';
+import { minutesAndSeconds, percentWords, SOLAR_TEXT_ENGLISH, solarTextWords, type SolarShareWord, type SolarTextWords } from '../words/solar/text.ts';
 
 export interface SolarCaptionOptions {
   /** Zone of the caption's times (default UTC); cities' times are in their own zones. */
@@ -40,7 +40,8 @@ export interface SolarCaptionOptions {
   readonly extra?: string;
   /** How many of the largest cities to name (default 4; 0 for none). */
   readonly cities?: number;
-  readonly words?: SolarTextWords;
+  /** The reader's solar words (settings/language.ts): the caption's text and its caution; English when not given. */
+  readonly solar?: SolarWords;
 }
 
 /** A country the path crosses. */
@@ -266,9 +267,9 @@ function shareWord(share: number): SolarShareWord {
 
 /** The caption and alt text of one solar eclipse. */
 export function solarCaption(eclipse: SolarEclipse, options: SolarCaptionOptions = {}): SolarCaption {
-  const words = options.words ?? SOLAR_TEXT_ENGLISH;
+  const words = solarTextWords(options.solar);
   const w = words.caption;
-  const clock = options.clock ?? civilClock('UTC');
+  const clock = options.clock ?? civilClock('UTC', 'zone', words.common.clock);
   const list = (items: readonly string[]) => listWords(items, words.common);
   const at = eclipse.greatest.utDays;
   const title = w.title(eclipse.kind, clock.date(at));
@@ -278,11 +279,11 @@ export function solarCaption(eclipse: SolarEclipse, options: SolarCaptionOptions
   let pathSentence: string | undefined;
   const crossed = eclipse.kind === 'partial' ? [] : countriesCrossed(eclipse);
   if (eclipse.kind === 'partial') {
-    facts.push(w.partialOnly(eclipse.magnitude.toFixed(3)));
+    facts.push(w.partialOnly(fixedIn(eclipse.magnitude, 3, words.common)));
   } else if (!eclipse.central && eclipse.kind !== 'hybrid') {
     facts.push(w.nonCentral(eclipse.kind));
   } else {
-    const duration = eclipse.durations.centralSeconds !== undefined ? minutesAndSeconds(eclipse.durations.centralSeconds) : undefined;
+    const duration = eclipse.durations.centralSeconds !== undefined ? minutesAndSeconds(eclipse.durations.centralSeconds, words) : undefined;
     const central = w.centralFacts(eclipse.kind, duration, eclipse.pathWidthKm);
     if (central) facts.push(central);
   }
@@ -299,18 +300,18 @@ export function solarCaption(eclipse: SolarEclipse, options: SolarCaptionOptions
   const cities = citySights(eclipse, options.cities ?? 4);
   if (cities.length > 0) {
     const said = cities.map((c) => {
-      const local = civilClock(c.tz);
+      const local = civilClock(c.tz, 'zone', words.common.clock);
       const name = `${c.name} (${countryName({ code: c.country, name: c.country }, words.common)})`;
       if ((c.kind === 'total' || c.kind === 'annular') && c.centralSeconds !== undefined) {
-        return w.cityCentral(name, c.kind, minutesAndSeconds(c.centralSeconds), local.stamp(c.atUtDays));
+        return w.cityCentral(name, c.kind, minutesAndSeconds(c.centralSeconds, words), local.stamp(c.atUtDays));
       }
-      return w.cityPartial(name, percentWords(c.obscurationSeen), local.stamp(c.atUtDays), c.at === 'sunrise' || c.at === 'sunset' ? c.at : 'maximum');
+      return w.cityPartial(name, percentWords(c.obscurationSeen, words), local.stamp(c.atUtDays), c.at === 'sunrise' || c.at === 'sunset' ? c.at : 'maximum');
     });
     facts.push(`${w.citiesIntro} ${said.join('; ')}.`);
   }
   const scope = safetyScopeForEclipse(eclipse.kind);
-  const text = [...facts, ...(options.extra ? [options.extra] : []), words.common.predictions, solarSafetyText('long', scope)].join(' ');
-  const alt = [w.altText(eclipse.kind, clock.date(at), pathSentence, partialSentence), solarSafetyText('short', scope)].join(' ');
+  const text = [...facts, ...(options.extra ? [options.extra] : []), words.common.predictions, solarSafetyText('long', scope, options.solar)].join(' ');
+  const alt = [w.altText(eclipse.kind, clock.date(at), pathSentence, partialSentence), solarSafetyText('short', scope, options.solar)].join(' ');
   return { text, alt, crossed, partialContinents: continents, cities };
 }
 

@@ -14,6 +14,7 @@ import { solarDiscsAtMaximum, solarLocalCircumstances } from '../local/solar.ts'
 import { rasterise } from '../raster/raster.ts';
 import { solarDiagramCaption } from '../words/solar/diagram.ts';
 import type { DiagramFormat } from './diagramFile.ts';
+import type { SolarWords } from '../words/solar/caution.ts';
 
 export interface SolarDiagramRequest {
   readonly eclipse: SolarEclipse;
@@ -26,6 +27,8 @@ export interface SolarDiagramRequest {
   readonly format: DiagramFormat;
   readonly generator: string;
   readonly title?: string;
+  /** The reader's solar words (settings/language.ts); English when not given. The clock should speak the same language. */
+  readonly solar?: SolarWords;
 }
 
 export async function renderSolarDiagramFile(request: SolarDiagramRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
@@ -44,8 +47,9 @@ export async function renderSolarDiagramFile(request: SolarDiagramRequest): Prom
     size: request.size,
     generator: request.generator,
     ...(request.title !== undefined ? { title: request.title } : {}),
+    ...(request.solar !== undefined ? { words: request.solar } : {}),
   });
-  const caption = solarDiagramCaption(scene.title, scene.facts);
+  const caption = solarDiagramCaption(scene.title, scene.facts, request.solar);
   if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description, caption };
   const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
   return { bytes, svg: scene.svg, description: scene.description, caption };

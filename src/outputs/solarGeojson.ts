@@ -25,7 +25,7 @@ import { localMaximumTT, localShadow, type LocalShadow } from '../eclipses/solar
 import { geocentricPlace } from '../eclipses/solar/surface.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { placeGrid, traceRegion, type PlanarMultiPolygon } from '../sphere/regions.ts';
-import { safetyScopeForEclipse, solarSafetyText } from '../words/solar/caution.ts';
+import { safetyScopeForEclipse, solarSafetyText, type SolarWords } from '../words/solar/caution.ts';
 
 export const SOLAR_GEOMETRY_SCHEMA = 'umbracast.solar-geometry/1';
 /** Grid step for tracing the path, degrees (checked against the local circumstances in test/outputs/solarGeojson.test.ts). */
@@ -40,6 +40,8 @@ export interface SolarGeojsonOptions {
   readonly obscurationLevels?: readonly number[];
   /** Magnitudes (0 < m < 1) to draw curves of; default none. */
   readonly magnitudeLevels?: readonly number[];
+  /** The reader's solar words, for the caution the collection and each feature carry (default English); the keys stay. */
+  readonly solar?: SolarWords;
 }
 
 const DEG = 180 / Math.PI;
@@ -138,7 +140,7 @@ export function solarGeoJson(eclipse: SolarEclipse, options: SolarGeojsonOptions
   const obscurations = checkLevels(options.obscurationLevels ?? DEFAULT_OBSCURATION_LEVELS, 'obscurationLevels');
   const magnitudes = checkLevels(options.magnitudeLevels ?? [], 'magnitudeLevels');
   const scope = safetyScopeForEclipse(eclipse.kind);
-  const safetyShort = solarSafetyText('short', scope);
+  const safetyShort = solarSafetyText('short', scope, options.solar);
   const features: Feature<Geometry>[] = [];
   const add = (properties: Record<string, unknown>, geometry: Geometry) =>
     features.push({ type: 'Feature', properties: { ...properties, safety: safetyShort }, geometry });
@@ -197,7 +199,7 @@ export function solarGeoJson(eclipse: SolarEclipse, options: SolarGeojsonOptions
       deltaT: Math.round(eclipse.deltaT.seconds * 10) / 10,
       moonRadius: { penumbra: K_PENUMBRA, umbra: K_UMBRA },
       contours: 'at each place\'s maximum, the Sun up or not; the path where the Sun is up at maximum',
-      safety: solarSafetyText('long', scope),
+      safety: solarSafetyText('long', scope, options.solar),
     },
     features,
   };

@@ -14,13 +14,14 @@
  */
 import { stringify } from 'csv-stringify/sync';
 import { DATA_CALENDAR } from '../ephemeris/calendar.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
+import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import { isoSeconds, momentFromUT, type Moment } from '../ephemeris/time.ts';
 import { K_PENUMBRA, K_UMBRA } from '../eclipses/solar/constants.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { solarLocalCircumstances, type SolarLocalCircumstances, type SolarLocalEvent, type SolarLocalEventName } from '../local/solar.ts';
-import { safetyScopeForPlace, solarSafetyText, type SolarSafetyScope } from '../words/solar/caution.ts';
-import { clockSeconds, percentWords as percent, SOLAR_TEXT_ENGLISH, solarEventWords, solarLocalSummary } from '../words/solar/text.ts';
+import { coordinatesText, fixedIn } from '../words/common.ts';
+import { SOLAR_ENGLISH, safetyScopeForPlace, solarSafetyText, type SolarSafetyScope, type SolarWords } from '../words/solar/caution.ts';
+import { clockSeconds, percentWords as percent, solarEventWords, solarLocalSummary, solarTextWords, type SolarTextWords } from '../words/solar/text.ts';
 
 /** The summary and the duration words live with the solar reader text; re-exported for the library's face. */
 export { minutesAndSeconds, solarLocalSummary } from '../words/solar/text.ts';
@@ -35,14 +36,20 @@ export interface SolarLocalReport {
   /** The eye-safety caution for this place: totality seen here or not. */
   readonly safetyScope: SolarSafetyScope;
   readonly safety: string;
+  /** The reader's words: every format prints through them (JSON and CSV keep their English keys and codes). */
+  readonly words: SolarTextWords;
 }
 
 /** Everything the solar local formats print, for one eclipse and one place in its clock. */
-export function solarLocalReport(eclipse: SolarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }): SolarLocalReport {
-  const { place, clock } = chosen;
+export function solarLocalReport(eclipse: SolarEclipse, chosen: { place: PlaceLabel; clock: CivilClock }, solar: SolarWords = SOLAR_ENGLISH): SolarLocalReport {
+  const { place } = chosen;
+  const words = solarTextWords(solar);
+  const clock = chosen.clock.words === words.common.clock ? chosen.clock : civilClock(chosen.clock.zone, 'zone', words.common.clock);
   const local = solarLocalCircumstances(eclipse, { latDeg: place.latDeg, lonDeg: place.lonDeg });
   const safetyScope = safetyScopeForPlace(local.kind === 'total');
-  return { local, place, clock, summary: solarLocalSummary(local, clock, place.name), safetyScope, safety: solarSafetyText('long', safetyScope) };
+  return {
+    local, place, clock, summary: solarLocalSummary(local, clock, place.name, words), safetyScope, safety: solarSafetyText('long', safetyScope, solar), words,
+  };
 }
 
 // ---- data ---------------------------------------------------------------------------------------
@@ -107,50 +114,54 @@ function zoneHeader(report: SolarLocalReport): string {
 const HEADER_RIGHT = [false, false, false, false, true, true, false];
 
 function header(report: SolarLocalReport): string[] {
-  return ['Event', 'What happens', `Local (${zoneHeader(report)})`, 'UTC', 'Sun alt.', 'Sun az.', 'Sun up'];
+  return [...report.words.local.header(zoneHeader(report))];
 }
 
 function rows(report: SolarLocalReport): string[][] {
-  const { clock, local } = report;
+  const { clock, local, words } = report;
+  const label = words.local.eventLabel;
   return local.events.map((ev: SolarLocalEvent) => [
-    ev.event === 'maximum' ? 'Maximum' : ev.event === 'sunrise' ? 'Sunrise' : ev.event === 'sunset' ? 'Sunset' : ev.event,
-    solarEventWords(local.kind, ev.event),
+    ev.event === 'maximum' ? label.maximum : ev.event === 'sunrise' ? label.sunrise : ev.event === 'sunset' ? label.sunset : ev.event,
+    solarEventWords(local.kind, ev.event, words),
     `${clock.rfc3339(ev.moment.utDays).slice(0, 10)} ${clockSeconds(clock, ev.moment.utDays)}`,
     isoSeconds(ev.moment.utDays).slice(11, 19),
-    `${fixed(ev.sunAltitudeDeg, 1)}°`,
+    `${fixedIn(Number(fixed(ev.sunAltitudeDeg, 1)), 1, words.common)}°`,
     `${Math.round(ev.sunAzimuthDeg) % 360}°`,
-    ev.sunUp ? 'yes' : 'no',
+    ev.sunUp ? words.local.yes : words.local.no,
   ]);
 }
 
 function titleOf(report: SolarLocalReport): string {
-  const { local, place } = report;
-  const lat = `${Math.abs(place.latDeg).toFixed(2)}°${place.latDeg >= 0 ? 'N' : 'S'}`;
-  const lon = `${Math.abs(place.lonDeg).toFixed(2)}°${place.lonDeg >= 0 ? 'E' : 'W'}`;
-  const kind = local.eclipse.kind;
-  return `${kind[0]!.toUpperCase()}${kind.slice(1)} solar eclipse ${local.eclipse.id} from ${place.name} (${lat}, ${lon}; ${place.tz})`;
+  const { local, place, words } = report;
+  return words.local.title(local.eclipse.kind, local.eclipse.id, place.name, coordinatesText(place.latDeg, place.lonDeg, words.common), place.tz);
 }
 
-function seenWords(local: SolarLocalCircumstances): string {
-  const m = fixed(local.magnitude, 3);
-  const o = percent(local.obscuration);
+function seenWords(local: SolarLocalCircumstances, words: SolarTextWords): string {
+  const m = fixedIn(Number(fixed(local.magnitude, 3)), 3, words.common);
+  const o = percent(local.obscuration, words);
+  const seen = words.local.seen;
   switch (local.kind) {
-    case 'total': return `Seen here: total (magnitude ${m}).`;
-    case 'annular': return `Seen here: annular (magnitude ${m}, ${o} of the Sun's disc covered).`;
-    case 'partial': return `Seen here: partial (magnitude ${m}, ${o} of the Sun's disc covered at maximum).`;
-    case 'none': return 'Seen here: nothing.';
+    case 'total': return seen.total(m);
+    case 'annular': return seen.annular(m, o);
+    case 'partial': return seen.partial(m, o);
+    case 'none': return seen.none;
   }
 }
 
 function notes(report: SolarLocalReport): string[] {
-  const { clock, local } = report;
+  const { clock, local, words } = report;
+  const common = words.common;
   const first = local.events[0]?.moment.utDays ?? local.eclipse.greatest.utDays;
   const last = local.events[local.events.length - 1]?.moment.utDays ?? first;
+  const deltaT = local.eclipse.deltaT;
   return [
-    `Local time: ${clock.zoneDescriptionBetween(first, last)}. Times to the second. Sun altitude: its centre, with refraction (Saemundsson) from a true −1° up, geometric below; "up": upper limb above a sea-level horizon.`,
-    `Moon radius k1 = ${K_PENUMBRA} (penumbra: C1, C4, magnitude), k2 = ${K_UMBRA} (umbra and antumbra: C2, C3); smooth lunar limb, sea-level observer; ΔT ${local.eclipse.deltaT.seconds.toFixed(1)} s (${local.eclipse.deltaT.source}). Predictions: weather and the local horizon decide what is seen.`,
+    words.local.timeNote(clock.zoneDescriptionBetween(first, last)),
+    words.local.modelNote(decimalConstant(K_PENUMBRA, words), decimalConstant(K_UMBRA, words), fixedIn(deltaT.seconds, 1, common), common.deltaTSources[deltaT.source], common.predictions),
   ];
 }
+
+/** A constant as JavaScript prints it ("0.2725076"), in the language's decimal sign. */
+const decimalConstant = (value: number, words: SolarTextWords) => fixedIn(value, (String(value).split('.')[1] ?? '').length, words.common);
 
 /** Plain text: the caution first, then the title, the events, what is seen, the summary and the notes. */
 export function solarLocalTable(report: SolarLocalReport): string {
@@ -159,7 +170,7 @@ export function solarLocalTable(report: SolarLocalReport): string {
   const widths = head.map((h, i) => Math.max(h.length, ...body.map((r) => r[i]!.length)));
   const line = (cells: string[]) => cells.map((c, i) => (HEADER_RIGHT[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!))).join('  ').trimEnd();
   const table = body.length > 0 ? [line(head), line(widths.map((w) => '─'.repeat(w))), ...body.map(line), ''] : [];
-  return [`EYE SAFETY: ${report.safety}`, '', titleOf(report), '', ...table, seenWords(report.local), report.summary, '', ...notes(report), ''].join('\n');
+  return [`${report.words.local.safetyHeading.plain}: ${report.safety}`, '', titleOf(report), '', ...table, seenWords(report.local, report.words), report.summary, '', ...notes(report), ''].join('\n');
 }
 
 export function solarLocalMarkdown(report: SolarLocalReport): string {
@@ -174,12 +185,12 @@ export function solarLocalMarkdown(report: SolarLocalReport): string {
       ]
     : [];
   return [
-    `> **Eye safety:** ${escape(report.safety)}`,
+    `> **${report.words.local.safetyHeading.markdown}:** ${escape(report.safety)}`,
     '',
     `### ${escape(titleOf(report))}`,
     '',
     ...table,
-    escape(`${seenWords(report.local)} ${report.summary}`),
+    escape(`${seenWords(report.local, report.words)} ${report.summary}`),
     '',
     ...notes(report).map((n) => `<small>${escape(n)}</small>  `),
     '',
@@ -232,7 +243,8 @@ function sunUpStretches(local: SolarLocalCircumstances, start: SolarLocalEvent, 
  * §3.6). Every description ends with the caution.
  */
 export function solarLocalIcs(report: SolarLocalReport, generator: string): string {
-  const { local, place } = report;
+  const { local, place, words } = report;
+  const cal = words.calendar;
   const find = (name: SolarLocalEventName) => local.events.find((e) => e.event === name);
   const where = `${place.latDeg.toFixed(4)}_${place.lonDeg.toFixed(4)}`;
   const lines = ['BEGIN:VCALENDAR', 'VERSION:2.0', `PRODID:-//umbracast//${generator}//EN`, 'CALSCALE:GREGORIAN', 'METHOD:PUBLISH'];
@@ -246,14 +258,15 @@ export function solarLocalIcs(report: SolarLocalReport, generator: string): stri
       `SUMMARY:${icsText(summary)}`,
       `LOCATION:${icsText(place.name)}`,
       `GEO:${place.latDeg.toFixed(5)};${place.lonDeg.toFixed(5)}`,
-      `DESCRIPTION:${icsText(`${description} ${report.summary} EYE SAFETY: ${report.safety}`)}`,
+      `DESCRIPTION:${icsText(`${description} ${report.summary} ${words.local.safetyHeading.plain}: ${report.safety}`)}`,
       'TRANSP:TRANSPARENT',
       'END:VEVENT',
     );
-  const central = local.kind === 'total' || local.kind === 'annular' ? SOLAR_TEXT_ENGLISH.central[local.kind] : undefined;
+  // The UID keys stay as they were (data, not words); the titles are the reader's.
+  const central = local.kind === 'total' || local.kind === 'annular' ? local.kind : undefined;
   const phases = [
-    { key: 'partial', title: 'Partial phases of the solar eclipse', start: find('C1'), end: find('C4') },
-    ...(central ? [{ key: central, title: central === 'totality' ? 'Totality' : 'Annularity', start: find('C2'), end: find('C3') }] : []),
+    { key: 'partial', title: cal.partialTitle, start: find('C1'), end: find('C4') },
+    ...(central ? [{ key: central === 'total' ? 'totality' : 'annularity', title: cal.centralTitle[central], start: find('C2'), end: find('C3') }] : []),
   ];
   for (const phase of phases) {
     if (!phase.start || !phase.end) continue;
@@ -266,15 +279,15 @@ export function solarLocalIcs(report: SolarLocalReport, generator: string): stri
         `${local.eclipse.id}-solar-${phase.key}${k > 0 ? `-${k + 1}` : ''}-${where}`,
         from,
         to,
-        `${phase.title}${cut ? ' (Sun up)' : ''}`,
-        `${phase.title} of ${local.eclipse.id}${cut ? ' (the part with the Sun above the horizon)' : ''}; predictions, weather permitting.`,
+        `${phase.title}${cut ? cal.cutShort : ''}`,
+        cal.description(phase.title, local.eclipse.id, cut ? cal.cutLong : ''),
       );
     });
   }
   if (!lines.includes('BEGIN:VEVENT')) {
     const c1 = find('C1')?.moment ?? local.eclipse.contacts.P1!;
     const c4 = find('C4')?.moment ?? local.eclipse.contacts.P4!;
-    vevent(`${local.eclipse.id}-solar-not-seen-${where}`, c1, c4, `Solar eclipse, not visible from ${place.name}`, 'This entry only marks the date; there is nothing to see from here.');
+    vevent(`${local.eclipse.id}-solar-not-seen-${where}`, c1, c4, cal.notSeenTitle(place.name), cal.notSeenDescription);
   }
   lines.push('END:VCALENDAR');
   return `${lines.map(foldIcsLine).join('\r\n')}\r\n`;

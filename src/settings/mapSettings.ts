@@ -20,6 +20,7 @@ import { BBOX_EXPECTED, checkNumber, checkPixelSize, isBoundingBox, isLonLat, LA
 import { choosePlace } from './choose.ts';
 import { chooseLanguage, LANGUAGES } from './language.ts';
 import type { LunarWords } from '../words/lunar/text.ts';
+import type { SolarWords } from '../words/solar/caution.ts';
 
 /** A title longer than this would not fit any page we draw. */
 export const MAX_TITLE_CHARS = 300;
@@ -137,6 +138,8 @@ export interface MapSettings {
   readonly marks: readonly PlaceLabel[];
   /** The caption's and mark labels' words, in the reader's language (the map's own are style.words). */
   readonly words: LunarWords;
+  /** A solar map's words, all of them, in the reader's language. */
+  readonly solar: SolarWords;
 }
 
 export function mapSettings(choices: MapChoices): MapSettings {
@@ -157,6 +160,10 @@ export function mapSettings(choices: MapChoices): MapSettings {
   const fitPath = choices.preset === 'card' && choices.projection === 'equal-earth' && choices.bbox === undefined && choices.centre === undefined;
   const inset = choices.inset === undefined ? 'none' : checkChoice('inset', choices.inset, MAP_INSETS);
   // English maps carry no words in their style, as before languages were offered.
-  const words = language.tag === 'en' && language.lunar === LANGUAGES.en.lunar ? {} : { words: language.lunar.figures };
-  return { style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}), ...(inset !== 'none' ? { inset } : {}), ...words }, size, dpi, marks, words: language.lunar };
+  const english = language.tag === 'en' && language.lunar === LANGUAGES.en.lunar;
+  const words = english ? {} : { words: language.lunar.figures, ...(inset !== 'none' && language.lunar.diagram ? { diagramWords: language.lunar.diagram } : {}) };
+  return {
+    style: { theme, view, borders, clock, markClock, areaNames, ...(title !== undefined ? { title } : {}), ...(fitPath ? { fitPath } : {}), ...(inset !== 'none' ? { inset } : {}), ...words },
+    size, dpi, marks, words: language.lunar, solar: language.solar,
+  };
 }

@@ -35,8 +35,8 @@ export function registerCaption(program: Command, context: CommandContext): void
       if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
       if (eclipse.body === 'solar') {
         const [{ solarCaption, solarCaptionText }, { solarLocalReport }] = await Promise.all([import('../../outputs/solarCaption.ts'), import('../../outputs/solarLocal.ts')]);
-        const extra = chosen ? solarLocalReport(eclipse, chosen).summary : undefined;
-        context.stdout(solarCaptionText(solarCaption(eclipse, { clock, ...(extra ? { extra } : {}) })));
+        const extra = chosen ? solarLocalReport(eclipse, chosen, language.solar).summary : undefined;
+        context.stdout(solarCaptionText(solarCaption(eclipse, { clock, solar: language.solar, ...(extra ? { extra } : {}) }), language.solar.text));
         return;
       }
       // The geometry (world data, the visibility model) loads when a caption is written.

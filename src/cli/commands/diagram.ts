@@ -11,7 +11,8 @@ import { chooseEclipseOfBody, choosePlace } from '../../settings/choose.ts';
 import { solarGreatestPointName } from '../../words/solar/diagram.ts';
 import { checkTitle, pageSize } from '../../settings/mapSettings.ts';
 import { flagOf } from '../flags.ts';
-import { withEclipseOptions, withPlaceOptions } from '../declare.ts';
+import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
+import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
 import { eclipseChoiceFromFlags, pageChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags, type SizeFlags } from '../readFlags.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import type { CommandContext } from '../context.ts';
@@ -25,6 +26,7 @@ interface DiagramOptions extends SizeFlags, PlaceFlags, EclipseFlags {
   title?: string;
   output?: string;
   format?: string;
+  lang?: string;
 }
 
 const DEFAULT_SIZE = { widthPx: 1600, heightPx: 1000 };
@@ -40,15 +42,18 @@ export function registerDiagram(program: Command, context: CommandContext): void
     .option('--theme <name>', THEME_NAMES.join(', '), 'light')
     .option('--title <text>', 'replace the generated title');
   withSizeOptions(command, `${DEFAULT_SIZE.widthPx}x${DEFAULT_SIZE.heightPx}`);
-  withEclipseOptions(command
+  withLanguageOption(withEclipseOptions(command
     .option('-o, --output <file>', 'output file; .png, .svg, .webp or .jpg (default out/<id>-<kind>-diagram.png); its caption is written beside it (.txt)')
-    .option('--format <name>', SKY_FORMATS.join(', ')))
+    .option('--format <name>', SKY_FORMATS.join(', '))))
     .action(async (whenText: string | undefined, options: DiagramOptions) => {
       const theme = THEMES[parseChoice('--theme', options.theme, THEME_NAMES)];
       const { size, dpi } = pageSize(pageChoiceFromFlags(options), DEFAULT_SIZE);
       checkTitle(options.title);
       const body = options.body === undefined ? 'all' : parseChoice('--body', options.body, DIAGRAM_BODIES);
       const eclipse = chooseEclipseOfBody(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), body);
+      const language = chooseLanguage(options.lang, flagOf('lang'));
+      checkLanguageForBodies(language, [eclipse.body], 'lang', 'diagram');
+      const clockWords = language.common.clock;
       const placeChoice = placeChoiceFromFlags(options);
       const generator = `umbracast ${toolVersion()}`;
       const titleOption = options.title !== undefined ? { title: options.title } : {};
@@ -63,22 +68,22 @@ export function registerDiagram(program: Command, context: CommandContext): void
         path = output.path;
         if (chosen.notice) context.stderr(`${chosen.notice}\n`);
         const { renderSolarDiagramFile } = await import('../../outputs/solarDiagramFile.ts');
-        const placeName = given ? chosen.place.name : solarGreatestPointName(chosen.place.name);
+        const placeName = given ? chosen.place.name : solarGreatestPointName(chosen.place.name, language.solar);
         file = await renderSolarDiagramFile({
           eclipse,
           place: { name: placeName, latDeg: chosen.place.latDeg, lonDeg: chosen.place.lonDeg, parameter: placeChoice.at !== undefined ? 'at' : 'place' },
-          clock: chosen.clock, theme, size, dpi, format: output.format, generator, ...titleOption,
+          clock: civilClock(chosen.clock.zone, 'zone', clockWords), theme, size, dpi, format: output.format, generator, ...titleOption, solar: language.solar,
         });
       } else {
         // Times in UTC unless a zone is given, or a place whose zone is taken.
         const chosen = choosePlace(placeChoice, false, 'place', flagOf('place'));
-        const clock = chosen?.clock ?? civilClock(options.tz === undefined ? 'UTC' : options.tz.trim());
+        const clock = civilClock(chosen?.clock.zone ?? (options.tz === undefined ? 'UTC' : options.tz.trim()), 'zone', clockWords);
         const output = parseOutput(options, `${eclipse.id}-${eclipse.kind}-diagram`, SKY_FORMATS);
         path = output.path;
         if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
         // The drawing code loads when a figure is drawn, not with the command line.
         const { renderDiagramFile } = await import('../../outputs/diagramFile.ts');
-        file = await renderDiagramFile({ eclipse, clock, theme, size, dpi, format: output.format, generator, ...titleOption });
+        file = await renderDiagramFile({ eclipse, clock, theme, size, dpi, format: output.format, generator, ...titleOption, lunar: language.lunar });
       }
       await writeFileAtomic(path, file.bytes);
       // Every picture gets its caption beside it.

@@ -36,6 +36,6 @@ export function registerList(program: Command, context: CommandContext): void {
       const eclipses = findEclipses({ ...search, ...range }).filter((e) => kinds === undefined || kinds.includes(e.kind));
       const doc = catalogueDocument(eclipses, { convention: choice.convention, deltaTModel: search.deltaT!.name, ...range });
       if (format === 'table') checkLanguageForBodies(language, eclipses.map((e) => e.body));
-      context.stdout(format === 'table' ? catalogueTable(doc, body, language.lunar) : format === 'json' ? catalogueJson(doc) : catalogueCsv(doc));
+      context.stdout(format === 'table' ? catalogueTable(doc, body, language.lunar, language.solar) : format === 'json' ? catalogueJson(doc) : catalogueCsv(doc));
     });
 }

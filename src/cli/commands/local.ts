@@ -38,7 +38,7 @@ export function registerLocal(program: Command, context: CommandContext): void {
 /** One place's report in a format, for an eclipse of either body: each body's own renderers, never the other's words. */
 function renderLocal(eclipse: Eclipse, chosen: ChosenPlace, format: (typeof LOCAL_FORMATS)[number], language: Language): string {
   if (eclipse.body === 'solar') {
-    const solar = solarLocalReport(eclipse, chosen);
+    const solar = solarLocalReport(eclipse, chosen, language.solar);
     switch (format) {
       case 'table': return solarLocalTable(solar);
       case 'markdown': return solarLocalMarkdown(solar);

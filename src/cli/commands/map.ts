@@ -133,7 +133,8 @@ export async function runMap(whenText: string | undefined, options: MapFlags & B
   const eclipseChoice = eclipseChoiceFromFlags(options, style?.eclipse);
   // --body (default all): a date names the eclipse it falls on or near, of either kind (near both: an input error naming both).
   const eclipse = chooseEclipse(when, eclipseChoice, context.now(), bodyFromFlags(options));
-  checkLanguageForBodies(chooseLanguage(choices.lang), [eclipse.body]);
+  // A language is refused where its words for this output are not written yet (the inset: the diagram's words).
+  checkLanguageForBodies(chooseLanguage(choices.lang), [eclipse.body], 'lang', settings.style.inset === 'diagram' && eclipse.body === 'lunar' ? 'diagram' : undefined);
   const solar = eclipse.body === 'solar';
   // A solar card shows the path by default: its file says so.
   const stem = `${eclipse.id}-${eclipse.kind}${solar && settings.style.fitPath ? '-path' : viewStem(settings.style.view)}`;

@@ -44,6 +44,24 @@ export interface SolarTextWords {
     readonly width: (km: string) => string;
     readonly saros: (n: number) => string;
     readonly noMap: string;
+    /** A solar card's thumbnail alt text; `kind` is one of `kind` above ("total solar"). */
+    readonly thumbnailAlt: (kind: string, date: string) => string;
+    /** A lunar card's kind on a sheet holding solar eclipses too: "total lunar" (`kind`: the lunar catalogue's "total"). */
+    readonly lunarKind: (kind: string) => string;
+  };
+  /** The list table when it holds solar eclipses (with lunar ones or alone): the columns read across both kinds. */
+  readonly list: {
+    /** The twelve column heads: date, body, kind, greatest (UTC), magnitude, penumbral mag., gamma, in umbra, totality, central, path, saros. */
+    readonly header: readonly [string, string, string, string, string, string, string, string, string, string, string, string];
+    readonly body: { readonly lunar: string; readonly solar: string };
+    readonly kind: Readonly<Record<SolarKindWord, string>>;
+    readonly eclipses: (lunar: number, solar: number) => string;
+    readonly solarEclipses: (count: number) => string;
+    readonly magnitudeNote: string;
+    readonly solarNote: (k1: string, k2: string) => string;
+    /** The central phase in the table's compact form: "4m 28s" (`seconds` already two digits). */
+    readonly central: (minutes: string, seconds: string) => string;
+    readonly pathWidth: (km: string) => string;
   };
   /** A central phase's length: "4 min 28 s" (`seconds` already two digits), and under a minute "52 s". */
   readonly minutesSeconds: { readonly minutes: (minutes: string, seconds: string) => string; readonly seconds: (seconds: string) => string };
@@ -142,6 +160,20 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
     width: (km) => `path ${km} km wide`,
     saros: (n) => `saros ${n}`,
     noMap: 'Caption and GeoJSON geometry; no map picture yet.',
+    thumbnailAlt: (kind, date) => `Map of the ${kind} eclipse of ${date}`,
+    lunarKind: (kind) => `${kind} lunar`,
+  },
+  list: {
+    header: ['Date', 'Body', 'Kind', 'Greatest (UTC)', 'Magnitude', 'Penumbral mag.', 'Gamma', 'In umbra', 'Totality', 'Central', 'Path', 'Saros'],
+    body: { lunar: 'Moon', solar: 'Sun' },
+    kind: { total: 'total', annular: 'annular', hybrid: 'hybrid', partial: 'partial' },
+    eclipses: (lunar, solar) => `${lunar} lunar and ${solar} solar ${lunar + solar === 1 ? 'eclipse' : 'eclipses'}`,
+    solarEclipses: (count) => `${count} solar ${count === 1 ? 'eclipse' : 'eclipses'}`,
+    magnitudeNote: 'Magnitude: of the umbra for the Moon; of the Sun\'s diameter covered, at the greatest point, for the Sun.',
+    solarNote: (k1, k2) =>
+      `Sun: central = totality or annularity on the central line at greatest eclipse, path = its width there; Moon radius k1 = ${k1} (penumbra), k2 = ${k2} (umbra and antumbra).`,
+    central: (minutes, seconds) => `${minutes}m ${seconds}s`,
+    pathWidth: (km) => `${km} km`,
   },
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },
   percent: (value) => `${value} %`,

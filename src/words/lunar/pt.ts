@@ -10,7 +10,8 @@ import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
-const plural = new Intl.PluralRules('pt');
+// The plural rules of the Portuguese this catalogue is written in ("0 eclipses"; CLDR's bare "pt" counts 0 as singular).
+const plural = new Intl.PluralRules('pt-PT');
 const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 
 const FIGURES: LunarFigureWords = {

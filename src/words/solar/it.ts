@@ -152,6 +152,22 @@ export const SOLAR_TEXT_ITALIAN: SolarTextWords = {
     width: (km) => `fascia larga ${km} km`,
     saros: (n) => `saros ${n}`,
     noMap: 'Didascalia e geometria GeoJSON; per ora nessuna immagine della mappa.',
+    // `kind` is one of `kind` above: "Mappa dell’eclissi totale di Sole del 12 agosto 2026".
+    thumbnailAlt: (kind, date) => `Mappa dell’eclissi ${kind} ${ofDate(date)}`,
+    lunarKind: (kind) => `${kind} di Luna`,
+  },
+  list: {
+    header: ['Data', 'Astro', 'Tipo', 'Massimo (UTC)', 'Magnitudine', 'Mag. penombrale', 'Gamma', 'Nell’ombra', 'Totalità', 'Centrale', 'Fascia', 'Saros'],
+    body: { lunar: 'Luna', solar: 'Sole' },
+    kind: { total: 'totale', annular: 'anulare', hybrid: 'ibrida', partial: 'parziale' },
+    // "eclissi" is the same in the singular and the plural.
+    eclipses: (lunar, solar) => `${lunar} eclissi di Luna e ${solar} di Sole`,
+    solarEclipses: (count) => `${count} eclissi di Sole`,
+    magnitudeNote: 'Magnitudine: per la Luna, quella d’ombra; per il Sole, la frazione del suo diametro coperta, nel punto di massimo dell’eclissi.',
+    solarNote: (k1, k2) =>
+      `Sole: centrale = totalità o anularità sulla linea centrale, al massimo dell’eclissi; fascia = la sua larghezza in quel punto; raggio lunare k1 = ${k1} (penombra), k2 = ${k2} (ombra e antiombra).`,
+    central: (minutes, seconds) => `${minutes}min ${seconds}s`,
+    pathWidth: (km) => `${km} km`,
   },
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },
   percent: (value) => `${value} %`,

@@ -15,6 +15,9 @@ import type { SolarDiagramWords } from './diagram.ts';
 import type { SolarFigureWords } from './figures.ts';
 import type { SolarKindWord, SolarTextWords } from './text.ts';
 
+// The plural rules of the Portuguese this catalogue is written in ("0 eclipses"; CLDR's bare "pt" counts 0 as singular).
+const plural = new Intl.PluralRules('pt-PT');
+const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 const list = (items: readonly string[]) => listWords(items, COMMON_PORTUGUESE);
 const number = (text: string) => decimalIn(text, COMMON_PORTUGUESE);
 /** The Sun's altitude below the horizon, said as a depth: "com o Sol 4° abaixo do horizonte". */
@@ -139,6 +142,21 @@ export const SOLAR_TEXT_PORTUGUESE: SolarTextWords = {
     width: (km) => `faixa de ${km} km de largura`,
     saros: (n) => `saros ${n}`,
     noMap: 'Legenda e geometria GeoJSON; ainda sem imagem do mapa.',
+    // `kind` is one of `kind` above: "Mapa do eclipse total do Sol de 12 de agosto de 2026".
+    thumbnailAlt: (kind, date) => `Mapa do eclipse ${kind} de ${date}`,
+    lunarKind: (kind) => `${kind} da Lua`,
+  },
+  list: {
+    header: ['Data', 'Astro', 'Tipo', 'Máximo (UTC)', 'Magnitude', 'Mag. penumbral', 'Gama', 'Na umbra', 'Totalidade', 'Central', 'Faixa', 'Saros'],
+    body: { lunar: 'Lua', solar: 'Sol' },
+    kind: { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' },
+    eclipses: (lunar, solar) => `${counted(lunar, 'eclipse da Lua', 'eclipses da Lua')} e ${counted(solar, 'eclipse do Sol', 'eclipses do Sol')}`,
+    solarEclipses: (count) => counted(count, 'eclipse do Sol', 'eclipses do Sol'),
+    magnitudeNote: 'Magnitude: para a Lua, a da umbra; para o Sol, a fração do seu diâmetro coberta, no ponto de máximo do eclipse.',
+    solarNote: (k1, k2) =>
+      `Sol: central = totalidade ou fase anular na linha central, no máximo do eclipse; faixa = a sua largura nesse ponto; raio da Lua k1 = ${k1} (penumbra), k2 = ${k2} (umbra e antumbra).`,
+    central: (minutes, seconds) => `${minutes}min ${seconds}s`,
+    pathWidth: (km) => `${km} km`,
   },
   minutesSeconds: { minutes: (minutes, seconds) => `${minutes} min ${seconds} s`, seconds: (seconds) => `${seconds} s` },
   percent: (value) => `${value} %`,

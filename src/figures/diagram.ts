@@ -38,6 +38,9 @@ export interface DiagramScene {
   readonly pxPerRad: number;
   readonly labelPlates: readonly Box[];
   readonly body: Box;
+  /** For tests, page pixels: the timetable as drawn, its heading included; and the page's room for it (margins and footer aside). */
+  readonly timetable: Box;
+  readonly room: Box;
 }
 
 const ARCMIN_RAD = Math.PI / (180 * 60);
@@ -65,7 +68,10 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const zoneName = clock.zoneDescriptionBetween(first, last);
   const clocksChange = clock.offsetChanges(first, last).length > 0;
   const timeText = (utDays: number) => (clocksChange ? clock.stamp(utDays, greatestUt) : timeOnDay(clock, utDays, greatestUt));
-  const { title, subtitle, smallPrint } = diagramTexts(eclipse, clock, timeText, zoneName, input.generator, FONT_CREDIT, input.title, input.words);
+  // A title too long for the page's width (a square page) gives way to the short one, never cut.
+  const sizing = layoutFor(size);
+  const fits = (text: string) => measureText(text, sizing.titleStyle) <= W - 2 * sizing.margin;
+  const { title, subtitle, smallPrint } = diagramTexts(eclipse, clock, timeText, zoneName, input.generator, FONT_CREDIT, input.title, input.words, fits);
   const words = lunarDiagramWords(input.words);
 
   const unitOf = layoutFor(size).unit;
@@ -98,7 +104,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const rowStyle = layout.legendStyle;
   const headStyle = { sizePx: layout.legendStyle.sizePx * 1.05, weight: 'semibold' as const };
   const rowText = moments.map((m) => ({ ...m, label: m.key === 'greatest' ? words.greatest : m.key, time: timeText(m.utDays), words: words.moments[m.key] }));
-  const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rowText, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.45);
+  const { keyWidth, timeWidth, gap, rowHeight, tableWidth, tableHeight, bodyBottom, side, plot, table } = timetableLayout(rowText, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.45);
 
   // Scale: the whole path with its Moon, and the penumbra, fit inside the plot with room for labels.
   const moonRad = diagram.greatest.moonSemiDiameterRad;
@@ -206,7 +212,9 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   out.push(textElement(moonAcrossWords((2 * moonRad) / ARCMIN_RAD, input.words), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
 
   // The timetable.
-  out.push(textElement(words.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  const heading = words.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt));
+  out.push(textElement(heading, table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  const timetable = { left: table.left, top: table.top, right: table.left + Math.max(tableWidth, measureText(heading, headStyle)), bottom: table.top + tableHeight };
   rowText.forEach((r, i) => {
     const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
     const strong = r.key === 'greatest';
@@ -223,6 +231,8 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
     pxPerRad,
     labelPlates,
     body: { left: plot.left, top: plot.top, right: W - margin, bottom: bodyBottom },
+    timetable,
+    room: { left: margin, top: page.headerBottom, right: W - margin, bottom: bodyBottom },
   };
 }
 

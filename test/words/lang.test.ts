@@ -7,7 +7,18 @@
  */
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
-import { LANGUAGES, LANGUAGE_TAGS, chooseLanguage, type Language } from '../../src/settings/language.ts';
+import { LANGUAGES, LANGUAGE_TAGS, chooseLanguage, hasSolarWords, type Language } from '../../src/settings/language.ts';
+import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solarLocalReport, solarLocalTable } from '../../src/outputs/solarLocal.ts';
+import { solarCaption, solarCaptionText } from '../../src/outputs/solarCaption.ts';
+import { solarMarkLabel } from '../../src/outputs/mapFile.ts';
+import { contourLabel, riseSetLabel, solarLegendWords } from '../../src/words/solar/figures.ts';
+import { solarDiagramCaption } from '../../src/words/solar/diagram.ts';
+import { diagramCaption } from '../../src/words/lunar/diagram.ts';
+import { composeSolarDiagramScene } from '../../src/figures/solar/diagram.ts';
+import { composeDiagramScene } from '../../src/figures/diagram.ts';
+import { shadowDiagram } from '../../src/eclipses/lunar/diagram.ts';
+import { solarDiscsAtMaximum, solarLocalCircumstances } from '../../src/local/solar.ts';
+import { solarEclipseOn } from '../eclipses/solarSupport.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { InputError } from '../../src/errors.ts';
 import { listWords, type CommonWords } from '../../src/words/common.ts';
@@ -322,5 +333,158 @@ test('sky figures in every language: no English in the title, summary, small pri
     const texts = [title, file.description, file.caption].join('\n');
     assert.deepEqual(leaks(texts, language), [], `${tag}:\n${texts}`);
     assert.ok(measureText(title, layoutFor({ widthPx: 1600, heightPx: 900 }).titleStyle) <= 1600 - 2 * layoutFor({ widthPx: 1600, heightPx: 900 }).margin, `${tag}: ${title}`);
+  }
+});
+
+// ---- the solar words and the shadow diagrams -------------------------------------------------
+// These iterate over every language: a language whose solar or diagram words are written is checked in
+// full; until then it is refused for those outputs (checkLanguageForBodies, tested in langCli.test.ts).
+
+const SOLAR_READY = OTHERS.filter((tag) => hasSolarWords(LANGUAGES[tag]));
+const LUNAR_DIAGRAM_READY = OTHERS.filter((tag) => LANGUAGES[tag].lunar.diagram !== undefined);
+
+/** Places of our own choosing (positions, zones): totality, an annular phase, partial phases, the Sun down throughout, outside the shadow. */
+const SOLAR_CASES = [
+  { id: '2026-08-12', name: 'Kestrel Ridge (test)', latDeg: 64.15, lonDeg: -21.94, tz: 'Atlantic/Reykjavik' },
+  { id: '2027-08-02', name: 'Night Notes office (test)', latDeg: 25.69, lonDeg: 32.64, tz: 'Africa/Cairo' },
+  { id: '2024-10-02', name: 'Rapa Nui (test)', latDeg: -27.1, lonDeg: -109.4, tz: 'Pacific/Easter' },
+  { id: '2024-04-08', name: 'Front Range (test)', latDeg: 39.74, lonDeg: -104.99, tz: 'America/Denver' },
+  { id: '2026-08-12', name: 'Aegean shore (test)', latDeg: 37.98, lonDeg: 23.73, tz: 'Europe/Athens' },
+  { id: '2026-08-12', name: 'Harbour city (test)', latDeg: -33.87, lonDeg: 151.21, tz: 'Australia/Sydney' },
+] as const;
+
+/** Every text of one place's solar outputs in a language: the local formats, the caption with the place's summary, a map mark. */
+function solarTexts(c: (typeof SOLAR_CASES)[number], language: Language): Record<string, string> {
+  const eclipse = solarEclipseOn(c.id);
+  const place = { name: c.name, latDeg: c.latDeg, lonDeg: c.lonDeg, tz: c.tz };
+  const report = solarLocalReport(eclipse, { place, clock: civilClock(c.tz) }, language.solar);
+  const json = JSON.parse(solarLocalJson(report)) as { summary: string; safety: string };
+  const clock = civilClock('UTC', 'zone', language.common.clock);
+  return {
+    table: solarLocalTable(report),
+    markdown: solarLocalMarkdown(report).replace(/<\/?small>/g, ''), // the HTML element is markup, not words
+    ics: icsReadable(solarLocalIcs(report, 'umbracast test')),
+    json: `${json.summary} ${json.safety}`,
+    csvSafety: solarLocalCsv(report).split('\n')[1]!,
+    caption: solarCaptionText(solarCaption(eclipse, { clock, solar: language.solar, extra: report.summary, cities: 2 }), language.solar.text),
+    mark: solarMarkLabel(eclipse, place, undefined, language.solar),
+  };
+}
+
+test('the sanity of the solar leak check: English solar outputs are full of English phrases, so the check can fail (the English catalogue itself)', () => {
+  const texts = solarTexts(SOLAR_CASES[0], LANGUAGES.en);
+  assert.ok(leaks(texts.table!, LANGUAGES.es).length > 5, texts.table);
+  assert.ok(leaks(texts.caption!, LANGUAGES.fr).length > 5);
+});
+
+test('solar local tables, markdown, calendars, JSON, CSV caution, captions and map marks carry no English in any language that has the solar words (the English catalogue\'s phrases)', () => {
+  for (const tag of SOLAR_READY) {
+    const language = LANGUAGES[tag];
+    for (const c of SOLAR_CASES) {
+      for (const [name, text] of Object.entries(solarTexts(c, language))) assert.deepEqual(leaks(text, language), [], `${tag} ${c.id} ${c.name} ${name}:\n${text}`);
+    }
+  }
+});
+
+test('the solar words in every language that has them: ISO 12312-2 named in the local formats, the caption and the map caption; numbers in the language\'s decimal sign (ISO 12312-2; ECMA-402)', async () => {
+  for (const tag of ['en', ...SOLAR_READY] as const) {
+    const language = LANGUAGES[tag];
+    const texts = solarTexts(SOLAR_CASES[1], language);
+    for (const name of ['table', 'markdown', 'ics', 'json', 'caption'] as const) assert.match(texts[name]!, /ISO 12312-2/, `${tag} ${name}`);
+    const sign = new Intl.NumberFormat(language.common.locale).formatToParts(0.5).find((p) => p.type === 'decimal')!.value;
+    // The place's magnitude, three decimals: over 1 in the path of the 2027 August 2 total eclipse (from memory: Luxor is near its central line).
+    assert.match(texts.table!, new RegExp(`1\\${sign}0\\d\\d`), tag);
+  }
+});
+
+const SIZES = [{ widthPx: 1200, heightPx: 675 }, { widthPx: 1080, heightPx: 1080 }, { widthPx: 2126, heightPx: 1318 }, { widthPx: 1600, heightPx: 1000 }];
+
+test('solar maps at card, square and print in every language that has the solar words: no English in the title, subtitle, caution, small print, legend, line labels, marks or caption; the title whole, every legend entry within the page (the English catalogue\'s phrases; the layout\'s own measures)', async () => {
+  const eclipse = solarEclipseOn('2026-08-12');
+  for (const tag of ['en', ...SOLAR_READY] as const) {
+    const language = LANGUAGES[tag];
+    for (const preset of PRESETS) {
+      const settings = mapSettings({ ...DEFAULT_MAP_CHOICES, preset, lang: tag, marks: ['Bilbao'], dpi: preset === 'print' ? 150 : undefined } as never);
+      const file = await renderMapFile({ eclipse, ...settings, format: 'svg', generator: 'umbracast test' });
+      const scene = file.scene!;
+      const { widthPx: W } = settings.size;
+      const layout = layoutFor(settings.size);
+      const legend = solarLegendWords(eclipse, 'UTC', language.solar);
+      const legendEntries = [...legend.ramp, ...Object.values(legend).filter((v): v is string => typeof v === 'string')];
+      const labels = [contourLabel(0.4, language.solar), riseSetLabel('C1', 'sunrise', language.solar), riseSetLabel('C4', 'sunset', language.solar)];
+      if (tag !== 'en') {
+        const drawn = [scene.title, scene.subtitle, scene.caution, scene.smallPrint, ...legendEntries, ...labels, file.captionFile!].join('\n');
+        assert.deepEqual(leaks(drawn, language), [], `${tag} ${preset}:\n${drawn}`);
+      }
+      assert.ok(measureText(scene.title, layout.titleStyle) <= W - 2 * layout.margin, `${tag} ${preset}: title ${scene.title}`);
+      for (const entry of legendEntries) assert.ok(measureText(entry, layout.legendStyle) + 40 * layout.unit <= W - 2 * layout.margin, `${tag} ${preset}: ${entry}`);
+      for (const line of scene.cautionLines) assert.ok(line.x >= 0 && line.x + measureText(line.text, line.style) <= W, `${tag} ${preset}: caution line off the page`);
+      assert.ok(scene.cautionLines.length > 0 && scene.cautionLines.every((l) => l.y <= scene.headerBottom), `${tag} ${preset}: the caution in the header band`);
+    }
+  }
+});
+
+/** The timetable inside the page's room, the title whole, every legend entry within the page. */
+function assertDiagramFits(scene: { title: string; timetable: Box; room: Box }, legend: readonly string[], size: { widthPx: number; heightPx: number }, what: string) {
+  const layout = layoutFor(size);
+  assert.ok(measureText(scene.title, layout.titleStyle) <= size.widthPx - 2 * layout.margin, `${what}: title ${scene.title}`);
+  for (const entry of legend) assert.ok(measureText(entry, layout.legendStyle) + 40 * layout.unit <= size.widthPx - 2 * layout.margin, `${what}: ${entry}`);
+  const { timetable: t, room } = scene;
+  assert.ok(t.left >= room.left && t.right <= room.right && t.top >= room.top && t.bottom <= room.bottom, `${what}: timetable ${JSON.stringify(t)} outside ${JSON.stringify(room)}`);
+}
+
+test('the solar diagram in every language that has its words, every preset: no English in the title, description or caption; title, legend and timetable within their room (the English catalogue\'s phrases; the layout\'s own measures)', () => {
+  for (const tag of ['en', ...SOLAR_READY] as const) {
+    const language = LANGUAGES[tag];
+    for (const c of SOLAR_CASES.slice(0, 4)) {
+      const eclipse = solarEclipseOn(c.id);
+      const observer = { latDeg: c.latDeg, lonDeg: c.lonDeg };
+      for (const size of SIZES) {
+        const scene = composeSolarDiagramScene({
+          local: solarLocalCircumstances(eclipse, observer), discs: solarDiscsAtMaximum(eclipse, observer), placeName: c.name,
+          clock: civilClock(c.tz, 'zone', language.common.clock), theme: THEMES.light, size, generator: 'umbracast test', words: language.solar,
+        });
+        const w = language.solar.diagram!;
+        const what = `${tag} ${c.id} ${size.widthPx}x${size.heightPx}`;
+        if (tag !== 'en') {
+          const texts = [scene.title, scene.description, solarDiagramCaption(scene.title, scene.facts, language.solar), ...Object.values(w.moments), ...Object.values(w.legend)].join('\n');
+          assert.deepEqual(leaks(texts, language), [], `${what}:\n${texts}`);
+        }
+        assertDiagramFits(scene, Object.values(w.legend), size, what);
+      }
+    }
+  }
+});
+
+test('the sanity of the diagram leak checks: the English diagrams\' words are caught (the English catalogue itself)', () => {
+  const eclipse = eclipseOn('2025-03-14');
+  const english = composeDiagramScene({ diagram: shadowDiagram(eclipse), clock: civilClock('UTC'), theme: THEMES.light, size: SIZES[0]!, generator: 'umbracast test' });
+  assert.ok(leaks(`${english.title}\n${english.description}`, LANGUAGES.de).length > 3);
+  const c = SOLAR_CASES[0];
+  const solar = solarEclipseOn(c.id);
+  const observer = { latDeg: c.latDeg, lonDeg: c.lonDeg };
+  const englishSolar = composeSolarDiagramScene({
+    local: solarLocalCircumstances(solar, observer), discs: solarDiscsAtMaximum(solar, observer), placeName: c.name, clock: civilClock(c.tz), theme: THEMES.light, size: SIZES[0]!, generator: 'umbracast test',
+  });
+  assert.ok(leaks(`${englishSolar.title}\n${englishSolar.description}`, LANGUAGES.it).length > 3);
+});
+
+test('the lunar shadow diagram in every language that has its words, every preset: no English in the title, description, caption or inset heading; title, legend and timetable within their room (the English catalogue\'s phrases; the layout\'s own measures)', () => {
+  for (const tag of ['en', ...LUNAR_DIAGRAM_READY] as const) {
+    const language = LANGUAGES[tag];
+    for (const date of ['2025-03-14', '2026-08-28', '2027-02-20']) {
+      const eclipse = eclipseOn(date);
+      for (const size of SIZES) {
+        const clock = civilClock('Australia/Adelaide', 'zone', language.common.clock);
+        const scene = composeDiagramScene({ diagram: shadowDiagram(eclipse), clock, theme: THEMES.light, size, generator: 'umbracast test', words: language.lunar });
+        const w = language.lunar.diagram!;
+        const what = `${tag} ${date} ${size.widthPx}x${size.heightPx}`;
+        if (tag !== 'en') {
+          const texts = [scene.title, scene.description, diagramCaption(scene.title, eclipse, clock, language.lunar), w.inset.heading, ...Object.values(w.moments), ...Object.values(w.legend)].join('\n');
+          assert.deepEqual(leaks(texts, language), [], `${what}:\n${texts}`);
+        }
+        assertDiagramFits(scene, Object.values(w.legend), size, what);
+      }
+    }
   }
 });

@@ -5,7 +5,7 @@
  * contact sheet's <html lang> (HTML Living Standard, §3.2.6.2).
  */
 import assert from 'node:assert/strict';
-import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { test } from 'node:test';
@@ -125,4 +125,54 @@ test('a solar eclipse in a language whose solar words are not written yet is ref
   }
   // The lunar eclipses of the same year are fine in every language.
   for (const tag of LANGUAGE_TAGS) assert.equal((await run(['list', '--from', '2026', '--to', '2026', '--lang', tag, '--body', 'lunar'])).code, 0, tag);
+});
+
+test('diagram --lang: a language with the diagram words draws the figure and its caption in it; one without is refused in one line naming --lang, exit 2, nothing written (the catalogues decide)', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-lang-diagram-'));
+  try {
+    const english = { lunar: '', solar: '' };
+    for (const tag of LANGUAGE_TAGS) {
+      const language = LANGUAGES[tag];
+      for (const [body, when, ready] of [['lunar', '2026-03-03', language.lunar.diagram !== undefined], ['solar', '2026-08-12', hasSolarWords(language)]] as const) {
+        const out = join(dir, `${tag}-${body}.svg`);
+        const { code, stdout, stderr } = await run(['diagram', when, '--body', body, '--place', 'Bilbao', '--lang', tag, '-o', out]);
+        if (!ready) {
+          assert.equal(code, 2, `${tag} ${body}`);
+          assert.equal(stdout, '');
+          assert.equal(stderr.split('\n').length, 2, stderr);
+          assert.match(stderr, new RegExp(`^umbracast: --lang: expected en.* for (the shadow diagram|an output holding a solar eclipse) .*received "${tag}"\\n$`));
+          assert.ok(!existsSync(out) && !existsSync(out.replace(/\.svg$/, '.txt')), `${tag} ${body}: nothing written`);
+          continue;
+        }
+        assert.equal(code, 0, `${tag} ${body}: ${stderr}`);
+        const caption = readFileSync(out.replace(/\.svg$/, '.txt'), 'utf8');
+        // The caption ends with the language's own alt-text wording, and differs from the English one.
+        if (tag === 'en') english[body] = caption;
+        else assert.notEqual(caption, english[body], `${tag} ${body}`);
+        if (body === 'solar') assert.match(caption, /ISO 12312-2/, `${tag}: the caution (ISO 12312-2)`);
+        else assert.ok(caption.includes(language.lunar.diagram!.caption.altText('north').slice(0, 12)), `${tag} lunar: the language's alt text\n${caption}`);
+      }
+    }
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+});
+
+test('map --inset diagram --lang: refused in one line naming --lang where the language lacks the diagram words, drawn where it has them (the catalogues decide)', async () => {
+  const dir = mkdtempSync(join(tmpdir(), 'umbracast-lang-inset-'));
+  try {
+    for (const tag of LANGUAGE_TAGS) {
+      const out = join(dir, `${tag}.svg`);
+      const { code, stderr } = await run(['map', '2026-03-03', '--inset', 'diagram', '--lang', tag, '-o', out]);
+      if (LANGUAGES[tag].lunar.diagram === undefined) {
+        assert.equal(code, 2, tag);
+        assert.match(stderr, new RegExp(`^umbracast: --lang: expected en.* for the shadow diagram .*received "${tag}"\\n$`));
+        assert.ok(!existsSync(out));
+      } else {
+        assert.equal(code, 0, `${tag}: ${stderr}`);
+      }
+    }
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
 });

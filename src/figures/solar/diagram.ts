@@ -39,6 +39,9 @@ export interface SolarDiagramScene {
   readonly sun: { readonly x: number; readonly y: number; readonly r: number };
   readonly moon: { readonly x: number; readonly y: number; readonly r: number };
   readonly body: Box;
+  /** For tests, page pixels: the timetable as drawn, its heading included; and the page's room for it (margins and footer aside). */
+  readonly timetable: Box;
+  readonly room: Box;
 }
 
 const ARCMIN_RAD = Math.PI / (180 * 60);
@@ -97,7 +100,7 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
     time: clocksChange ? clock.stamp(e.moment.utDays, discs.maximum.utDays) : timeOnDay(clock, e.moment.utDays, discs.maximum.utDays),
     words: `${words.moments[e.event]} · ${solarSunAltitudeWords(e.sunAltitudeDeg, input.words)}`,
   }));
-  const { keyWidth, timeWidth, gap, rowHeight, bodyBottom, side, plot, table } = timetableLayout(rows, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.5);
+  const { keyWidth, timeWidth, gap, rowHeight, tableWidth, tableHeight, bodyBottom, side, plot, table } = timetableLayout(rows, rowStyle, headStyle, { W, H, margin, unit, contentWidth, headerBottom: page.headerBottom, footerHeight: page.footerHeight }, 0.5);
 
   // Scale: the Sun and the whole Moon fit the plot, centred on the pair, with room for the compass and scale bar.
   const moonR = discs.moonRadiusSunRadii;
@@ -149,7 +152,9 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   out.push(textElement(words.sunAcross(fixedIn((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD, 1, words.common)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
 
   // The timetable.
-  out.push(textElement(words.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays)), table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  const heading = words.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays));
+  out.push(textElement(heading, table.left, table.top + headStyle.sizePx, headStyle, theme.text));
+  const timetable = { left: table.left, top: table.top, right: table.left + Math.max(tableWidth, measureText(heading, headStyle)), bottom: table.top + tableHeight };
   rows.forEach((r, i) => {
     const y = table.top + headStyle.sizePx * 2 + (i + 0.75) * rowHeight;
     const strong = r.key === 'maximum';
@@ -166,5 +171,7 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
     sun,
     moon,
     body: { left: plot.left, top: plot.top, right: W - margin, bottom: bodyBottom },
+    timetable,
+    room: { left: margin, top: page.headerBottom, right: W - margin, bottom: bodyBottom },
   };
 }

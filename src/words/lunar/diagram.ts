@@ -39,6 +39,8 @@ export interface LunarDiagramWords {
   /** "Total", as the title starts. */
   readonly kindTitle: Readonly<Record<LunarEclipse['kind'], string>>;
   readonly title: (kindTitle: string, date: string) => string;
+  /** The title where the full one does not fit the page's width (a square page): the kind and the date alone. */
+  readonly shortTitle: (kindTitle: string, date: string) => string;
   /** How deep the eclipse goes: the magnitude the subtitle quotes. */
   readonly depth: { readonly penumbral: (magnitude: string) => string; readonly umbral: (magnitude: string) => string };
   /** Its longest phase, as the subtitle quotes it. */
@@ -90,6 +92,7 @@ export const LUNAR_DIAGRAM_ENGLISH: LunarDiagramWords = {
   timesHeading: (zone) => `Times (${zone ?? 'each with its zone'})`,
   kindTitle: { total: 'Total', partial: 'Partial', penumbral: 'Penumbral' },
   title: (kindTitle, date) => `${kindTitle} lunar eclipse of ${date}: through the Earth's shadow`,
+  shortTitle: (kindTitle, date) => `${kindTitle} lunar eclipse of ${date}`,
   depth: { penumbral: (m) => `penumbral magnitude ${m}`, umbral: (m) => `umbral magnitude ${m}` },
   longest: { totality: (d) => `totality ${d}`, partial: (d) => `partial phase ${d}`, penumbral: (d) => `penumbral phase ${d}` },
   subtitle: (time, depth, longest, zone) => `The Moon's path across the shadow, deepest at ${time} (${depth}, ${longest}). Times: ${zone}.`,
@@ -131,15 +134,19 @@ export function moonAcrossWords(arcmin: number, lunar?: LunarWords): string {
   return w.moonAcross(fixedIn(arcmin, 1, w.common));
 }
 
-/** Title, subtitle and small print. `timeText` prints an instant as the figure does; `zoneName` names the clock. */
+/**
+ * Title, subtitle and small print. `timeText` prints an instant as the figure does; `zoneName` names the clock;
+ * `fits` tells whether a title fits the page's width (else the short title is used).
+ */
 export function diagramTexts(
   eclipse: LunarEclipse, clock: CivilClock, timeText: (utDays: number) => string, zoneName: string, generator: string, font: string,
-  customTitle?: string, lunar?: LunarWords,
+  customTitle?: string, lunar?: LunarWords, fits: (title: string) => boolean = () => true,
 ) {
   const w = lunarDiagramWords(lunar);
   const common = w.common;
   const figures = printedFigures(eclipse);
-  const title = customTitle ?? w.title(w.kindTitle[eclipse.kind], clock.date(eclipse.greatest.utDays));
+  const full = w.title(w.kindTitle[eclipse.kind], clock.date(eclipse.greatest.utDays));
+  const title = customTitle ?? (fits(full) ? full : w.shortTitle(w.kindTitle[eclipse.kind], clock.date(eclipse.greatest.utDays)));
   const depth = eclipse.kind === 'penumbral' ? w.depth.penumbral(decimalIn(figures.penumbralMagnitude, common)) : w.depth.umbral(decimalIn(figures.umbralMagnitude, common));
   const duration = (seconds: number) => formatDuration(seconds, 'long', common);
   const longest = eclipse.durations.totalSeconds !== undefined ? w.longest.totality(duration(eclipse.durations.totalSeconds))

@@ -107,6 +107,7 @@ const DIAGRAM: LunarDiagramWords = {
   timesHeading: (zone) => `Orari (${zone ?? 'ciascuno con il suo fuso'})`,
   kindTitle: { total: 'totale', partial: 'parziale', penumbral: 'penombrale' },
   title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}: attraverso l’ombra della Terra`,
+  shortTitle: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}`,
   depth: { penumbral: (m) => `magnitudine penombrale ${m}`, umbral: (m) => `magnitudine d’ombra ${m}` },
   longest: { totality: (d) => `totalità ${d}`, partial: (d) => `fase parziale ${d}`, penumbral: (d) => `fase penombrale ${d}` },
   subtitle: (time, depth, longest, zone) => `Il percorso della Luna attraverso l’ombra, con il massimo alle ${time} (${depth}, ${longest}). Orari: ${zone}.`,

@@ -105,6 +105,7 @@ const DIAGRAM: LunarDiagramWords = {
   timesHeading: (zone) => `Horas (${zone ?? 'cada uma com o seu fuso'})`,
   kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   title: (kindTitle, date) => `Eclipse ${kindTitle} da Lua de ${date}: através da sombra da Terra`,
+  shortTitle: (kindTitle, date) => `Eclipse ${kindTitle} da Lua de ${date}`,
   depth: { penumbral: (m) => `magnitude penumbral ${m}`, umbral: (m) => `magnitude umbral ${m}` },
   longest: { totality: (d) => `totalidade ${d}`, partial: (d) => `fase parcial ${d}`, penumbral: (d) => `fase penumbral ${d}` },
   subtitle: (time, depth, longest, zone) => `O percurso da Lua através da sombra, com o máximo às ${time} (${depth}, ${longest}). Horas: ${zone}.`,

@@ -38,6 +38,12 @@ const belowHorizon = (altitude: string) => {
   return /^0(\D|$)/.test(depth) ? 'con il Sole sull’orizzonte' : `con il Sole ${depth}° sotto l’orizzonte`;
 };
 
+/** "da Oviedo", but "dal punto di massimo": the figure's own name for a place carries its article, which joins the preposition. */
+const fromPlace = (place: string) => (place.startsWith('il ') ? `dal ${place.slice(3)}` : `da ${place}`);
+/** A position written "65.22°N 25.28°W" put in this language's decimal sign and hemisphere letters: "65,22°N, 25,28°O". */
+const position = (text: string) => text.replace(/(\d+(?:\.\d+)?)°([NS]),? (\d+(?:\.\d+)?)°([EW])/, (_all, lat: string, ns: string, lon: string, ew: string) =>
+  `${number(lat)}°${ns === 'N' ? COMMON_ITALIAN.hemispheres.north : COMMON_ITALIAN.hemispheres.south}, ${number(lon)}°${ew === 'E' ? COMMON_ITALIAN.hemispheres.east : COMMON_ITALIAN.hemispheres.west}`);
+
 /** "eclissi totale di Sole"; the hybrid kind says what it is in brackets, after the noun. */
 const KIND: Record<SolarKindWord, string> = { total: 'totale', annular: 'anulare', hybrid: 'ibrida', partial: 'parziale' };
 const eclipseOfTheSun = (kind: SolarKindWord) => `eclissi ${KIND[kind]} di Sole${kind === 'hybrid' ? ' (totale e anulare)' : ''}`;
@@ -240,22 +246,22 @@ const DIAGRAM: SolarDiagramWords = {
   timesHeading: (zone) => `Orari (${zone ?? 'ciascuno con il suo fuso'})`,
   sunAltitude: { up: (degrees) => `Sole a ${degrees}°`, down: 'Sole sotto l’orizzonte' },
   kind: { total: 'totale', annular: 'anulare', hybrid: 'ibrida', partial: 'parziale' },
-  title: (date, kind, place) => `${date}: eclissi ${kind} di Sole vista da ${place}`,
+  title: (date, kind, place) => `${date}: eclissi ${kind} di Sole vista ${fromPlace(place)}`,
   percent: (value) => `${value} %`,
   atMaximum: (stamp, sunAltitude, magnitude, obscuration) =>
     `Al massimo, alle ${stamp}${sunAltitude === undefined ? ' (con il Sole sotto l’orizzonte)' : `, con il Sole alto ${sunAltitude}°`}: magnitudine ${magnitude}, oscuramento ${ofThePercent(obscuration)} del disco solare.`,
   elsewhere: (kind) => `Altrove l’eclissi è ${kind}.`,
   smallPrint: {
-    drawn: (place) => `Il Sole e la Luna visti da ${place} al massimo, in scala: nord in alto, verso il polo celeste della data; est a sinistra, come appare il cielo a chi lo guarda.`,
+    drawn: (place) => `Il Sole e la Luna visti ${fromPlace(place)} al massimo, in scala: nord in alto, verso il polo celeste della data; est a sinistra, come appare il cielo a chi lo guarda.`,
     terms: 'Magnitudine: la frazione del diametro del Sole coperta; oscuramento: la frazione del suo disco.',
     times: (zone, deltaT, source) => `Orari in ${zone}, 24 ore. ΔT ${deltaT} s (${source}).`,
     credits: (font, generator) => `Carattere: ${font}. Realizzato con ${generator}.`,
   },
-  greatestPoint: (position) => `il punto di massimo dell’eclissi (${position})`,
+  greatestPoint: (where) => `il punto di massimo (${position(where)})`,
   caption: {
-    summary: (time, obscuration, place, magnitude) => `Alle ${time} la Luna copre ${thePercent(obscuration)} del disco solare visto da ${place} (magnitudine ${magnitude}).`,
+    summary: (time, obscuration, place, magnitude) => `Alle ${time} la Luna copre ${thePercent(obscuration)} del disco solare visto ${fromPlace(place)} (magnitudine ${magnitude}).`,
     altText: (place, positionAngle) =>
-      `Schema del disco del Sole con davanti il disco scuro della Luna, in scala, come appare da ${place} al massimo; il centro della Luna è all’angolo di posizione ${positionAngle}°, contato da nord verso est; nord in alto, est a sinistra, e accanto l’elenco degli orari dell’eclissi.`,
+      `Schema del disco del Sole con davanti il disco scuro della Luna, in scala, come appare ${fromPlace(place)} al massimo; il centro della Luna è all’angolo di posizione ${positionAngle}°, contato da nord verso est; nord in alto, est a sinistra, e accanto l’elenco degli orari dell’eclissi.`,
     file: (title, summary, caution, altText) => `${title}. ${summary}\n\n${caution}\n\nTesto alternativo: ${altText}\n`,
   },
 };

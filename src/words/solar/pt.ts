@@ -25,6 +25,11 @@ const belowHorizon = (altitude: string) => {
   const depth = altitude.replace(/^[-−]/, '');
   return /^0(\D|$)/.test(depth) ? 'com o Sol no horizonte' : `com o Sol ${depth}° abaixo do horizonte`;
 };
+/** "de Oviedo", but "do ponto de máximo": the figure's own name for a place carries its article, which contracts. */
+const fromPlace = (place: string) => (place.startsWith('o ') ? `do ${place.slice(2)}` : `de ${place}`);
+/** A position written "65.22°N 25.28°W" put in this language's decimal sign and hemisphere letters: "65,22°N, 25,28°O". */
+const position = (text: string) => text.replace(/(\d+(?:\.\d+)?)°([NS]),? (\d+(?:\.\d+)?)°([EW])/, (_all, lat: string, ns: string, lon: string, ew: string) =>
+  `${number(lat)}°${ns === 'N' ? COMMON_PORTUGUESE.hemispheres.north : COMMON_PORTUGUESE.hemispheres.south}, ${number(lon)}°${ew === 'E' ? COMMON_PORTUGUESE.hemispheres.east : COMMON_PORTUGUESE.hemispheres.west}`);
 /** A share that rounds to "0 %" is said as less than one percent. */
 const underOne = (percent: string) => (/^0(\D|$)/.test(percent) ? 'menos de 1 %' : percent);
 
@@ -229,22 +234,23 @@ const DIAGRAM: SolarDiagramWords = {
   timesHeading: (zone) => `Horas (${zone ?? 'cada uma com o seu fuso'})`,
   sunAltitude: { up: (degrees) => `Sol a ${degrees}°`, down: 'Sol abaixo do horizonte' },
   kind: { total: 'total', annular: 'anular', hybrid: 'híbrido', partial: 'parcial' },
-  title: (date, kind, place) => `${date}: eclipse ${kind} do Sol visto de ${place}`,
+  // "em Oviedo" (shorter than "visto de", so that a square page holds the title whole); "no ponto de máximo".
+  title: (date, kind, place) => `${date}: eclipse ${kind} do Sol ${place.startsWith('o ') ? `no ${place.slice(2)}` : `em ${place}`}`,
   percent: (value) => `${value} %`,
   atMaximum: (stamp, sunAltitude, magnitude, obscuration) =>
     `No máximo, às ${stamp}${sunAltitude === undefined ? ' (com o Sol abaixo do horizonte)' : `, com o Sol a ${sunAltitude}° de altura`}: magnitude ${magnitude}, obscurecimento de ${obscuration} do disco solar.`,
   elsewhere: (kind) => `Noutros locais, o eclipse é ${kind}.`,
   smallPrint: {
-    drawn: (place) => `O Sol e a Lua vistos de ${place} no máximo, à escala: norte para cima, na direção do polo celeste da data; este à esquerda, como se vê o céu quando se está voltado para ele.`,
+    drawn: (place) => `O Sol e a Lua vistos ${fromPlace(place)} no máximo, à escala: norte para cima, na direção do polo celeste da data; este à esquerda, como se vê o céu quando se está voltado para ele.`,
     terms: 'Magnitude: a fração do diâmetro do Sol coberta; obscurecimento: a fração do seu disco.',
     times: (zone, deltaT, source) => `Horas em ${zone}, relógio de 24 horas. ΔT ${deltaT} s (${source}).`,
     credits: (font, generator) => `Tipo de letra: ${font}. Feito com ${generator}.`,
   },
-  greatestPoint: (position) => `o ponto de máximo do eclipse (${position})`,
+  greatestPoint: (where) => `o ponto de máximo (${position(where)})`,
   caption: {
-    summary: (time, obscuration, place, magnitude) => `Às ${time}, a Lua cobre ${obscuration} do disco do Sol visto de ${place} (magnitude ${magnitude}).`,
+    summary: (time, obscuration, place, magnitude) => `Às ${time}, a Lua cobre ${obscuration} do disco do Sol visto ${fromPlace(place)} (magnitude ${magnitude}).`,
     altText: (place, positionAngle) =>
-      `Diagrama do disco do Sol com o disco escuro da Lua à sua frente, à escala, tal como se vê de ${place} no máximo; o centro da Lua está no ângulo de posição ${positionAngle}°, contado do norte para este; norte para cima, este à esquerda, e ao lado a lista das horas do eclipse.`,
+      `Diagrama do disco do Sol com o disco escuro da Lua à sua frente, à escala, tal como se vê ${fromPlace(place)} no máximo; o centro da Lua está no ângulo de posição ${positionAngle}°, contado do norte para este; norte para cima, este à esquerda, e ao lado a lista das horas do eclipse.`,
     file: (title, summary, caution, altText) => `${title}. ${summary}\n\n${caution}\n\nTexto alternativo: ${altText}\n`,
   },
 };

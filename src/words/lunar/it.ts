@@ -12,6 +12,8 @@ import type { LunarWords } from './text.ts';
 
 const plural = new Intl.PluralRules('it');
 const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
+/** "del 3 marzo 2026", "dell’8 novembre 2022": the article elides before otto and undici. */
+const ofDate = (date: string) => (/^(8|11)\s/.test(date) ? `dell’${date}` : `del ${date}`);
 
 const FIGURES: LunarFigureWords = {
   common: COMMON_ITALIAN,
@@ -78,9 +80,6 @@ const FIGURES: LunarFigureWords = {
     file: (title, summary, alt) => `${title}. ${summary}\n\nTesto alternativo: ${alt}\n`,
   },
 };
-
-/** "del 3 marzo 2026", "dell’8 novembre 2022": the article elides before otto and undici. */
-const ofDate = (date: string) => (/^(8|11)\s/.test(date) ? `dell’${date}` : `del ${date}`);
 
 /** Lo schema della Luna attraverso l’ombra della Terra, la sua didascalia e il titolo del riquadro sulla mappa. */
 const DIAGRAM: LunarDiagramWords = {
@@ -222,7 +221,7 @@ export const LUNAR_ITALIAN: LunarWords = {
     },
   },
   caption: {
-    title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna del ${date}.`,
+    title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}.`,
     penumbralFacts: (stamp, magnitude, duration, span) =>
       `Massimo dell’eclissi alle ${stamp}, magnitudine penombrale ${magnitude}; la Luna resta ${duration} nella penombra (${span}), un lieve oscuramento.`,
     umbralFacts: (stamp, magnitude, totality, duration, span) =>
@@ -242,7 +241,7 @@ export const LUNAR_ITALIAN: LunarWords = {
     somewhere: 'alcune parti del mondo',
     including: (names) => `, tra cui ${names}`,
     hidden: (where) => `Non è visibile in ${where}.`,
-    altText: (kind, date, parts, hidden) => `Mappa del mondo che mostra dove si vede l’eclissi ${kind} di Luna del ${date}: ${parts}${hidden === undefined ? '' : `; non in ${hidden}`}.`,
+    altText: (kind, date, parts, hidden) => `Mappa del mondo che mostra dove si vede l’eclissi ${kind} di Luna ${ofDate(date)}: ${parts}${hidden === undefined ? '' : `; non in ${hidden}`}.`,
     file: (caption, altText) => `${caption}\n\nTesto alternativo: ${altText}\n`,
   },
   sheet: {
@@ -257,7 +256,8 @@ export const LUNAR_ITALIAN: LunarWords = {
     inUmbra: (duration) => `nell’ombra ${duration}`,
     penumbralPhase: (duration) => `fase penombrale ${duration}`,
     saros: (n) => `saros ${n}`,
-    thumbnailAlt: (kind, date) => `Mappa di visibilità dell’eclissi ${kind} di Luna del ${date}`,
+    // On a sheet holding both kinds the card's kind already says "di Luna" (the solar words' lunarKind): said once.
+    thumbnailAlt: (kind, date) => `Mappa di visibilità dell’eclissi ${kind.replace(/ di Luna$/, '')} di Luna ${ofDate(date)}`,
     eclipses: (count) => counted(count, 'eclissi', 'eclissi'),
     header: (counted, zone, styleHash, tool) => `${counted} · date e orari in ${zone} · stile ${styleHash} · ${tool}`,
     credits: 'Mappa di base: Natural Earth tramite world-atlas (pubblico dominio). Luoghi: GeoNames (CC BY 4.0). Vedi manifest.json e catalogue.csv.',

@@ -254,7 +254,8 @@ export const LUNAR_PORTUGUESE: LunarWords = {
     inUmbra: (duration) => `na umbra ${duration}`,
     penumbralPhase: (duration) => `fase penumbral ${duration}`,
     saros: (n) => `saros ${n}`,
-    thumbnailAlt: (kind, date) => `Mapa de visibilidade do eclipse ${kind} da Lua de ${date}`,
+    // On a sheet holding both kinds the card's kind already says "da Lua" (the solar words' lunarKind): said once.
+    thumbnailAlt: (kind, date) => `Mapa de visibilidade do eclipse ${kind.replace(/ da Lua$/, '')} da Lua de ${date}`,
     eclipses: (count) => counted(count, 'eclipse', 'eclipses'),
     header: (counted, zone, styleHash, tool) => `${counted} · datas e horas em ${zone} · estilo ${styleHash} · ${tool}`,
     credits: 'Mapa de base: Natural Earth via world-atlas (domínio público). Locais: GeoNames (CC BY 4.0). Ver manifest.json e catalogue.csv.',

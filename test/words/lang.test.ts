@@ -19,6 +19,9 @@ import { composeDiagramScene } from '../../src/figures/diagram.ts';
 import { shadowDiagram } from '../../src/eclipses/lunar/diagram.ts';
 import { solarDiscsAtMaximum, solarLocalCircumstances } from '../../src/local/solar.ts';
 import { solarEclipseOn } from '../eclipses/solarSupport.ts';
+import { catalogueDocument } from '../../src/outputs/catalogueRecord.ts';
+import { catalogueTable } from '../../src/outputs/catalogueFormats.ts';
+import { findEclipses } from '../../src/eclipses/kinds.ts';
 import { civilClock } from '../../src/ephemeris/civilTime.ts';
 import { InputError } from '../../src/errors.ts';
 import { listWords, type CommonWords } from '../../src/words/common.ts';
@@ -365,7 +368,7 @@ function solarTexts(c: (typeof SOLAR_CASES)[number], language: Language): Record
     markdown: solarLocalMarkdown(report).replace(/<\/?small>/g, ''), // the HTML element is markup, not words
     ics: icsReadable(solarLocalIcs(report, 'umbracast test')),
     json: `${json.summary} ${json.safety}`,
-    csvSafety: solarLocalCsv(report).split('\n')[1]!,
+    csvSafety: solarLocalCsv(report).split('\n')[1]!.replace(/^safety,+/, ''), // the row's code is data; its note the reader's
     caption: solarCaptionText(solarCaption(eclipse, { clock, solar: language.solar, extra: report.summary, cities: 2 }), language.solar.text),
     mark: solarMarkLabel(eclipse, place, undefined, language.solar),
   };
@@ -487,4 +490,64 @@ test('the lunar shadow diagram in every language that has its words, every prese
       }
     }
   }
+});
+
+// ---- pseudo-localisation: every word from a catalogue ---------------------------------------------
+
+/**
+ * A pseudo-language (pseudo-localisation, common practice in software localisation): the English catalogues
+ * with every word they write upper-cased, the locales kept for Intl. An output made with it that still holds
+ * a lower-case English catalogue phrase took that phrase from somewhere other than the catalogue.
+ */
+function shouted<T>(value: T, key = ''): T {
+  if (key === 'locale') return value;
+  if (typeof value === 'string') return value.toUpperCase() as T;
+  if (typeof value === 'function') {
+    return ((...args: unknown[]) => {
+      const made = (value as (...a: unknown[]) => unknown)(...args);
+      return typeof made === 'string' ? made.toUpperCase() : Array.isArray(made) ? made.map((m) => (typeof m === 'string' ? m.toUpperCase() : m)) : made;
+    }) as T;
+  }
+  if (Array.isArray(value)) return value.map((v) => shouted(v)) as T;
+  if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, shouted(v, k)])) as T;
+  return value;
+}
+const PSEUDO: Language = { ...shouted(LANGUAGES.en), tag: 'en', lunar: { ...shouted(LANGUAGES.en.lunar), body: 'lunar' }, solar: { ...shouted(LANGUAGES.en.solar), body: 'solar' } };
+
+test('pseudo-localisation (common practice): with every catalogue word upper-cased, no lower-case English catalogue phrase is left in the solar local formats, captions, marks, solar map, list table, or the solar and lunar diagrams', async () => {
+  const check = (what: string, text: string) => assert.deepEqual(leaks(text, PSEUDO), [], `${what}:\n${text}`);
+  // The check can fail: the same outputs in English are caught.
+  assert.ok(leaks(Object.values(solarTexts(SOLAR_CASES[0], LANGUAGES.en)).join('\n'), PSEUDO).length > 5);
+  for (const c of SOLAR_CASES) for (const [name, text] of Object.entries(solarTexts(c, PSEUDO))) check(`${c.id} ${c.name} ${name}`, text);
+  const eclipse = solarEclipseOn('2026-08-12');
+  for (const preset of PRESETS) {
+    const settings = mapSettings({ ...DEFAULT_MAP_CHOICES, preset, marks: ['Bilbao'], dpi: preset === 'print' ? 150 : undefined } as never);
+    const file = await renderMapFile({ eclipse, ...settings, solar: PSEUDO.solar, format: 'svg', generator: 'umbracast test' });
+    const scene = file.scene!;
+    const legend = solarLegendWords(eclipse, 'UTC', PSEUDO.solar);
+    check(`map ${preset}`, [scene.title, scene.subtitle, scene.caution, scene.smallPrint, file.captionFile!, ...legend.ramp, ...Object.values(legend).filter((v) => typeof v === 'string'),
+      contourLabel(0.4, PSEUDO.solar), riseSetLabel('C4', 'sunset', PSEUDO.solar)].join('\n'));
+    const geojson = await renderMapFile({ eclipse, ...settings, solar: PSEUDO.solar, format: 'geojson', generator: 'umbracast test' });
+    // GeoJSON is data in one schema (its keys and notes stay); the caution it carries is the reader's.
+    check(`geojson ${preset}`, (JSON.parse(Buffer.from(geojson.bytes).toString()) as { umbracast: { safety: string } }).umbracast.safety);
+  }
+  for (const c of SOLAR_CASES.slice(0, 4)) {
+    const solar = solarEclipseOn(c.id);
+    const observer = { latDeg: c.latDeg, lonDeg: c.lonDeg };
+    const scene = composeSolarDiagramScene({
+      local: solarLocalCircumstances(solar, observer), discs: solarDiscsAtMaximum(solar, observer), placeName: c.name, clock: civilClock(c.tz), theme: THEMES.light,
+      size: SIZES[0]!, generator: 'umbracast test', words: PSEUDO.solar,
+    });
+    check(`solar diagram ${c.id}`, [scene.title, scene.description, solarDiagramCaption(scene.title, scene.facts, PSEUDO.solar)].join('\n'));
+  }
+  for (const date of ['2025-03-14', '2027-02-20']) {
+    const lunar = eclipseOn(date);
+    for (const size of SIZES) {
+      const scene = composeDiagramScene({ diagram: shadowDiagram(lunar), clock: civilClock('UTC'), theme: THEMES.light, size, generator: 'umbracast test', words: PSEUDO.lunar });
+      check(`lunar diagram ${date} ${size.widthPx}`, [scene.title, scene.description, diagramCaption(scene.title, lunar, civilClock('UTC'), PSEUDO.lunar)].join('\n'));
+    }
+  }
+  const [from, to] = [new Date('2026-01-01T00:00:00Z'), new Date('2028-01-01T00:00:00Z')];
+  const doc = catalogueDocument(findEclipses({ from, to, body: 'all' }), { convention: 'danjon', deltaTModel: 'fixed 69 s (user)', from, to });
+  check('list table', catalogueTable(doc, 'all', PSEUDO.lunar, PSEUDO.solar));
 });

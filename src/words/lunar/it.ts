@@ -88,7 +88,8 @@ const DIAGRAM: LunarDiagramWords = {
     P1: 'tocca la penombra',
     U1: 'tocca l’ombra',
     U2: 'tutta dentro l’ombra',
-    greatest: 'al punto più profondo dell’ombra',
+    // "ombra" alone is the umbra in these words; greatest is where the Moon passes nearest the shadow's centre.
+    greatest: 'più vicina al centro dell’ombra terrestre',
     U3: 'inizia a uscire dall’ombra',
     U4: 'fuori dall’ombra',
     P4: 'fuori dalla penombra',
@@ -109,7 +110,7 @@ const DIAGRAM: LunarDiagramWords = {
   shortTitle: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}`,
   depth: { penumbral: (m) => `magnitudine penombrale ${m}`, umbral: (m) => `magnitudine d’ombra ${m}` },
   longest: { totality: (d) => `totalità ${d}`, partial: (d) => `fase parziale ${d}`, penumbral: (d) => `fase penombrale ${d}` },
-  subtitle: (time, depth, longest, zone) => `Il percorso della Luna attraverso l’ombra, con il massimo alle ${time} (${depth}, ${longest}). Orari: ${zone}.`,
+  subtitle: (time, depth, longest, zone) => `Il percorso della Luna nell’ombra terrestre, con il massimo alle ${time} (${depth}, ${longest}). Orari: ${zone}.`,
   smallPrint: {
     frame: 'Vista dal centro della Terra, con l’ombra tenuta ferma: la linea è il percorso calcolato della Luna rispetto a essa.',
     orientation: 'Nord in alto, verso il polo celeste della data; est a sinistra, come appare il cielo a chi lo guarda.',
@@ -121,7 +122,7 @@ const DIAGRAM: LunarDiagramWords = {
     wholly: (from, to) => ` È tutta dentro l’ombra dalle ${from} alle ${to}.`,
     partly: (from, to) => ` È in parte dentro l’ombra dalle ${from} alle ${to}.`,
     never: ' Non raggiunge mai l’ombra.',
-    summary: (p1, greatest, p4, inner) => `La Luna entra nella penombra della Terra alle ${p1}, raggiunge il punto più profondo dell’ombra alle ${greatest} e ne esce alle ${p4}.${inner}`,
+    summary: (p1, greatest, p4, inner) => `La Luna entra nella penombra della Terra alle ${p1}, passa più vicina al centro dell’ombra terrestre alle ${greatest} e ne esce alle ${p4}.${inner}`,
     altText: (side) =>
       `Schema di due cerchi concentrici, la penombra della Terra, più chiara, attorno all’ombra, più scura, attraversati da destra a sinistra dal percorso della Luna, che passa a ${side === 'north' ? 'nord' : 'sud'} del centro; la Luna è disegnata dove ogni fase inizia e finisce e al massimo, ciascuna con il suo orario. Nord in alto, est a sinistra.`,
     file: (title, summary, altText) => `${title}. ${summary}\n\nTesto alternativo: ${altText}\n`,

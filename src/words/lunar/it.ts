@@ -6,11 +6,14 @@
  */
 import { COMMON_ITALIAN } from '../common/it.ts';
 import { meantOnlyFor } from '../common.ts';
+import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
 const plural = new Intl.PluralRules('it');
 const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
+/** "del 3 marzo 2026", "dell’8 novembre 2022": the article elides before otto and undici. */
+const ofDate = (date: string) => (/^(8|11)\s/.test(date) ? `dell’${date}` : `del ${date}`);
 
 const FIGURES: LunarFigureWords = {
   common: COMMON_ITALIAN,
@@ -78,10 +81,60 @@ const FIGURES: LunarFigureWords = {
   },
 };
 
+/** Lo schema della Luna attraverso l’ombra della Terra, la sua didascalia e il titolo del riquadro sulla mappa. */
+const DIAGRAM: LunarDiagramWords = {
+  common: COMMON_ITALIAN,
+  moments: {
+    P1: 'tocca la penombra',
+    U1: 'tocca l’ombra',
+    U2: 'tutta dentro l’ombra',
+    // "ombra" alone is the umbra in these words; greatest is where the Moon passes nearest the shadow's centre.
+    greatest: 'più vicina al centro dell’ombra terrestre',
+    U3: 'inizia a uscire dall’ombra',
+    U4: 'fuori dall’ombra',
+    P4: 'fuori dalla penombra',
+  },
+  legend: {
+    penumbra: 'penombra: parte del Sole nascosta',
+    umbra: 'ombra: tutto il Sole nascosto',
+    moonAtGreatest: 'la Luna al massimo',
+    moonAtContact: 'la Luna a ogni contatto',
+    path: 'il percorso della Luna; la freccia: il verso del moto',
+  },
+  compass: { north: 'N', east: 'E' },
+  greatest: 'Massimo',
+  moonAcross: (arcmin) => `diametro della Luna: ${arcmin}′`,
+  timesHeading: (zone) => `Orari (${zone ?? 'ciascuno con il suo fuso'})`,
+  kindTitle: { total: 'totale', partial: 'parziale', penumbral: 'penombrale' },
+  title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}: attraverso l’ombra della Terra`,
+  shortTitle: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}`,
+  depth: { penumbral: (m) => `magnitudine penombrale ${m}`, umbral: (m) => `magnitudine d’ombra ${m}` },
+  longest: { totality: (d) => `totalità ${d}`, partial: (d) => `fase parziale ${d}`, penumbral: (d) => `fase penombrale ${d}` },
+  subtitle: (time, depth, longest, zone) => `Il percorso della Luna nell’ombra terrestre, con il massimo alle ${time} (${depth}, ${longest}). Orari: ${zone}.`,
+  smallPrint: {
+    frame: 'Vista dal centro della Terra, con l’ombra tenuta ferma: la linea è il percorso calcolato della Luna rispetto a essa.',
+    orientation: 'Nord in alto, verso il polo celeste della data; est a sinistra, come appare il cielo a chi lo guarda.',
+    shadow: (convention, deltaT, source, gamma) => `Ombra: convenzione di ${convention}, cerchi al massimo; ΔT ${deltaT} s (${source}); gamma ${gamma}.`,
+    credits: (font, generator) => `Carattere: ${font}. Realizzato con ${generator}.`,
+  },
+  nakedEye: meantOnlyFor('lunar', 'Un’eclissi di Luna si può osservare senza rischi a occhio nudo.'),
+  caption: {
+    wholly: (from, to) => ` È tutta dentro l’ombra dalle ${from} alle ${to}.`,
+    partly: (from, to) => ` È in parte dentro l’ombra dalle ${from} alle ${to}.`,
+    never: ' Non raggiunge mai l’ombra.',
+    summary: (p1, greatest, p4, inner) => `La Luna entra nella penombra della Terra alle ${p1}, passa più vicina al centro dell’ombra terrestre alle ${greatest} e ne esce alle ${p4}.${inner}`,
+    altText: (side) =>
+      `Schema di due cerchi concentrici, la penombra della Terra, più chiara, attorno all’ombra, più scura, attraversati da destra a sinistra dal percorso della Luna, che passa a ${side === 'north' ? 'nord' : 'sud'} del centro; la Luna è disegnata dove ogni fase inizia e finisce e al massimo, ciascuna con il suo orario. Nord in alto, est a sinistra.`,
+    file: (title, summary, altText) => `${title}. ${summary}\n\nTesto alternativo: ${altText}\n`,
+  },
+  inset: { heading: 'Attraverso l’ombra · N in alto, E a sinistra' },
+};
+
 export const LUNAR_ITALIAN: LunarWords = {
   body: 'lunar',
   common: COMMON_ITALIAN,
   figures: FIGURES,
+  diagram: DIAGRAM,
   kindTitle: { total: 'totale', partial: 'parziale', penumbral: 'penombrale' },
   kind: { total: 'totale', partial: 'parziale', penumbral: 'penombrale' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
@@ -169,7 +222,7 @@ export const LUNAR_ITALIAN: LunarWords = {
     },
   },
   caption: {
-    title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna del ${date}.`,
+    title: (kindTitle, date) => `Eclissi ${kindTitle} di Luna ${ofDate(date)}.`,
     penumbralFacts: (stamp, magnitude, duration, span) =>
       `Massimo dell’eclissi alle ${stamp}, magnitudine penombrale ${magnitude}; la Luna resta ${duration} nella penombra (${span}), un lieve oscuramento.`,
     umbralFacts: (stamp, magnitude, totality, duration, span) =>
@@ -189,7 +242,7 @@ export const LUNAR_ITALIAN: LunarWords = {
     somewhere: 'alcune parti del mondo',
     including: (names) => `, tra cui ${names}`,
     hidden: (where) => `Non è visibile in ${where}.`,
-    altText: (kind, date, parts, hidden) => `Mappa del mondo che mostra dove si vede l’eclissi ${kind} di Luna del ${date}: ${parts}${hidden === undefined ? '' : `; non in ${hidden}`}.`,
+    altText: (kind, date, parts, hidden) => `Mappa del mondo che mostra dove si vede l’eclissi ${kind} di Luna ${ofDate(date)}: ${parts}${hidden === undefined ? '' : `; non in ${hidden}`}.`,
     file: (caption, altText) => `${caption}\n\nTesto alternativo: ${altText}\n`,
   },
   sheet: {
@@ -204,7 +257,8 @@ export const LUNAR_ITALIAN: LunarWords = {
     inUmbra: (duration) => `nell’ombra ${duration}`,
     penumbralPhase: (duration) => `fase penombrale ${duration}`,
     saros: (n) => `saros ${n}`,
-    thumbnailAlt: (kind, date) => `Mappa di visibilità dell’eclissi ${kind} di Luna del ${date}`,
+    // On a sheet holding both kinds the card's kind already says "di Luna" (the solar words' lunarKind): said once.
+    thumbnailAlt: (kind, date) => `Mappa di visibilità dell’eclissi ${kind.replace(/ di Luna$/, '')} di Luna ${ofDate(date)}`,
     eclipses: (count) => counted(count, 'eclissi', 'eclissi'),
     header: (counted, zone, styleHash, tool) => `${counted} · date e orari in ${zone} · stile ${styleHash} · ${tool}`,
     credits: 'Mappa di base: Natural Earth tramite world-atlas (pubblico dominio). Luoghi: GeoNames (CC BY 4.0). Vedi manifest.json e catalogue.csv.',

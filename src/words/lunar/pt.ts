@@ -6,10 +6,12 @@
  */
 import { COMMON_PORTUGUESE } from '../common/pt.ts';
 import { meantOnlyFor } from '../common.ts';
+import type { LunarDiagramWords } from './diagram.ts';
 import type { LunarFigureWords } from './figures.ts';
 import type { LunarWords } from './text.ts';
 
-const plural = new Intl.PluralRules('pt');
+// The plural rules of the Portuguese this catalogue is written in ("0 eclipses"; CLDR's bare "pt" counts 0 as singular).
+const plural = new Intl.PluralRules('pt-PT');
 const counted = (count: number, one: string, other: string) => `${count} ${plural.select(count) === 'one' ? one : other}`;
 
 const FIGURES: LunarFigureWords = {
@@ -78,10 +80,59 @@ const FIGURES: LunarFigureWords = {
   },
 };
 
+/** O diagrama da Lua através da sombra da Terra, a sua legenda e o título da inserção no mapa. */
+const DIAGRAM: LunarDiagramWords = {
+  common: COMMON_PORTUGUESE,
+  moments: {
+    P1: 'toca a penumbra',
+    U1: 'toca a umbra',
+    U2: 'toda dentro da umbra',
+    greatest: 'no ponto mais fundo da sombra',
+    U3: 'começa a sair da umbra',
+    U4: 'fora da umbra',
+    P4: 'fora da penumbra',
+  },
+  legend: {
+    penumbra: 'penumbra: parte do Sol oculta',
+    umbra: 'umbra: todo o Sol oculto',
+    moonAtGreatest: 'a Lua no máximo',
+    moonAtContact: 'a Lua em cada contacto',
+    path: 'o percurso da Lua; a seta: o sentido do movimento',
+  },
+  compass: { north: 'N', east: 'E' },
+  greatest: 'Máximo',
+  moonAcross: (arcmin) => `diâmetro da Lua: ${arcmin}′`,
+  timesHeading: (zone) => `Horas (${zone ?? 'cada uma com o seu fuso'})`,
+  kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
+  title: (kindTitle, date) => `Eclipse ${kindTitle} da Lua de ${date}: através da sombra da Terra`,
+  shortTitle: (kindTitle, date) => `Eclipse ${kindTitle} da Lua de ${date}`,
+  depth: { penumbral: (m) => `magnitude penumbral ${m}`, umbral: (m) => `magnitude umbral ${m}` },
+  longest: { totality: (d) => `totalidade ${d}`, partial: (d) => `fase parcial ${d}`, penumbral: (d) => `fase penumbral ${d}` },
+  subtitle: (time, depth, longest, zone) => `O percurso da Lua através da sombra, com o máximo às ${time} (${depth}, ${longest}). Horas: ${zone}.`,
+  smallPrint: {
+    frame: 'Visto do centro da Terra, com a sombra parada: a linha é o percurso calculado da Lua em relação a ela.',
+    orientation: 'Norte para cima, na direção do polo celeste da data; este à esquerda, como se vê o céu quando se está voltado para ele.',
+    shadow: (convention, deltaT, source, gamma) => `Sombra: convenção de ${convention}, círculos no máximo; ΔT ${deltaT} s (${source}); gama ${gamma}.`,
+    credits: (font, generator) => `Tipo de letra: ${font}. Feito com ${generator}.`,
+  },
+  nakedEye: meantOnlyFor('lunar', 'Um eclipse da Lua pode ser observado sem perigo a olho nu.'),
+  caption: {
+    wholly: (from, to) => ` Está toda dentro da umbra das ${from} às ${to}.`,
+    partly: (from, to) => ` Está em parte dentro da umbra das ${from} às ${to}.`,
+    never: ' Nunca chega à umbra.',
+    summary: (p1, greatest, p4, inner) => `A Lua entra na penumbra da Terra às ${p1}, chega ao ponto mais fundo da sombra às ${greatest} e sai dela às ${p4}.${inner}`,
+    altText: (side) =>
+      `Diagrama de dois círculos concêntricos, a penumbra da Terra, mais clara, à volta da umbra, mais escura, atravessados da direita para a esquerda pelo percurso da Lua, que passa a ${side === 'north' ? 'norte' : 'sul'} do centro; a Lua aparece desenhada onde cada fase começa e acaba e no máximo, cada uma com a sua hora. Norte para cima, este à esquerda.`,
+    file: (title, summary, altText) => `${title}. ${summary}\n\nTexto alternativo: ${altText}\n`,
+  },
+  inset: { heading: 'Através da sombra · N em cima, E à esquerda' },
+};
+
 export const LUNAR_PORTUGUESE: LunarWords = {
   body: 'lunar',
   common: COMMON_PORTUGUESE,
   figures: FIGURES,
+  diagram: DIAGRAM,
   kindTitle: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   kind: { total: 'total', partial: 'parcial', penumbral: 'penumbral' },
   convention: { danjon: 'Danjon', chauvenet: 'Chauvenet' },
@@ -203,7 +254,8 @@ export const LUNAR_PORTUGUESE: LunarWords = {
     inUmbra: (duration) => `na umbra ${duration}`,
     penumbralPhase: (duration) => `fase penumbral ${duration}`,
     saros: (n) => `saros ${n}`,
-    thumbnailAlt: (kind, date) => `Mapa de visibilidade do eclipse ${kind} da Lua de ${date}`,
+    // On a sheet holding both kinds the card's kind already says "da Lua" (the solar words' lunarKind): said once.
+    thumbnailAlt: (kind, date) => `Mapa de visibilidade do eclipse ${kind.replace(/ da Lua$/, '')} da Lua de ${date}`,
     eclipses: (count) => counted(count, 'eclipse', 'eclipses'),
     header: (counted, zone, styleHash, tool) => `${counted} · datas e horas em ${zone} · estilo ${styleHash} · ${tool}`,
     credits: 'Mapa de base: Natural Earth via world-atlas (domínio público). Locais: GeoNames (CC BY 4.0). Ver manifest.json e catalogue.csv.',

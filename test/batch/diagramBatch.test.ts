@@ -89,6 +89,13 @@ test('a naming template whose diagram files would not fit in 255 bytes is refuse
   const refused = await run(['batch', '--from', '2026-03-05', '--to', '2026-03-06', '--style', join(dir, 'b.yaml'), '--out', join(dir, 'b')]);
   assert.equal(refused.code, 2);
   assert.match(refused.stderr, /^umbracast: .*b\.yaml: naming: expected a template whose diagram file names fit in 255 bytes/);
+  // A place's diagram, "-dakar-diagram.webp", is longer than its sky figure, "-dakar-sky.png": 240 + 19 = 259 bytes.
+  writeFileSync(join(dir, 'c.yaml'), `naming: "${fits}"\nplaces: [Dakar]\n`);
+  writeFileSync(join(dir, 'd.yaml'), `naming: "${fits}"\nplaces: [Dakar]\ndiagram: [webp]\n`);
+  assert.equal((await run(['batch', '--from', '2026-03-05', '--to', '2026-03-06', '--style', join(dir, 'c.yaml'), '--out', join(dir, 'c')])).code, 0);
+  const place = await run(['batch', '--from', '2026-03-05', '--to', '2026-03-06', '--style', join(dir, 'd.yaml'), '--out', join(dir, 'd')]);
+  assert.equal(place.code, 2);
+  assert.match(place.stderr, /^umbracast: .*d\.yaml: places\[0\]: expected a place whose file names fit in 255 bytes with the naming template, received "Dakar" \(259 bytes\)\n$/);
 });
 
 test('a batch with the diagram: one per lunar eclipse, one per solar eclipse and place that sees it, each format, role and hashes in the manifest, bytes as `umbracast diagram` writes them; skip, removal and a changed field', async () => {

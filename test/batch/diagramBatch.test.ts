@@ -21,6 +21,8 @@ import { MAX_FILES_PER_ECLIPSE, parseManifest, type Manifest } from '../../src/b
 import { workerNeedBytes } from '../../src/batch/resources.ts';
 import { sha256 } from '../../src/batch/written.ts';
 import { contactSheet } from '../../src/batch/contactSheet.ts';
+import { findEclipses } from '../../src/eclipses/kinds.ts';
+import { solarLocalCircumstances } from '../../src/local/solar.ts';
 
 async function run(args: string[]) {
   let stdout = '';
@@ -188,6 +190,19 @@ test('a solar eclipse seen from none of the style\'s places: the view from the g
   assert.match(caption, /from the greatest point/);
   assert.match(caption, CAUTION);
   assert.equal(JSON.parse(readFileSync(join(out, '2026-02-17-annular-reykjavik.json'), 'utf8')).kind, 'none');
+});
+
+test('the fallback never fails: the greatest point sees every solar eclipse of 1000–1050 and 2950–3000 with the Sun up (a partial one\'s greatest point has the Sun on the horizon: Explanatory Supplement, the greatest eclipse point)', () => {
+  // Measured over every solar eclipse of 1000–3000 (4779) when the field was added: none failed.
+  for (const [from, to] of [['1000-01-01', '1051-01-01'], ['2950-01-01', '3000-12-31']] as const) {
+    const eclipses = findEclipses({ from: new Date(`${from}T00:00:00Z`), to: new Date(`${to}T00:00:00Z`), body: 'solar' });
+    assert.ok(eclipses.length > 100, `${from}: ${eclipses.length}`);
+    for (const eclipse of eclipses) {
+      if (eclipse.body !== 'solar') continue;
+      const [lonDeg, latDeg] = eclipse.greatestPoint;
+      assert.notEqual(solarLocalCircumstances(eclipse, { latDeg, lonDeg }).kind, 'none', `${eclipse.id} ${eclipse.kind}`);
+    }
+  }
 });
 
 test('the worker\'s memory need counts the diagram when it is the larger picture (README "Limits": 4 + 5 bytes a pixel for one raster drawing)', () => {

@@ -24,7 +24,7 @@ import type { SolarEclipseRecord } from '../eclipses/solar/record.ts';
 import { isPlainRelativePath, openRegularInside, readRegularFile, ReadRefused, writeFileAtomic } from '../outputs/files.ts';
 import type { EclipseRecord } from '../outputs/catalogueRecord.ts';
 import { printable } from './printable.ts';
-import type { WrittenFile } from './written.ts';
+import { FILE_ROLES, type FileRole, type WrittenFile } from './written.ts';
 
 export const MANIFEST_SCHEMA = 'umbracast.manifest/2';
 /** The schema before solar eclipses: read, never written. */
@@ -36,8 +36,11 @@ export const MAX_MANIFEST_ECLIPSES = 5000;
 export const MAX_MANIFEST_BYTES = 64 * 1024 * 1024;
 /** No file of ours is larger: a 64-megapixel image, uncompressed, is 256 MB. */
 export const MAX_OUTPUT_FILE_BYTES = 1024 * 1024 * 1024;
-/** The most files one eclipse writes: 5 map formats, caption, thumbnail, 20 places × (5 local formats + a figure). */
-const MAX_FILES_PER_ECLIPSE = 5 + 2 + 20 * 6;
+/**
+ * The most files one eclipse writes: 5 map formats, caption, thumbnail, a diagram in 4 formats with its
+ * caption; 20 places × (5 local formats, a sky figure and its caption, a diagram in 4 formats and its caption).
+ */
+export const MAX_FILES_PER_ECLIPSE = 5 + 2 + (4 + 1) + 20 * (5 + 2 + 4 + 1);
 
 /** A lunar record (umbracast.catalogue/1's) or a solar one (with `body: 'solar'`). */
 export type BatchRecord = EclipseRecord | SolarEclipseRecord;
@@ -129,7 +132,8 @@ const solarRecordSchema = z
 const fileSchema = z
   .object({
     path: z.string().max(300).refine(isPlainRelativePath, 'a plain relative path inside the folder (letters, digits, . _ -; at most one folder; no "..", no leading dot)'),
-    role: z.enum(['map', 'caption', 'thumbnail', 'local', 'sky']),
+    // `diagram` came after the first /2 manifests: an added value, so every manifest written before reads as it did.
+    role: z.enum(FILE_ROLES as [FileRole, ...FileRole[]]),
     bytes: z.number().int().nonnegative().max(MAX_OUTPUT_FILE_BYTES),
     sha256: z.string().regex(/^[0-9a-f]{64}$/),
   })

@@ -29,8 +29,10 @@ export function longestStemBytes(template: string): number {
   return template.replace(/\{(id|kind|year|saros)\}/g, (_, key: (typeof NAMING_FIELDS)[number]) => 'x'.repeat(LONGEST[key])).length;
 }
 
-/** Longest ending a place adds to a stem: "-SLUG-sky.png" or "-SLUG.markdown"-like extensions (at most 4 letters). */
-export const placeSuffixBytes = (slug: string) => Math.max(`-${slug}-sky.png`.length, `-${slug}.json`.length);
+/** Longest ending a diagram adds to a stem (or to a place's part of it): "-diagram.webp". */
+export const DIAGRAM_SUFFIX_BYTES = '-diagram.webp'.length;
+/** Longest ending a place adds to a stem: "-SLUG-sky.png" or "-SLUG.markdown"-like extensions (at most 4 letters); "-SLUG-diagram.webp" when the style asks for diagrams. */
+export const placeSuffixBytes = (slug: string, diagram = false) => Math.max(`-${slug}-sky.png`.length, `-${slug}.json`.length, diagram ? `-${slug}`.length + DIAGRAM_SUFFIX_BYTES : 0);
 /** Longest ending a map file adds to a stem. */
 export const MAP_SUFFIX_BYTES = '.geojson'.length;
 

@@ -20,9 +20,9 @@ export const SKY_FIGURE_PX = { widthPx: 1600, heightPx: 900 } as const;
 export const WORKER_BASE_BYTES = 210 * MIB;
 
 export interface PictureLoad {
-  /** Pixels of the largest picture a worker draws (the map, or a view-from-here figure). */
+  /** Pixels of the largest picture a worker draws (the map, a view-from-here figure, or a diagram). */
   readonly pixels: number;
-  /** How many raster formats (png, webp, jpg) the map is written in. */
+  /** How many raster formats (png, webp, jpg) that picture is written in from one drawing (a diagram draws each format anew: at most 1). */
   readonly rasterFormats: number;
 }
 
@@ -35,6 +35,11 @@ export interface PictureLoad {
 export function workerNeedBytes(load: PictureLoad): number {
   const perPixel = 4 + (load.rasterFormats >= 1 ? 5 : 0) + (load.rasterFormats >= 2 ? 6 : 0);
   return WORKER_BASE_BYTES + load.pixels * perPixel;
+}
+
+/** Of two pictures a worker draws one after the other, the one that needs more memory. */
+export function largerLoad(a: PictureLoad, b: PictureLoad): PictureLoad {
+  return workerNeedBytes(b) > workerNeedBytes(a) ? b : a;
 }
 
 /** Memory this process may still use: what the system has free, within a container's limit if there is one. */

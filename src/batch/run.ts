@@ -25,11 +25,11 @@ import { catalogueCsv } from '../outputs/catalogueFormats.ts';
 import { openRegularInside, TEMPORARY_NAME, writeFileAtomic } from '../outputs/files.ts';
 import { isRasterFormat } from '../raster/formats.ts';
 import { SHADOW_CONVENTIONS, type ShadowConventionName } from '../eclipses/lunar/conventions.ts';
-import { pageSize } from '../settings/mapSettings.ts';
-import { eclipseChoiceOf, mapChoicesOf } from './styleSettings.ts';
+import { DIAGRAM_SIZE, pageSize } from '../settings/mapSettings.ts';
+import { diagramFormatsOf, eclipseChoiceOf, mapChoicesOf } from './styleSettings.ts';
 import { acquireLock, removeIfEmpty } from './lock.ts';
 import { printable } from './printable.ts';
-import { capNote, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
+import { capNote, largerLoad, machineBudget, SKY_FIGURE_PX, workerCount, type PictureLoad } from './resources.ts';
 import { contactSheet, pngSize, sheetTitle } from './contactSheet.ts';
 import { workerScript } from './workerScript.ts';
 import { type BatchRecord, MANIFEST_SCHEMA, fileIntact, filesIntact, MANIFEST_NAME, MAX_MANIFEST_ECLIPSES, manifestText, readManifest, writeManifest, manifestNameFor, type Manifest, type ManifestEntry } from './manifest.ts';
@@ -151,11 +151,18 @@ export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 
   return { all, mine };
 }
 
-/** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
+/**
+ * The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats; the
+ * diagram instead when it needs more (a style whose maps are GeoJSON only, or a diagram larger than the map).
+ */
 export function pictureLoad(style: HouseStyle): PictureLoad {
   const { size } = pageSize(mapChoicesOf(style));
   const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
-  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter(isRasterFormat).length };
+  const maps: PictureLoad = { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter(isRasterFormat).length };
+  const diagramFormats = diagramFormatsOf(style);
+  if (diagramFormats.length === 0) return maps;
+  const diagram = pageSize(mapChoicesOf(style), DIAGRAM_SIZE).size;
+  return largerLoad(maps, { pixels: diagram.widthPx * diagram.heightPx, rasterFormats: diagramFormats.some(isRasterFormat) ? 1 : 0 });
 }
 
 /** Names a batch writes in outDir itself, which must be files (or absent) for the batch to replace them. */

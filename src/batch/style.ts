@@ -26,7 +26,7 @@ const isOfferedLanguage = (tag: string) => {
     return false;
   }
 };
-import { LOCAL_FORMATS, MAP_FORMATS } from '../outputs/formatNames.ts';
+import { LOCAL_FORMATS, MAP_FORMATS, SKY_FORMATS } from '../outputs/formatNames.ts';
 import { MAX_FILE_NAME_BYTES, readRegularFile, ReadRefused } from '../outputs/files.ts';
 import { DEFAULT_NAMING, longestStemBytes, MAP_SUFFIX_BYTES, NAMING_FIELDS } from './naming.ts';
 import { printable } from './printable.ts';
@@ -70,6 +70,14 @@ const styleObject = z
     formats: z.array(enumOf(MAP_FORMATS)).min(1).max(5).default(['png']),
     localFormats: z.array(enumOf(LOCAL_FORMATS)).max(5).default(['markdown', 'ics']),
     sky: z.boolean().default(true),
+    // The figure beside the map, for every eclipse: the shadow diagram (lunar), the Sun and the Moon at maximum (solar).
+    // true: in the maps' picture formats; a list: in those. Absent or false: none, and the style's hash is as it was before.
+    diagram: z
+      .union([z.boolean(), z.array(enumOf(SKY_FORMATS)).min(1, 'at least one format').max(SKY_FORMATS.length).refine((f) => new Set(f).size === f.length, 'each format at most once')], {
+        error: `true, false, or a list of picture formats among ${SKY_FORMATS.join(', ')}, each at most once`,
+      })
+      .optional()
+      .transform((d) => (d === false ? undefined : d)),
     naming: namingTemplate.default(DEFAULT_NAMING),
     // Which kinds of eclipse a batch takes: lunar, solar or both (the default).
     bodies: z.array(enumOf(ECLIPSE_BODIES)).min(1).max(ECLIPSE_BODIES.length).refine((b) => new Set(b).size === b.length, 'each of lunar, solar at most once').default([...ECLIPSE_BODIES]),

@@ -4,6 +4,8 @@
  * parameter, for errors. Kept apart from the schema (style.ts), so that the
  * batch workers load no schema library.
  */
+import type { SkyFormat } from '../outputs/formatNames.ts';
+import { isRasterFormat } from '../raster/formats.ts';
 import type { EclipseChoice } from '../settings/choose.ts';
 import type { MapChoices } from '../settings/mapSettings.ts';
 import { parseSize } from '../settings/read.ts';
@@ -34,6 +36,17 @@ export function mapChoicesOf(style: HouseStyle): MapChoices {
     areaNames: style.areaNames,
     ...(style.lang !== undefined ? { lang: style.lang } : {}),
   };
+}
+
+/**
+ * The formats of a style's diagram, none when it asks for none: `diagram: true`
+ * takes the maps' picture formats (PNG when the maps are GeoJSON only), a list its own.
+ */
+export function diagramFormatsOf(style: HouseStyle): SkyFormat[] {
+  if (style.diagram === undefined) return [];
+  if (style.diagram !== true) return [...style.diagram];
+  const pictures = style.formats.filter((f): f is SkyFormat => f === 'svg' || isRasterFormat(f));
+  return pictures.length > 0 ? [...new Set(pictures)] : ['png'];
 }
 
 /** How a style's eclipses are computed (the convention is a lunar setting). */

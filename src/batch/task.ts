@@ -5,7 +5,10 @@
  * a lunar eclipse gets maps, caption, thumbnail, local tables and sky
  * figures; a solar eclipse its maps (the caution in the header band) and
  * thumbnail, its caption (with the eye-safety caution), its GeoJSON geometry
- * and the local tables of the style's places (each with the caution).
+ * and the local tables of the style's places (each with the caution). When
+ * the style asks for the diagram: a lunar eclipse's shadow diagram; a solar
+ * eclipse's Sun and Moon at maximum from each place of the style that sees it
+ * (the greatest point when none does, or the style names none), caution and all.
  */
 import sharp from 'sharp';
 import { THEMES } from '../figures/theme.ts';
@@ -20,9 +23,13 @@ import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { renderMapFile, renderMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
+import { renderDiagramFile, type DiagramFormat } from '../outputs/diagramFile.ts';
+import { renderSolarDiagramFile, type SolarDiagramRequest } from '../outputs/solarDiagramFile.ts';
 import { choosePlace } from '../settings/choose.ts';
-import { mapSettings } from '../settings/mapSettings.ts';
-import { mapChoicesOf } from './styleSettings.ts';
+import { DIAGRAM_SIZE, mapSettings, pageSize } from '../settings/mapSettings.ts';
+import type { HouseStyle } from './style.ts';
+import { solarGreatestPointName } from '../words/solar/diagram.ts';
+import { diagramFormatsOf, mapChoicesOf } from './styleSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
 import { SKY_FIGURE_PX } from './resources.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile, type TaskResult } from './written.ts';
@@ -74,13 +81,43 @@ async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: s
   await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock, solar }), solar.text));
   await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse, { solar }))}\n`);
   const slugs = stylePlaces(style.places).map((p) => p.slug);
+  const seeing: { stem: string; place: SolarDiagramRequest['place']; clock: SolarDiagramRequest['clock'] }[] = [];
   for (const [i, name] of style.places.entries()) {
     const report = solarLocalReport(eclipse, choosePlace({ place: name }, true, 'places'), solar);
     for (const format of style.localFormats) {
       const text = { table: solarLocalTable, markdown: solarLocalMarkdown, csv: solarLocalCsv, json: solarLocalJson, ics: (r: typeof report) => solarLocalIcs(r, generator) }[format](report);
       await write(`${stem}-${slugs[i]!}.${LOCAL_EXTENSIONS[format]}`, 'local', text);
     }
+    const { place, clock } = report;
+    if (report.local.kind !== 'none') seeing.push({ stem: `${stem}-${slugs[i]!}`, place: { name: place.name, latDeg: place.latDeg, lonDeg: place.lonDeg, parameter: 'places' }, clock });
   }
+  const formats = diagramFormatsOf(style);
+  if (formats.length === 0) return;
+  // A place that sees nothing of it has no view to draw; with no such place, the view from the greatest point, in its own zone's time.
+  if (seeing.length === 0) {
+    const [lonDeg, latDeg] = eclipse.greatestPoint;
+    const chosen = choosePlace({ at: [lonDeg, latDeg] }, true, 'place');
+    seeing.push({ stem, place: { name: solarGreatestPointName(chosen.place.name, solar), latDeg, lonDeg, parameter: 'place' }, clock: civilClock(chosen.clock.zone, 'zone', solar.common.clock) });
+  }
+  const { size, dpi } = diagramPage(style);
+  for (const view of seeing) {
+    await writeDiagram(`${view.stem}-diagram`, formats, write, (format) =>
+      renderSolarDiagramFile({ eclipse, place: view.place, clock: view.clock, theme: THEMES[style.theme], size, dpi, format, generator, solar }));
+  }
+}
+
+/** The diagram's page: the style's size or preset, as for `umbracast diagram`, else that command's own size. */
+const diagramPage = (style: HouseStyle) => pageSize(mapChoicesOf(style), DIAGRAM_SIZE);
+
+/** A diagram in each format asked, and its caption beside it (the same for every format). */
+async function writeDiagram(name: string, formats: readonly DiagramFormat[], write: Write, render: (format: DiagramFormat) => Promise<{ bytes: Uint8Array; caption: string }>): Promise<void> {
+  let caption = '';
+  for (const format of formats) {
+    const file = await render(format);
+    await write(`${name}.${format}`, 'diagram', file.bytes);
+    caption = file.caption;
+  }
+  await write(`${name}.txt`, 'caption', caption);
 }
 
 async function renderLunar(input: TaskInput & { eclipse: LunarEclipse }, stem: string, write: Write): Promise<void> {
@@ -91,6 +128,13 @@ async function renderLunar(input: TaskInput & { eclipse: LunarEclipse }, stem: s
   for (const format of style.formats) await write(`${stem}.${format}`, 'map', files.get(format)!);
   await write(`${stem}.txt`, 'caption', captionText(caption, settings.words));
   await write(`thumbs/${stem}.png`, 'thumbnail', thumbnail!);
+  const diagramFormats = diagramFormatsOf(style);
+  if (diagramFormats.length > 0) {
+    // Times in the style's zone, as on its maps.
+    const { size, dpi } = diagramPage(style);
+    const clock = civilClock(style.tz, 'zone', settings.words.common.clock);
+    await writeDiagram(`${stem}-diagram`, diagramFormats, write, (format) => renderDiagramFile({ eclipse, clock, theme: THEMES[style.theme], size, dpi, format, generator, lunar: settings.words }));
+  }
 
   const slugs = stylePlaces(style.places).map((p) => p.slug);
   for (const [i, name] of style.places.entries()) {

@@ -11,7 +11,9 @@ export interface TaskInput {
   readonly generator: string;
 }
 
-export type FileRole = 'map' | 'caption' | 'thumbnail' | 'local' | 'sky';
+/** What a file is to its eclipse; `diagram`: the figure beside the map (the shadow diagram, or the Sun and the Moon at maximum). */
+export type FileRole = 'map' | 'caption' | 'thumbnail' | 'local' | 'sky' | 'diagram';
+export const FILE_ROLES: readonly FileRole[] = ['map', 'caption', 'thumbnail', 'local', 'sky', 'diagram'];
 
 export interface WrittenFile {
   readonly path: string;

@@ -6,32 +6,21 @@
  */
 import { InputError } from '../errors.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import type { CivilClock } from '../ephemeris/civilTime.ts';
-import type { PageSize } from '../figures/draw.ts';
 import { composeSolarDiagramScene } from '../figures/solar/diagram.ts';
-import type { Theme } from '../figures/theme.ts';
 import { solarDiscsAtMaximum, solarLocalCircumstances } from '../local/solar.ts';
-import { rasterise } from '../raster/raster.ts';
 import { solarDiagramCaption } from '../words/solar/diagram.ts';
-import type { DiagramFormat } from './diagramFile.ts';
+import { diagramFile, type DiagramFile, type DiagramPage } from './diagramPage.ts';
 import type { SolarWords } from '../words/solar/caution.ts';
 
-export interface SolarDiagramRequest {
+export interface SolarDiagramRequest extends DiagramPage {
   readonly eclipse: SolarEclipse;
   /** Where the eclipse is seen from, and how it is named; `parameter` names where it came from, for errors. */
   readonly place: { readonly name: string; readonly latDeg: number; readonly lonDeg: number; readonly parameter: string };
-  readonly clock: CivilClock;
-  readonly theme: Theme;
-  readonly size: PageSize;
-  readonly dpi: number;
-  readonly format: DiagramFormat;
-  readonly generator: string;
-  readonly title?: string;
   /** The reader's solar words (settings/language.ts); English when not given. The clock should speak the same language. */
   readonly solar?: SolarWords;
 }
 
-export async function renderSolarDiagramFile(request: SolarDiagramRequest): Promise<{ bytes: Uint8Array; svg: string; description: string; caption: string }> {
+export async function renderSolarDiagramFile(request: SolarDiagramRequest): Promise<DiagramFile> {
   const { eclipse, place } = request;
   const observer = { latDeg: place.latDeg, lonDeg: place.lonDeg };
   const local = solarLocalCircumstances(eclipse, observer);
@@ -49,8 +38,5 @@ export async function renderSolarDiagramFile(request: SolarDiagramRequest): Prom
     ...(request.title !== undefined ? { title: request.title } : {}),
     ...(request.solar !== undefined ? { words: request.solar } : {}),
   });
-  const caption = solarDiagramCaption(scene.title, scene.facts, request.solar);
-  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), svg: scene.svg, description: scene.description, caption };
-  const bytes = await rasterise(scene.svg, { format: request.format, dpi: request.dpi, title: scene.title, description: scene.description });
-  return { bytes, svg: scene.svg, description: scene.description, caption };
+  return diagramFile(scene, solarDiagramCaption(scene.title, scene.facts, request.solar), request);
 }

@@ -49,6 +49,8 @@ function checkChoice<T extends string>(parameter: string, value: T, choices: rea
 export type SizePreset = 'card' | 'square' | 'print';
 export const SIZE_PRESETS: readonly SizePreset[] = ['card', 'square', 'print'];
 export const DEFAULT_SIZE: PixelSize = { widthPx: 2400, heightPx: 1350 };
+/** The shadow diagram's (and the solar view at maximum's) page when none is asked for: `umbracast diagram` and the batch alike. */
+export const DIAGRAM_SIZE: PixelSize = { widthPx: 1600, heightPx: 1000 };
 const PRESET_SIZES: Record<'card' | 'square', PixelSize> = {
   card: { widthPx: 1200, heightPx: 675 },
   square: { widthPx: 1080, heightPx: 1080 },

@@ -150,6 +150,7 @@ const styleCases: [string, string, RegExp][] = [
   ['a bad enum value', 'theme: neon\n', /^umbracast: .*style\.yaml: theme: expected one of light, dark, print, received "neon"$/],
   ['a bad value inside a list', 'formats: [png, gif]\n', /^umbracast: .*style\.yaml: formats\[1\]: expected one of png, svg, webp, jpg, geojson, received "gif"$/],
   ['a naming template with a folder', 'naming: "../{id}"\n', /^umbracast: .*style\.yaml: naming: expected a file-name template .*with no folders, received "\.\.\/\{id\}"$/],
+  ['a diagram format that is not a picture', 'diagram: [png, geojson]\n', /^umbracast: .*style\.yaml: diagram: expected true, false, or a list of picture formats among png, svg, webp, jpg, each at most once, received png,geojson$/],
   ['JSON that does not parse', '{"theme": "dark",', /^umbracast: .*style\.json: expected valid JSON, received a file that does not parse/],
 ];
 

@@ -1,7 +1,7 @@
 /**
  * A fixed set of outputs, pinned by their SHA-256: catalogue, local tables in
  * every format, maps (SVG and PNG) in every theme and view, GeoJSON, the sky
- * figure, captions and a batch's manifest. A change to the code that is meant
+ * figure, the diagram of both kinds, captions and a batch's manifest. A change to the code that is meant
  * to leave what readers get alone (a reshaping, a speed-up) must leave every
  * hash alone (common practice: same inputs, same bytes). A deliberate change
  * rewrites the list with `npm run golden` — look at what changed first.
@@ -52,6 +52,10 @@ const FILES: [string, string[]][] = [
   ['zones 2027-02-20.geojson', ['map', '2027-02-20']],
   ['sky Adelaide 2025-03-14.svg', ['sky', '2025-03-14', '--place', 'Adelaide']],
   ['sky 78N 2029-06-26.png', ['sky', '2029-06-26', '--at', '78.22,15.65', '--preset', 'card']],
+  // The figure beside the map, both kinds (the batch's `diagram` writes these same bytes: test/batch/diagramBatch.test.ts).
+  ['diagram 2026-03-03.svg', ['diagram', '2026-03-03']],
+  ['diagram dark card 2026-08-28.png', ['diagram', '2026-08-28', '--theme', 'dark', '--preset', 'card']],
+  ['diagram solar Reykjavik 2026-08-12.svg', ['diagram', '2026-08-12', '--place', 'Reykjavik']],
 ];
 
 test('a fixed set of lunar outputs keeps its bytes (hash list in test/golden/output-hashes.json)', async () => {

@@ -8,7 +8,7 @@ import { describeReceived, InputError } from '../../errors.ts';
 import { BODY_CHOICES, ECLIPSE_BODIES, type EclipseBody } from '../../eclipses/kinds.ts';
 import { MANIFEST_NAME, readManifestOrFail } from '../../batch/manifest.ts';
 import { kindsOfBodies, KINDS_OF_BODY, MAX_MERGE_MANIFESTS, mergeManifests, runBatch, type ProgressEvent, type Shard } from '../../batch/run.ts';
-import { longestStemBytes, placeSuffixBytes, SamePlace, stylePlaces } from '../../batch/naming.ts';
+import { DIAGRAM_SUFFIX_BYTES, longestStemBytes, placeSuffixBytes, SamePlace, stylePlaces } from '../../batch/naming.ts';
 import { printable } from '../../batch/printable.ts';
 import { MAX_FILE_NAME_BYTES } from '../../outputs/files.ts';
 import { DEFAULT_STYLE, loadStyle, type HouseStyle } from '../../batch/style.ts';
@@ -163,8 +163,12 @@ export function checkStyleSettings(style: HouseStyle, file: string): string[] {
     if (!(error instanceof SamePlace)) throw error;
     throw new InputError(`${file}: places[${error.second}]`, 'places that are each listed once', `${describeReceived(style.places[error.second])} (the same place as places[${error.first}])`, true);
   }
+  const diagram = style.diagram !== undefined;
+  if (diagram && longestStemBytes(style.naming) + DIAGRAM_SUFFIX_BYTES > MAX_FILE_NAME_BYTES) {
+    throw new InputError(`${file}: naming`, `a template whose diagram file names fit in ${MAX_FILE_NAME_BYTES} bytes once filled in (the longest ending is -diagram.webp)`, style.naming);
+  }
   places.forEach(({ slug }, i) => {
-    const longest = longestStemBytes(style.naming) + placeSuffixBytes(slug);
+    const longest = longestStemBytes(style.naming) + placeSuffixBytes(slug, diagram);
     if (longest > MAX_FILE_NAME_BYTES) {
       throw new InputError(`${file}: places[${i}]`, `a place whose file names fit in ${MAX_FILE_NAME_BYTES} bytes with the naming template`, `${describeReceived(style.places[i])} (${longest} bytes)`, true);
     }

@@ -9,7 +9,7 @@ import { writeFileAtomic } from '../../outputs/files.ts';
 import { SKY_FORMATS } from '../../outputs/formatNames.ts';
 import { chooseEclipseOfBody, choosePlace } from '../../settings/choose.ts';
 import { solarGreatestPointName } from '../../words/solar/diagram.ts';
-import { checkTitle, pageSize } from '../../settings/mapSettings.ts';
+import { checkTitle, DIAGRAM_SIZE, pageSize } from '../../settings/mapSettings.ts';
 import { flagOf } from '../flags.ts';
 import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
 import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
@@ -29,7 +29,7 @@ interface DiagramOptions extends SizeFlags, PlaceFlags, EclipseFlags {
   lang?: string;
 }
 
-const DEFAULT_SIZE = { widthPx: 1600, heightPx: 1000 };
+const DEFAULT_SIZE = DIAGRAM_SIZE;
 const DIAGRAM_BODIES = ['lunar', 'solar'] as const;
 
 export function registerDiagram(program: Command, context: CommandContext): void {

@@ -241,7 +241,7 @@ export const LUNAR_GERMAN: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Mondfinsternisse vom ${from} bis ${last}`,
-    roles: { map: 'Karte', caption: 'Bildunterschrift', thumbnail: 'Vorschaubild', local: 'Ortstabelle', sky: 'Blick von hier' },
+    roles: { map: 'Karte', caption: 'Bildunterschrift', thumbnail: 'Vorschaubild', local: 'Ortstabelle', sky: 'Blick von hier', diagram: 'Schaubild' },
     fileNote: (role, kib) => `${role}, ${kib} KiB`,
     greatestUtc: (hhmm) => `Maximum ${hhmm} UTC`,
     greatestLocal: (stamp) => `Maximum ${stamp}`,

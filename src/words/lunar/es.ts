@@ -242,7 +242,7 @@ export const LUNAR_SPANISH: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Eclipses de Luna del ${from} al ${last}`,
-    roles: { map: 'mapa', caption: 'pie de foto', thumbnail: 'miniatura', local: 'tabla local', sky: 'vista desde aquí' },
+    roles: { map: 'mapa', caption: 'pie de foto', thumbnail: 'miniatura', local: 'tabla local', sky: 'vista desde aquí', diagram: 'diagrama' },
     fileNote: (role, kib) => `${role}, ${kib} KiB`,
     greatestUtc: (hhmm) => `Máximo ${hhmm} UTC`,
     greatestLocal: (stamp) => `Máximo ${stamp}`,

@@ -247,7 +247,7 @@ export const LUNAR_FRENCH: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Éclipses de Lune du ${from} au ${last}`,
-    roles: { map: 'carte', caption: 'légende', thumbnail: 'vignette', local: 'tableau local', sky: 'vue d’ici' },
+    roles: { map: 'carte', caption: 'légende', thumbnail: 'vignette', local: 'tableau local', sky: 'vue d’ici', diagram: 'schéma' },
     fileNote: (role, kib) => `${role}, ${kib}${NBSP}Kio`,
     greatestUtc: (hhmm) => `Maximum ${hhmm} UTC`,
     greatestLocal: (stamp) => `Maximum ${stamp}`,

@@ -247,7 +247,7 @@ export const LUNAR_ITALIAN: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Eclissi di Luna dal ${from} al ${last}`,
-    roles: { map: 'mappa', caption: 'didascalia', thumbnail: 'miniatura', local: 'tabella locale', sky: 'vista da qui' },
+    roles: { map: 'mappa', caption: 'didascalia', thumbnail: 'miniatura', local: 'tabella locale', sky: 'vista da qui', diagram: 'schema' },
     fileNote: (role, kib) => `${role}, ${kib} KiB`,
     greatestUtc: (hhmm) => `Massimo ${hhmm} UTC`,
     greatestLocal: (stamp) => `Massimo ${stamp}`,

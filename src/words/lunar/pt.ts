@@ -244,7 +244,7 @@ export const LUNAR_PORTUGUESE: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Eclipses da Lua de ${from} a ${last}`,
-    roles: { map: 'mapa', caption: 'legenda', thumbnail: 'miniatura', local: 'tabela local', sky: 'vista daqui' },
+    roles: { map: 'mapa', caption: 'legenda', thumbnail: 'miniatura', local: 'tabela local', sky: 'vista daqui', diagram: 'diagrama' },
     fileNote: (role, kib) => `${role}, ${kib} KiB`,
     greatestUtc: (hhmm) => `Máximo ${hhmm} UTC`,
     greatestLocal: (stamp) => `Máximo ${stamp}`,

@@ -267,7 +267,7 @@ export const LUNAR_ENGLISH: LunarWords = {
   },
   sheet: {
     title: (from, last) => `Lunar eclipses ${from} to ${last}`,
-    roles: { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here' },
+    roles: { map: 'map', caption: 'caption', thumbnail: 'thumbnail', local: 'local table', sky: 'view from here', diagram: 'diagram' },
     fileNote: (role, kib) => `${role}, ${kib} KiB`,
     greatestUtc: (hhmm) => `Greatest ${hhmm} UTC`,
     greatestLocal: (stamp) => `Greatest ${stamp}`,

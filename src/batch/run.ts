@@ -151,11 +151,19 @@ export function planBatch(options: Pick<BatchOptions, 'from' | 'to' | 'kinds' | 
   return { all, mine };
 }
 
-/** The pictures a worker draws for a style: the largest one's pixels, and the map's raster formats. */
+/**
+ * The pictures a worker draws for a style: the largest one's pixels, and the
+ * map's raster formats (at least one when solar eclipses have a picture
+ * format: their thumbnail is drawn from a full-size PNG); and whether the
+ * batch holds solar eclipses.
+ */
 export function pictureLoad(style: HouseStyle): PictureLoad {
   const { size } = pageSize(mapChoicesOf(style));
   const skyPixels = style.sky && style.places.length > 0 ? SKY_FIGURE_PX.widthPx * SKY_FIGURE_PX.heightPx : 0;
-  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: style.formats.filter(isRasterFormat).length };
+  const solar = (style.bodies ?? ['lunar']).includes('solar');
+  const raster = style.formats.filter(isRasterFormat).length;
+  const pictures = style.formats.some((f) => f !== 'geojson');
+  return { pixels: Math.max(size.widthPx * size.heightPx, skyPixels), rasterFormats: solar && pictures ? Math.max(1, raster) : raster, solar };
 }
 
 /** Names a batch writes in outDir itself, which must be files (or absent) for the batch to replace them. */

@@ -138,14 +138,17 @@ async function solarPictureBytes(scene: SolarScene, caption: { caption: string; 
 /**
  * A solar eclipse's map in several picture formats from one scene: what
  * renderMapFile makes format by format (the same bytes), without composing
- * the scene (its obscuration field, curves and labels) once per format. In
- * the order asked; GeoJSON is not a picture and is not made here.
+ * the scene (its obscuration field, curves and labels) once per format, and
+ * with one drawing for every raster format (rasteriseSet encodes the same
+ * pixels rasterise draws). GeoJSON is not a picture and is not made here.
  */
 export async function renderSolarMapFiles(request: Omit<SolarMapRequest, 'format'>, formats: readonly Exclude<MapFormat, 'geojson'>[]): Promise<Map<MapFormat, Uint8Array>> {
   const files = new Map<MapFormat, Uint8Array>();
   if (formats.length === 0) return files;
   const { scene, caption } = solarPicture(request);
-  for (const format of formats) files.set(format, await solarPictureBytes(scene, caption, format, request.dpi));
+  if (formats.includes('svg')) files.set('svg', Buffer.from(`${scene.svg}\n`));
+  const rasters = await rasteriseSet(scene.svg, formats.filter(isRasterFormat), { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
+  for (const [format, bytes] of rasters.files) files.set(format, bytes);
   return files;
 }
 

@@ -8,8 +8,13 @@
  * eclipse, resvg drawing; see README "Limits"): about 230 MiB for a
  * 12000×5333 map as SVG only, 729 MiB in one raster format and about
  * 1060 MiB in two to four (which share one drawing held as raw pixels; resvg
- * holds its canvas and the finished picture at once). The estimate below lies
- * at or above every measurement.
+ * holds its canvas and the finished picture at once). A batch with solar
+ * eclipses, measured the same way on the longest-path eclipse of 2026–2035
+ * (2030-06-01): 787 MiB for 12000×5333 as SVG only (its thumbnail is drawn
+ * from a full-size PNG all the same), 783 MiB as PNG, 1065 MiB as PNG, WebP
+ * and JPEG from one drawing; 337 MiB for the decade's 22 solar eclipses
+ * at 2400×1350, PNG + SVG. The estimate below lies at or above every
+ * measurement.
  */
 import { availableParallelism, freemem, totalmem } from 'node:os';
 
@@ -19,22 +24,31 @@ export const SKY_FIGURE_PX = { widthPx: 1600, heightPx: 900 } as const;
 /** A worker's own size: Node, the world basemap, the font, the gazetteer when places are named. */
 export const WORKER_BASE_BYTES = 210 * MIB;
 
+/**
+ * What a worker holds on top of that when its batch has solar eclipses: the
+ * solar captions' 1:50m country shapes, land lattice and large cities, and
+ * the GeoJSON's tracing grids (some 80 MB of heap while one is traced).
+ */
+export const SOLAR_EXTRA_BYTES = 130 * MIB;
+
 export interface PictureLoad {
   /** Pixels of the largest picture a worker draws (the map, a view-from-here figure, or a diagram). */
   readonly pixels: number;
-  /** How many raster formats (png, webp, jpg) that picture is written in from one drawing (a diagram draws each format anew: at most 1). */
+  /** How many raster formats (png, webp, jpg) that picture is written in from one drawing (a diagram draws each format anew: at most 1; a solar map's thumbnail is drawn from a PNG even when no raster format is written). */
   readonly rasterFormats: number;
+  /** Whether the batch holds solar eclipses. */
+  readonly solar?: boolean;
 }
 
 /**
- * Bytes a worker needs at its peak: its base, 4 bytes a pixel for the scene
- * (its vector detail grows with the size), 5 more for drawing a raster format
- * (resvg's canvas and the picture it hands over), and 6 more when several
- * raster formats share one drawing held as raw pixels.
+ * Bytes a worker needs at its peak: its base (more with solar eclipses), 4
+ * bytes a pixel for the scene (its vector detail grows with the size), 5 more
+ * for drawing a raster format (resvg's canvas and the picture it hands over),
+ * and 6 more when several raster formats share one drawing held as raw pixels.
  */
 export function workerNeedBytes(load: PictureLoad): number {
   const perPixel = 4 + (load.rasterFormats >= 1 ? 5 : 0) + (load.rasterFormats >= 2 ? 6 : 0);
-  return WORKER_BASE_BYTES + load.pixels * perPixel;
+  return WORKER_BASE_BYTES + (load.solar ? SOLAR_EXTRA_BYTES : 0) + load.pixels * perPixel;
 }
 
 /** Of two pictures a worker draws one after the other, the one that needs more memory. */

@@ -15,13 +15,15 @@ import { THEMES } from '../figures/theme.ts';
 import { pathInside, writeFileAtomic } from '../outputs/files.ts';
 import { localCsv, localIcs, localJson, localMarkdown, localReport, localTable, type LocalFormat } from '../outputs/localFormats.ts';
 import { captionText } from '../outputs/caption.ts';
-import { solarCaption, solarCaptionText } from '../outputs/solarCaption.ts';
+import { prepareSolarCaptions, solarCaption, solarCaptionText } from '../outputs/solarCaption.ts';
+import { measureText } from '../figures/typography.ts';
+import { loadBasemap } from '../sphere/world.ts';
 import { solarGeoJson } from '../outputs/solarGeojson.ts';
 import { solarLocalCsv, solarLocalIcs, solarLocalJson, solarLocalMarkdown, solarLocalReport, solarLocalTable } from '../outputs/solarLocal.ts';
 import { civilClock } from '../ephemeris/civilTime.ts';
 import type { LunarEclipse } from '../eclipses/lunar/types.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { renderMapFile, renderMapFiles } from '../outputs/mapFile.ts';
+import { renderMapFiles, renderSolarMapFiles } from '../outputs/mapFile.ts';
 import { renderSkyFile } from '../outputs/skyFile.ts';
 import { renderDiagramFile, type DiagramFormat } from '../outputs/diagramFile.ts';
 import { renderSolarDiagramFile, type SolarDiagramRequest } from '../outputs/solarDiagramFile.ts';
@@ -32,9 +34,30 @@ import { solarGreatestPointName } from '../words/solar/diagram.ts';
 import { diagramFormatsOf, mapChoicesOf } from './styleSettings.ts';
 import { fileStem, stylePlaces } from './naming.ts';
 import { SKY_FIGURE_PX } from './resources.ts';
+export { WARM_ENV } from './workerScript.ts';
 import { sha256, type FileRole, type TaskInput, type WrittenFile, type TaskResult } from './written.ts';
 
 export const THUMBNAIL_WIDTH_PX = 480;
+
+/**
+ * A worker's start: load now what every task of its batch reads, so that it
+ * is ready while the batch's own process still searches the catalogue (the
+ * pool starts before that search): the fonts, the coarse world (every
+ * lunar caption and map reads it) and, when the batch holds solar
+ * eclipses, the solar captions' country shapes, land lattice and large
+ * cities. Only caches are filled: a failure here is left for the task
+ * that meets it to report.
+ */
+export function warmUp(bodies: string | undefined): void {
+  try {
+    measureText('0', { sizePx: 10, weight: 'regular' });
+    measureText('0', { sizePx: 10, weight: 'semibold' });
+    loadBasemap('110m');
+    if (bodies?.split(',').includes('solar')) prepareSolarCaptions();
+  } catch {
+    // The task will meet it again, and say so.
+  }
+}
 
 // A worker renders one picture at a time: no operation cache to hold old images, one libvips thread.
 sharp.cache(false);
@@ -68,15 +91,15 @@ async function renderSolar(input: TaskInput & { eclipse: SolarEclipse }, stem: s
   const { solar } = settings;
   const clock = civilClock(style.tz, 'zone', solar.common.clock);
   // The style's pictures, each drawn with the caution in its header band; the geometry as GeoJSON always.
-  let png: Uint8Array | undefined;
-  for (const format of style.formats.filter((f) => f !== 'geojson')) {
-    const file = await renderMapFile({ eclipse, ...settings, format, generator });
-    await write(`${stem}.${format}`, 'map', file.bytes);
-    if (format === 'png') png = file.bytes;
-  }
-  if (style.formats.length > 0 && !style.formats.every((f) => f === 'geojson')) {
-    png ??= (await renderMapFile({ eclipse, ...settings, format: 'png', generator })).bytes;
-    await write(`thumbs/${stem}.png`, 'thumbnail', await sharp(png).resize({ width: THUMBNAIL_WIDTH_PX }).png().toBuffer());
+  // One scene for every picture format (and the thumbnail's PNG when the style writes none); files written as they are made.
+  const pictures = style.formats.filter((f) => f !== 'geojson');
+  if (pictures.length > 0) {
+    const files = await renderSolarMapFiles({ eclipse, ...settings, generator }, pictures.includes('png') ? pictures : [...pictures, 'png']);
+    for (const format of pictures) {
+      await write(`${stem}.${format}`, 'map', files.get(format)!);
+      if (format !== 'png') files.delete(format);
+    }
+    await write(`thumbs/${stem}.png`, 'thumbnail', await sharp(files.get('png')!).resize({ width: THUMBNAIL_WIDTH_PX }).png().toBuffer());
   }
   await write(`${stem}.txt`, 'caption', solarCaptionText(solarCaption(eclipse, { clock, solar }), solar.text));
   await write(`${stem}.geojson`, 'map', `${JSON.stringify(solarGeoJson(eclipse, { solar }))}\n`);

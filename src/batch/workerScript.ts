@@ -15,3 +15,6 @@ export function workerScript(): string {
   if (!existsSync(fileURLToPath(url))) throw new Error(`umbracast: the compiled batch worker ${fileURLToPath(url)} is missing: run npm run build`);
   return url.href;
 }
+
+/** The environment variable that tells a starting worker which bodies its batch holds (task.ts warmUp), comma-separated. */
+export const WARM_ENV = 'UMBRACAST_BATCH_BODIES';

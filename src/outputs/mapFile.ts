@@ -117,16 +117,43 @@ export function solarMarkLabel(eclipse: SolarEclipse, place: PlaceLabel, mapCloc
 }
 
 async function renderSolarMapFile(request: SolarMapRequest): Promise<SolarMapFile> {
-  const { eclipse, style } = request;
   // GeoJSON is the eclipse's geometry (outputs/solarGeojson.ts), with the caution on the collection and each feature.
-  if (request.format === 'geojson') return { bytes: Buffer.from(`${JSON.stringify(solarGeoJson(eclipse, request.solar ? { solar: request.solar } : {}))}\n`) };
+  if (request.format === 'geojson') return { bytes: Buffer.from(`${JSON.stringify(solarGeoJson(request.eclipse, request.solar ? { solar: request.solar } : {}))}\n`) };
+  const { scene, caption } = solarPicture(request);
+  const captionFile = solarCaptionFile(caption.caption, caption.altText, request.solar);
+  return { bytes: await solarPictureBytes(scene, caption, request.format, request.dpi), scene, caption, captionFile };
+}
+
+/** A solar map's scene and the caption its raster files carry, in the reader's words. */
+function solarPicture(request: Omit<SolarMapRequest, 'format'>): { scene: SolarScene; caption: { caption: string; altText: string } } {
+  const { eclipse, style } = request;
   const marks: MapMark[] = (request.marks ?? []).map((p) => ({ lonDeg: p.lonDeg, latDeg: p.latDeg, label: solarMarkLabel(eclipse, p, style.markClock === 'town' ? undefined : style.clock, request.solar) }));
   const scene = composeSolarScene({ eclipse, style, size: request.size, generator: request.generator, marks, ...(request.solar ? { words: request.solar } : {}) });
-  const caption = solarMapCaptionWords(eclipse, style.clock, scene.subtitle, request.solar);
-  const captionFile = solarCaptionFile(caption.caption, caption.altText, request.solar);
-  if (request.format === 'svg') return { bytes: Buffer.from(`${scene.svg}\n`), scene, caption, captionFile };
-  const rasters = await rasteriseSet(scene.svg, [request.format], { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
-  return { bytes: rasters.files.get(request.format)!, scene, caption, captionFile };
+  return { scene, caption: solarMapCaptionWords(eclipse, style.clock, scene.subtitle, request.solar) };
+}
+
+/** One picture format of a solar scene: the SVG text, or a raster drawn from it on its own. */
+async function solarPictureBytes(scene: SolarScene, caption: { caption: string; altText: string }, format: Exclude<MapFormat, 'geojson'>, dpi: number): Promise<Uint8Array> {
+  if (format === 'svg') return Buffer.from(`${scene.svg}\n`);
+  const rasters = await rasteriseSet(scene.svg, [format], { dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
+  return rasters.files.get(format)!;
+}
+
+/**
+ * A solar eclipse's map in several picture formats from one scene: what
+ * renderMapFile makes format by format (the same bytes), without composing
+ * the scene (its obscuration field, curves and labels) once per format, and
+ * with one drawing for every raster format (rasteriseSet encodes the same
+ * pixels rasterise draws). GeoJSON is not a picture and is not made here.
+ */
+export async function renderSolarMapFiles(request: Omit<SolarMapRequest, 'format'>, formats: readonly Exclude<MapFormat, 'geojson'>[]): Promise<Map<MapFormat, Uint8Array>> {
+  const files = new Map<MapFormat, Uint8Array>();
+  if (formats.length === 0) return files;
+  const { scene, caption } = solarPicture(request);
+  if (formats.includes('svg')) files.set('svg', Buffer.from(`${scene.svg}\n`));
+  const rasters = await rasteriseSet(scene.svg, formats.filter(isRasterFormat), { dpi: request.dpi, title: scene.title, description: `${caption.caption} Alt text: ${caption.altText}` });
+  for (const [format, bytes] of rasters.files) files.set(format, bytes);
+  return files;
 }
 
 async function renderLunarMapFile(request: MapRequest): Promise<MapFile> {

@@ -16,7 +16,7 @@
  * circumstances of those that see the eclipse computed in full.
  */
 import { geoBounds, geoContains } from 'd3-geo';
-import type { Feature, Geometry } from 'geojson';
+import type { Geometry, Polygon } from 'geojson';
 import { countries as countryTable, continents as continentNames } from 'countries-list';
 import isoCountries from 'i18n-iso-countries';
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
@@ -25,7 +25,7 @@ import { besselianAt } from '../eclipses/solar/besselian.ts';
 import { outlinePointsAt, umbraRadius } from '../eclipses/solar/outline.ts';
 import { surfacePoint } from '../eclipses/solar/surface.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { cityAt, cityCount, type CityRow } from '../places/geonames.ts';
+import { citiesOfPopulation, type CityRow } from '../places/geonames.ts';
 import { timeZoneOfPlace } from '../places/timeZone.ts';
 import { loadBasemap } from '../sphere/world.ts';
 import { greatestObscurationSeen, solarLocalCircumstances } from '../local/solar.ts';
@@ -90,12 +90,27 @@ const LATTICE_DEG = 1;
 /** Continents with less than this share seeing the partial eclipse are not named. */
 const CONTINENT_MIN_SHARE = 0.05;
 
+type Bounds = [[number, number], [number, number]];
+
 interface CountryShape {
   readonly name: string;
   readonly code?: string;
   readonly continent?: string;
-  readonly feature: Feature<Geometry, { name: string }>;
-  readonly bounds: [[number, number], [number, number]];
+  /**
+   * The country's polygons, each with its own bounds: a point is in the
+   * country when one polygon holds it (as geoContains reads a MultiPolygon),
+   * and only the polygons whose bounds hold the point are tested (a
+   * country's overseas parts or its islands across ±180° stretch the
+   * bounds of the whole).
+   */
+  readonly parts: readonly { readonly polygon: Polygon; readonly bounds: Bounds }[];
+}
+
+/** A country's geometry as its polygons. */
+function polygonsOf(geometry: Geometry | null): Polygon[] {
+  if (geometry?.type === 'Polygon') return [geometry];
+  if (geometry?.type === 'MultiPolygon') return geometry.coordinates.map((coordinates) => ({ type: 'Polygon', coordinates }));
+  return [];
 }
 
 const shapesByDetail = new Map<string, CountryShape[]>();
@@ -107,19 +122,20 @@ function countryShapes(detail: '110m' | '50m'): CountryShape[] {
       const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
       const continentCode = code ? (countryTable as Record<string, { continent: string }>)[code]?.continent : undefined;
       const continent = continentCode ? (continentNames as Record<string, string>)[continentCode] : undefined;
-      return { name: feature.properties.name, ...(code ? { code } : {}), ...(continent ? { continent } : {}), feature, bounds: geoBounds(feature) };
+      const parts = polygonsOf(feature.geometry).map((polygon) => ({ polygon, bounds: geoBounds(polygon) }));
+      return { name: feature.properties.name, ...(code ? { code } : {}), ...(continent ? { continent } : {}), parts };
     });
     shapesByDetail.set(detail, shapes);
   }
   return shapes;
 }
 
-const inBounds = ([[west, south], [east, north]]: [[number, number], [number, number]], [lon, lat]: LonLat) =>
+const inBounds = ([[west, south], [east, north]]: Bounds, [lon, lat]: LonLat) =>
   lat >= south && lat <= north && (west <= east ? lon >= west && lon <= east : lon >= west || lon <= east);
 
 /** The country holding a point, if any. */
 function countryAt(shapes: readonly CountryShape[], point: LonLat): CountryShape | undefined {
-  return shapes.find((s) => inBounds(s.bounds, point) && geoContains(s.feature, [point[0], point[1]]));
+  return shapes.find((s) => s.parts.some((part) => inBounds(part.bounds, point) && geoContains(part.polygon, [point[0], point[1]])));
 }
 
 /** Points between two nearby places, ends excluded, in `steps` equal parts (longitude unwrapped across ±180°). */
@@ -210,11 +226,8 @@ let largeCities: CityRow[] | undefined;
 /** The gazetteer's places of LARGE_CITY_POPULATION people or more, most populous first, read once. */
 function largestCities(): CityRow[] {
   if (largeCities) return largeCities;
-  const found: CityRow[] = [];
-  for (let line = 0, n = cityCount(); line < n; line++) {
-    const city = cityAt(line);
-    if (city.population >= LARGE_CITY_POPULATION) found.push(city);
-  }
+  // The population column alone is read: the gazetteer's name index is not loaded for this.
+  const found = citiesOfPopulation(LARGE_CITY_POPULATION);
   return (largeCities = found.sort((a, b) => b.population - a.population || a.geonameId - b.geonameId));
 }
 
@@ -259,6 +272,18 @@ export function citySights(eclipse: SolarEclipse, count: number): CitySight[] {
     chosen.push(s);
   }
   return chosen;
+}
+
+/**
+ * Build what every solar caption reads, once per process: the 1:50m
+ * country shapes, the continents' land lattice and the list of the largest
+ * cities. A batch worker does this as it starts, while the batch searches
+ * its catalogue, rather than in its first eclipse.
+ */
+export function prepareSolarCaptions(): void {
+  countryShapes('50m');
+  landPoints();
+  largestCities();
 }
 
 function shareWord(share: number): SolarShareWord {

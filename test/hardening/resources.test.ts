@@ -55,9 +55,14 @@ test('14. the worker count is min(requested, cores, available memory / per-worke
   // Every measured peak (README "Limits") lies under its estimate: a worker is never given less than it takes.
   const measured: [number, number, number][] = [[1200 * 675, 0, 132], [2400 * 1350, 1, 187], [6000 * 3000, 2, 384], [12000 * 5333, 0, 229], [12000 * 5333, 1, 729], [12000 * 5333, 2, 1060], [12000 * 5333, 3, 1056]];
   for (const [pixels, rasterFormats, peakMb] of measured) assert.ok(workerNeedBytes({ pixels, rasterFormats }) >= peakMb * MB, `${pixels} px, ${rasterFormats} raster formats`);
+  // The same for a batch with solar eclipses (measured on 2030-06-01, README "Limits"); its thumbnail draws a PNG even for an SVG-only style.
+  const solarMeasured: [number, number, number][] = [[2400 * 1350, 1, 337], [12000 * 5333, 1, 787], [12000 * 5333, 3, 1065]];
+  for (const [pixels, rasterFormats, peakMb] of solarMeasured) assert.ok(workerNeedBytes({ pixels, rasterFormats, solar: true }) >= peakMb * MB, `solar, ${pixels} px, ${rasterFormats} raster formats`);
   // The style's largest picture: the map, or a view-from-here figure if that is larger.
-  assert.deepEqual(pictureLoad(validateStyle({ size: '12000x5333', formats: ['png', 'webp', 'jpg', 'svg'] })), { pixels: 12000 * 5333, rasterFormats: 3 });
-  assert.deepEqual(pictureLoad(validateStyle({ preset: 'card', formats: ['svg'], places: ['Dakar'] })), { pixels: 1600 * 900, rasterFormats: 0 });
+  assert.deepEqual(pictureLoad(validateStyle({ size: '12000x5333', formats: ['png', 'webp', 'jpg', 'svg'], bodies: ['lunar'] })), { pixels: 12000 * 5333, rasterFormats: 3, solar: false });
+  assert.deepEqual(pictureLoad(validateStyle({ preset: 'card', formats: ['svg'], places: ['Dakar'], bodies: ['lunar'] })), { pixels: 1600 * 900, rasterFormats: 0, solar: false });
+  assert.deepEqual(pictureLoad(validateStyle({ size: '12000x5333', formats: ['svg'] })), { pixels: 12000 * 5333, rasterFormats: 1, solar: true });
+  assert.deepEqual(pictureLoad(validateStyle({ size: '12000x5333', formats: ['geojson'], bodies: ['solar'] })), { pixels: 12000 * 5333, rasterFormats: 0, solar: true });
 });
 
 /** Node child processes of this process, from /proc (proc(5): field 4 of /proc/PID/stat is the parent's id; cmdline). */

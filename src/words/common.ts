@@ -7,7 +7,8 @@
  * Shaped for translation: each language supplies a `CommonWords` catalogue
  * (English below); the functions take the catalogue, defaulting to English.
  */
-import isoCountries from 'i18n-iso-countries';
+import { createRequire } from 'node:module';
+import isoCountries from 'i18n-iso-countries/index.js';
 import type { EclipseBody } from '../eclipses/common/record.ts';
 import { CLOCK_ENGLISH, type ClockWords } from '../ephemeris/civilTime.ts';
 import type { DeltaTSource } from '../ephemeris/deltaT.ts';
@@ -222,5 +223,22 @@ export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWor
  */
 export function countryName(country: { readonly code?: string | undefined; readonly name: string }, words: CommonWords = ENGLISH): string {
   if (country.code && words.countryNames[country.code]) return words.countryNames[country.code]!;
-  return (country.code && isoCountries.getName(country.code, words.locale)) || country.name;
+  return (country.code && isoCountryName(country.code, words.locale)) || country.name;
+}
+
+// The package's main entry registers all of its languages on load (about 1 MB of JSON, a good part
+// of a command's start-up); its core registers none. A language is registered the first time a
+// country's name is asked in it, so a command that names no country loads none.
+const requireLocale = createRequire(import.meta.url);
+const localesTried = new Set<string>();
+
+function isoCountryName(code: string, locale: string): string | undefined {
+  const language = locale.toLowerCase();
+  if (!localesTried.has(language)) {
+    localesTried.add(language);
+    if (isoCountries.getSupportedLanguages().includes(language)) {
+      isoCountries.registerLocale(requireLocale(`i18n-iso-countries/langs/${language}.json`) as isoCountries.LocaleData);
+    }
+  }
+  return isoCountries.getName(code, language);
 }

@@ -82,7 +82,7 @@ export function mayHoldSolarEclipse(k: number): boolean {
 export function findSolarEclipses(options: SolarCatalogueOptions): SolarEclipse[] {
   checkRange(options.from, options.to);
   const deltaTModel = options.deltaT ?? standardDeltaTModel();
-  return eclipsesInRange(options.from, options.to, (k) => (mayHoldSolarEclipse(k) ? solarEclipseAtLunation(k, deltaTModel) : undefined));
+  return eclipsesInRange(options.from, options.to, (k) => (mayHoldSolarEclipse(k) ? solarEclipseAtLunation(k, deltaTModel) : undefined), meanNewMoonTTDays);
 }
 
 /** The solar eclipse at new moon k (Meeus numbering), if there is one. */

@@ -17,6 +17,8 @@ import type { DeltaTSource } from '../ephemeris/deltaT.ts';
 export interface CommonWords {
   /** BCP 47 tag of the catalogue's language, for Intl. */
   readonly locale: string;
+  /** How numbers are written (see `Numerals`). */
+  readonly numerals: Numerals;
   /** Every output's last word on what a prediction can promise. */
   readonly predictions: string;
   /** Unit words for durations: "3 h 27 min" (long) and "3h 27m" (compact, for tables). */
@@ -48,11 +50,22 @@ export interface CommonWords {
   readonly clock: ClockWords;
 }
 
+/**
+ * How a catalogue writes numbers. `ascii`: ASCII digits and the decimal sign given, which must be
+ * what CLDR gives for the catalogue's locale (test/words/numerals.test.ts checks every catalogue
+ * against Intl.NumberFormat): printing a number then needs none of Intl's number formatting, whose
+ * first use costs a command a good part of its start-up. `intl`: digits and decimal sign as
+ * Intl.NumberFormat writes them for the locale (a language with digits of its own, or a catalogue
+ * moved to another region's locale).
+ */
+export type Numerals = { readonly digits: 'ascii'; readonly decimalSign: string } | { readonly digits: 'intl' };
+
 export type ContinentName = 'Africa' | 'Antarctica' | 'Asia' | 'Europe' | 'North America' | 'Oceania' | 'South America';
 export type MapAreaName = 'AFRICA' | 'EUROPE' | 'ASIA' | 'NORTH AMERICA' | 'SOUTH AMERICA' | 'AUSTRALIA' | 'ANTARCTICA' | 'Pacific Ocean' | 'Atlantic Ocean' | 'Indian Ocean';
 
 export const ENGLISH: CommonWords = {
   locale: 'en',
+  numerals: { digits: 'ascii', decimalSign: '.' },
   predictions: 'Predictions: weather and the local horizon decide what is seen.',
   durationUnits: {
     long: { hour: ' h', minute: ' min' },
@@ -133,6 +146,10 @@ export type DurationForm = 'long' | 'compact';
 export function formatDuration(seconds: number, form: DurationForm = 'long', words: CommonWords = ENGLISH): string {
   const minutes = roundToMinute(seconds);
   const unit = words.durationUnits[form];
+  if (words.numerals.digits === 'ascii') {
+    if (minutes < 60) return `${minutes}${unit.minute}`;
+    return `${Math.floor(minutes / 60)}${unit.hour} ${String(minutes % 60).padStart(2, '0')}${unit.minute}`;
+  }
   const [whole, twoDigits] = integerFormats(words.locale);
   if (minutes < 60) return `${whole.format(minutes)}${unit.minute}`;
   return `${whole.format(Math.floor(minutes / 60))}${unit.hour} ${twoDigits.format(minutes % 60)}${unit.minute}`;
@@ -158,7 +175,7 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
  * Spanish): only a point between two digits changes, never a full stop.
  */
 export function decimalIn(text: string, words: CommonWords = ENGLISH): string {
-  const sign = decimalSign(words.locale);
+  const sign = words.numerals.digits === 'ascii' ? words.numerals.decimalSign : decimalSign(words.locale);
   return sign === '.' ? text : text.replace(/(\d)\.(\d)/g, `$1${sign}$2`);
 }
 

@@ -18,7 +18,7 @@
 import { geoBounds, geoContains } from 'd3-geo';
 import type { Geometry, Polygon } from 'geojson';
 import { countries as countryTable, continents as continentNames } from 'countries-list';
-import isoCountries from 'i18n-iso-countries';
+import isoCountries from 'i18n-iso-countries/index.js'; // the codes only: no language's names
 import { civilClock, type CivilClock } from '../ephemeris/civilTime.ts';
 import type { LonLat } from '../ephemeris/earth.ts';
 import { besselianAt } from '../eclipses/solar/besselian.ts';

@@ -81,7 +81,7 @@ export function chooseLanguage(tag: string | undefined, parameter = 'lang'): Lan
 
 /** The same catalogues, with Intl writing dates and numbers as `locale` does. */
 function withLocale(language: Language, locale: string): Language {
-  const common: CommonWords = { ...language.common, locale, clock: { ...language.common.clock, locale } };
+  const common: CommonWords = { ...language.common, locale, numerals: { digits: 'intl' }, clock: { ...language.common.clock, locale } };
   const { lunar, solar } = language;
   return {
     ...language,

@@ -7,7 +7,8 @@
  * Shaped for translation: each language supplies a `CommonWords` catalogue
  * (English below); the functions take the catalogue, defaulting to English.
  */
-import isoCountries from 'i18n-iso-countries';
+import { createRequire } from 'node:module';
+import isoCountries from 'i18n-iso-countries/index.js';
 import type { EclipseBody } from '../eclipses/common/record.ts';
 import { CLOCK_ENGLISH, type ClockWords } from '../ephemeris/civilTime.ts';
 import type { DeltaTSource } from '../ephemeris/deltaT.ts';
@@ -16,6 +17,8 @@ import type { DeltaTSource } from '../ephemeris/deltaT.ts';
 export interface CommonWords {
   /** BCP 47 tag of the catalogue's language, for Intl. */
   readonly locale: string;
+  /** How numbers are written (see `Numerals`). */
+  readonly numerals: Numerals;
   /** Every output's last word on what a prediction can promise. */
   readonly predictions: string;
   /** Unit words for durations: "3 h 27 min" (long) and "3h 27m" (compact, for tables). */
@@ -47,11 +50,22 @@ export interface CommonWords {
   readonly clock: ClockWords;
 }
 
+/**
+ * How a catalogue writes numbers. `ascii`: ASCII digits and the decimal sign given, which must be
+ * what CLDR gives for the catalogue's locale (test/words/numerals.test.ts checks every catalogue
+ * against Intl.NumberFormat): printing a number then needs none of Intl's number formatting, whose
+ * first use costs a command a good part of its start-up. `intl`: digits and decimal sign as
+ * Intl.NumberFormat writes them for the locale (a language with digits of its own, or a catalogue
+ * moved to another region's locale).
+ */
+export type Numerals = { readonly digits: 'ascii'; readonly decimalSign: string } | { readonly digits: 'intl' };
+
 export type ContinentName = 'Africa' | 'Antarctica' | 'Asia' | 'Europe' | 'North America' | 'Oceania' | 'South America';
 export type MapAreaName = 'AFRICA' | 'EUROPE' | 'ASIA' | 'NORTH AMERICA' | 'SOUTH AMERICA' | 'AUSTRALIA' | 'ANTARCTICA' | 'Pacific Ocean' | 'Atlantic Ocean' | 'Indian Ocean';
 
 export const ENGLISH: CommonWords = {
   locale: 'en',
+  numerals: { digits: 'ascii', decimalSign: '.' },
   predictions: 'Predictions: weather and the local horizon decide what is seen.',
   durationUnits: {
     long: { hour: ' h', minute: ' min' },
@@ -132,6 +146,10 @@ export type DurationForm = 'long' | 'compact';
 export function formatDuration(seconds: number, form: DurationForm = 'long', words: CommonWords = ENGLISH): string {
   const minutes = roundToMinute(seconds);
   const unit = words.durationUnits[form];
+  if (words.numerals.digits === 'ascii') {
+    if (minutes < 60) return `${minutes}${unit.minute}`;
+    return `${Math.floor(minutes / 60)}${unit.hour} ${String(minutes % 60).padStart(2, '0')}${unit.minute}`;
+  }
   const [whole, twoDigits] = integerFormats(words.locale);
   if (minutes < 60) return `${whole.format(minutes)}${unit.minute}`;
   return `${whole.format(Math.floor(minutes / 60))}${unit.hour} ${twoDigits.format(minutes % 60)}${unit.minute}`;
@@ -143,8 +161,9 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
   let formats = integerFormatsByLocale.get(locale);
   if (!formats) {
     formats = [
-      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0 }),
-      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2 }),
+      // signDisplay 'negative': a small negative rounded to zero prints as 0, not -0.
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, signDisplay: 'negative' }),
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2, signDisplay: 'negative' }),
     ];
     integerFormatsByLocale.set(locale, formats);
   }
@@ -153,6 +172,12 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
 
 /** A whole number in the language's digits ("7"; to two digits with `minimumDigits` 2: "07"), through Intl. */
 export function wholeIn(value: number, words: CommonWords = ENGLISH, minimumDigits: 1 | 2 = 1): string {
+  if (words.numerals.digits === 'ascii') {
+    // Intl rounds half away from zero; so does this. `+ 0`: no -0.
+    const rounded = Math.sign(value) * Math.round(Math.abs(value)) + 0;
+    const digits = String(Math.abs(rounded)).padStart(minimumDigits, '0');
+    return rounded < 0 ? `-${digits}` : digits;
+  }
   const [whole, twoDigits] = integerFormats(words.locale);
   // `+ 0`: the -0 of a rounded small negative prints as 0.
   return (minimumDigits === 2 ? twoDigits : whole).format(value + 0);
@@ -164,7 +189,7 @@ export function wholeIn(value: number, words: CommonWords = ENGLISH, minimumDigi
  * Spanish): only a point between two digits changes, never a full stop.
  */
 export function decimalIn(text: string, words: CommonWords = ENGLISH): string {
-  const sign = decimalSign(words.locale);
+  const sign = words.numerals.digits === 'ascii' ? words.numerals.decimalSign : decimalSign(words.locale);
   return sign === '.' ? text : text.replace(/(\d)\.(\d)/g, `$1${sign}$2`);
 }
 
@@ -229,5 +254,22 @@ export function coordinatesText(latDeg: number, lonDeg: number, words: CommonWor
  */
 export function countryName(country: { readonly code?: string | undefined; readonly name: string }, words: CommonWords = ENGLISH): string {
   if (country.code && words.countryNames[country.code]) return words.countryNames[country.code]!;
-  return (country.code && isoCountries.getName(country.code, words.locale)) || country.name;
+  return (country.code && isoCountryName(country.code, words.locale)) || country.name;
+}
+
+// The package's main entry registers all of its languages on load (about 1 MB of JSON, a good part
+// of a command's start-up); its core registers none. A language is registered the first time a
+// country's name is asked in it, so a command that names no country loads none.
+const requireLocale = createRequire(import.meta.url);
+const localesTried = new Set<string>();
+
+function isoCountryName(code: string, locale: string): string | undefined {
+  const language = locale.toLowerCase();
+  if (!localesTried.has(language)) {
+    localesTried.add(language);
+    if (isoCountries.getSupportedLanguages().includes(language)) {
+      isoCountries.registerLocale(requireLocale(`i18n-iso-countries/langs/${language}.json`) as isoCountries.LocaleData);
+    }
+  }
+  return isoCountries.getName(code, language);
 }

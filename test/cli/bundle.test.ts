@@ -4,7 +4,8 @@
  * build step must not change behaviour): the same bytes on stdout and stderr
  * and the same exit codes, for a catalogue, a local table, a caption (world data and
  * country names) and bad input. And `umbracast` runs the bundle only while it is at least as
- * new as tsc's last output.
+ * new as tsc's last output. `list` runs from its own CommonJS file with V8's code
+ * cache (src/cli/cachedBundle.mjs): the same bytes again, with the cache and without.
  */
 import assert from 'node:assert/strict';
 import { spawnSync } from 'node:child_process';
@@ -48,4 +49,38 @@ test('the bundled command line writes the same bytes and exit codes as the modul
   }
   // The bad inputs above fail as usage errors with one line each (exit 2), from both.
   assert.equal(runWith(`${dist}bundle/main.js`, ['list', '--format', 'yaml']).code, 2);
+});
+
+test('umbracast list runs from its own CommonJS file with the V8 code cache the build made, which this Node accepts', async () => {
+  const file = `${dist}bundle/list.cjs`;
+  assert.ok(existsSync(file) && existsSync(`${file}.v8cache`), 'npm run build makes dist/bundle/list.cjs and its code cache');
+  const loader: { compileBundle: (file: string) => { cachedDataRejected?: boolean } } = await import(new URL('../../src/cli/cachedBundle.mjs', import.meta.url).href);
+  const { compileBundle } = loader;
+  assert.equal(compileBundle(file).cachedDataRejected, false, 'V8 takes the cache (same Node, same source)');
+});
+
+test('umbracast list, from its cached file or compiled afresh, prints the same bytes and exit codes as tsc\'s modules', () => {
+  const bin = fileURLToPath(new URL('../../src/cli/bin.mjs', import.meta.url));
+  const cachedBundle = fileURLToPath(new URL('../../src/cli/cachedBundle.mjs', import.meta.url));
+  /** The list file run without its cache, as a Node that refuses the cache runs it. */
+  const uncached = (args: string[]) => `const { compileBundle, runBundle } = await import(${JSON.stringify(cachedBundle)});
+const file = ${JSON.stringify(`${dist}bundle/list.cjs`)};
+process.exitCode = await runBundle(compileBundle(file, { useCache: false }), file).main(${JSON.stringify(args)});`;
+  const cases = [
+    ['list', '--from', '2026', '--to', '2026'],
+    ['list', '--from', '2024', '--to', '2030', '--format', 'csv', '--body', 'solar'],
+    ['list', '--from', '2999', '--to', '3000', '--format', 'json', '--convention', 'chauvenet'],
+    ['list', '--from', '1000', '--to', '1003', '--lang', 'fr', '--body', 'lunar'],
+    ['list', '--from', '2026', '--kind', 'annular,total'],
+    ['list', '--format', 'yaml'],
+    ['list', '--from', '0999'],
+    ['list', '--help'],
+  ];
+  for (const args of cases) {
+    const expected = runWith(`${dist}cli/main.js`, args);
+    for (const command of [[bin, ...args], ['--input-type=module', '-e', uncached(args)]]) {
+      const result = spawnSync(process.execPath, command, { encoding: 'utf8', env: plainEnv() });
+      assert.deepEqual({ code: result.status, out: result.stdout, err: result.stderr }, expected, `${command[0] === bin ? 'bin.mjs' : 'without the cache'}: ${args.join(' ')}`);
+    }
+  }
 });

@@ -1,6 +1,6 @@
 /**
  * findLunarEclipses skips, unsampled, every lunation whose mean full moon lies
- * more than MEAN_FULL_MOON_REACH_DAYS outside the range asked for. The bound
+ * more than MEAN_PHASE_REACH_DAYS outside the range asked for. The bound
  * must hold with room to spare: checked over the whole supported range
  * against astronomy-engine's own lunar-eclipse search (an independent
  * ephemeris and search), and at the edges of narrow ranges.
@@ -8,8 +8,8 @@
 import assert from 'node:assert/strict';
 import { test } from 'node:test';
 import { NextLunarEclipse, SearchLunarEclipse } from 'astronomy-engine';
-import { findLunarEclipses, MEAN_FULL_MOON_REACH_DAYS } from '../../src/eclipses/lunar/catalogue.ts';
-import { SUPPORTED_RANGE } from '../../src/eclipses/common/range.ts';
+import { findLunarEclipses } from '../../src/eclipses/lunar/catalogue.ts';
+import { MEAN_PHASE_REACH_DAYS, SUPPORTED_RANGE } from '../../src/eclipses/common/range.ts';
 import { lunationIndexNear, meanFullMoonTTDays } from '../../src/eclipses/common/lunations.ts';
 import { utDaysFromDate } from '../../src/ephemeris/time.ts';
 
@@ -31,7 +31,7 @@ test('every lunar eclipse astronomy-engine finds in years 1000–3000 peaks with
   assert.ok(count > 4800, `${count} eclipses`);
   // Meeus ch. 49: true and mean phases differ by up to about 0.6 d; ΔT and greatest-vs-opposition add under 0.1 d.
   assert.ok(farthest < 0.75, `farthest ${farthest.toFixed(3)} d`);
-  assert.ok(farthest < MEAN_FULL_MOON_REACH_DAYS / 2, 'the reach has a factor of two to spare');
+  assert.ok(farthest < MEAN_PHASE_REACH_DAYS / 2, 'the reach has a factor of two to spare');
 });
 
 test('a range of an hour around an eclipse finds it, also at the ends of the supported range', () => {

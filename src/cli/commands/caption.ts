@@ -7,7 +7,8 @@ import type { CommandContext } from '../context.ts';
 import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../declare.ts';
 import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
 import { parseWhen, WHEN_EXPECTED } from '../options.ts';
-import { bodyFromFlags, eclipseChoiceFromFlags, placeChoiceFromFlags, type BodyFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
+import { bodyFromFlags, eclipseChoiceFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
+import { placeChoiceFromFlags, type PlaceFlags } from '../readMapFlags.ts';
 
 interface CaptionOptions extends PlaceFlags, EclipseFlags, BodyFlags {
   /** The caption's zone (default UTC), which also serves the place's own summary. */

@@ -13,7 +13,8 @@ import { checkTitle, DIAGRAM_SIZE, pageSize } from '../../settings/mapSettings.t
 import { flagOf } from '../flags.ts';
 import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
 import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
-import { eclipseChoiceFromFlags, pageChoiceFromFlags, placeChoiceFromFlags, type EclipseFlags, type PlaceFlags, type SizeFlags } from '../readFlags.ts';
+import { eclipseChoiceFromFlags, type EclipseFlags } from '../readFlags.ts';
+import { pageChoiceFromFlags, placeChoiceFromFlags, type PlaceFlags, type SizeFlags } from '../readMapFlags.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
 import type { CommandContext } from '../context.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';

@@ -9,7 +9,8 @@ import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/cho
 import { withBodyOptions, withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
 import { checkLanguageForBodies, chooseLanguage, type Language } from '../../settings/language.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
-import { bodyFromFlags, eclipseChoiceFromFlags, placeChoiceFromFlags, type BodyFlags, type EclipseFlags, type PlaceFlags } from '../readFlags.ts';
+import { bodyFromFlags, eclipseChoiceFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
+import { placeChoiceFromFlags, type PlaceFlags } from '../readMapFlags.ts';
 import { toolVersion } from '../version.ts';
 
 interface LocalOptions extends PlaceFlags, EclipseFlags, BodyFlags {

@@ -40,13 +40,27 @@ export function meanArgumentOfLatitude(kPhase: number): number {
  * (P, Q, W). Arithmetic only: a few sines per lunation.
  */
 export function meeusLunarGamma(k: number): number {
-  const kFull = k + 0.5;
-  const T = kFull * T_PER_LUNATION;
+  return meeusGamma(k + 0.5);
+}
+
+/**
+ * γ of Meeus ch. 54 at new moon k: the least distance of the shadow axis
+ * from the Earth's centre, in equatorial Earth radii, signed (+ north). The
+ * same series as the lunar γ, at the new moon (Meeus writes one expression
+ * for both kinds).
+ */
+export function meeusSolarGamma(k: number): number {
+  return meeusGamma(k);
+}
+
+/** Meeus ch. 54's γ at mean phase kPhase (whole: new moon; k + 0.5: full moon). */
+function meeusGamma(kPhase: number): number {
+  const T = kPhase * T_PER_LUNATION;
   const E = 1 - 0.002516 * T - 0.0000074 * T ** 2;
-  const M = (2.5534 + 29.1053567 * kFull - 0.0000014 * T ** 2 - 0.00000011 * T ** 3) * DEG;
-  const Mm = (201.5643 + 385.81693528 * kFull + 0.0107582 * T ** 2 + 0.00001238 * T ** 3 - 0.000000058 * T ** 4) * DEG;
-  const F = meanArgumentOfLatitude(kFull);
-  const node = (124.7746 - 1.56375588 * kFull + 0.0020672 * T ** 2 + 0.00000215 * T ** 3) * DEG;
+  const M = (2.5534 + 29.1053567 * kPhase - 0.0000014 * T ** 2 - 0.00000011 * T ** 3) * DEG;
+  const Mm = (201.5643 + 385.81693528 * kPhase + 0.0107582 * T ** 2 + 0.00001238 * T ** 3 - 0.000000058 * T ** 4) * DEG;
+  const F = meanArgumentOfLatitude(kPhase);
+  const node = (124.7746 - 1.56375588 * kPhase + 0.0020672 * T ** 2 + 0.00000215 * T ** 3) * DEG;
   const F1 = F - 0.02665 * DEG * Math.sin(node);
   const P = 0.207 * E * Math.sin(M) + 0.0024 * E * Math.sin(2 * M) - 0.0392 * Math.sin(Mm) + 0.0116 * Math.sin(2 * Mm)
     - 0.0073 * E * Math.sin(Mm + M) + 0.0067 * E * Math.sin(Mm - M) + 0.0118 * Math.sin(2 * F1);
@@ -88,10 +102,20 @@ export function meeusLunarGamma(k: number): number {
  */
 export const GAMMA_SERIES_MARGIN = 0.05;
 
+/**
+ * The Moon's greatest and the Sun's least distance from the Earth over years
+ * 1000–3000, rounded outward (derived above): the extremes of both kinds'
+ * shadows.
+ */
+export const DISTANCE_EXTREMES_KM = {
+  moonFarthest: 406_800,
+  sunNearest: 0.9825 * 149_597_870.7,
+} as const;
+
 const LIMIT_EXTREMES = {
-  moonParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / 406_800),
+  moonParallaxRad: Math.asin(EARTH_EQUATORIAL_RADIUS_KM / DISTANCE_EXTREMES_KM.moonFarthest),
   sunParallaxRad: ((8.794 / 0.9825) / 3600) * DEG,
-  sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / (0.9825 * 149_597_870.7)),
+  sunSemiDiameterRad: Math.asin(SUN_RADIUS_KM / DISTANCE_EXTREMES_KM.sunNearest),
 } as const;
 
 /** The largest |γ| (Earth radii) at which a convention's penumbra can still touch the Moon, years 1000–3000. */

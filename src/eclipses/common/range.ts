@@ -24,10 +24,23 @@ export function checkRange(from: Date, to: Date): void {
 }
 
 /**
- * The eclipses of a kind whose greatest (UT) falls in [from, to), in time order: `atLunation`
- * gives the eclipse of lunation k (Meeus numbering), if there is one. The caller has checked the range.
+ * How far greatest eclipse (UT) can lie from its lunation's mean full or new
+ * moon (TT), days, with room to spare: the true phase lies within about 0.6 d
+ * of the mean one (Meeus ch. 49: the periodic terms' amplitudes sum to about
+ * 0.6 d), greatest eclipse within an hour or two of the full or new moon, and
+ * TT − UT is under two hours over years 1000–3000. Tested over the whole
+ * range for both kinds (test/eclipses/lunationReach.test.ts, solarPrefilter.test.ts).
  */
-export function eclipsesInRange<E extends { readonly greatest: Moment }>(from: Date, to: Date, atLunation: (k: number) => E | undefined): E[] {
+export const MEAN_PHASE_REACH_DAYS = 2;
+
+/**
+ * The eclipses of a kind whose greatest (UT) falls in [from, to), in time order: `atLunation`
+ * gives the eclipse of lunation k (Meeus numbering), if there is one; `meanPhaseTTDays` the mean
+ * full or new moon (TT) of lunation k for that kind. Lunations whose mean phase lies farther than
+ * MEAN_PHASE_REACH_DAYS outside the range cannot put their greatest inside it: they are skipped
+ * unsampled. The caller has checked the range.
+ */
+export function eclipsesInRange<E extends { readonly greatest: Moment }>(from: Date, to: Date, atLunation: (k: number) => E | undefined, meanPhaseTTDays: (k: number) => number): E[] {
   const fromUT = utDaysFromDate(from);
   const toUT = utDaysFromDate(to);
   // TT runs ahead of UT by ΔT (under an hour here); a day of margin covers it.
@@ -35,9 +48,10 @@ export function eclipsesInRange<E extends { readonly greatest: Moment }>(from: D
   const lastK = lunationIndexNear(toUT + 1) + 1;
   const eclipses: E[] = [];
   for (let k = firstK; k <= lastK; k++) {
+    const mean = meanPhaseTTDays(k);
+    if (mean < fromUT - MEAN_PHASE_REACH_DAYS || mean > toUT + MEAN_PHASE_REACH_DAYS) continue;
     const eclipse = atLunation(k);
     if (eclipse && eclipse.greatest.utDays >= fromUT && eclipse.greatest.utDays < toUT) eclipses.push(eclipse);
   }
   return eclipses;
 }
-

@@ -45,24 +45,8 @@ export function findLunarEclipses(options: CatalogueOptions): LunarEclipse[] {
   checkRange(options.from, options.to);
   const convention = shadowConvention(options.convention ?? 'danjon');
   const deltaTModel = options.deltaT ?? standardDeltaTModel();
-  // Lunations whose mean full moon lies well outside the range cannot put their greatest inside it: skip them unsampled.
-  const earliest = utDaysFromDate(options.from) - MEAN_FULL_MOON_REACH_DAYS;
-  const latest = utDaysFromDate(options.to) + MEAN_FULL_MOON_REACH_DAYS;
-  const near = (k: number) => {
-    const mean = meanFullMoonTTDays(k);
-    return mean >= earliest && mean <= latest;
-  };
-  return eclipsesInRange(options.from, options.to, (k) => (near(k) && mayHoldLunarEclipse(k, convention) ? eclipseAtLunation(k, convention, deltaTModel) : undefined));
+  return eclipsesInRange(options.from, options.to, (k) => (mayHoldLunarEclipse(k, convention) ? eclipseAtLunation(k, convention, deltaTModel) : undefined), meanFullMoonTTDays);
 }
-
-/**
- * How far greatest eclipse (UT) can lie from its lunation's mean full moon
- * (TT), days, with room to spare: the true full moon lies within about 0.6 d
- * of the mean one (Meeus ch. 49: the periodic terms' amplitudes sum to about
- * 0.6 d), greatest eclipse within an hour or two of the full moon, and TT − UT
- * is under two hours over years 1000–3000. Tested over whole centuries.
- */
-export const MEAN_FULL_MOON_REACH_DAYS = 2;
 
 /** The eclipse at full moon k + 0.5 (Meeus numbering), if there is one. */
 export function eclipseAtLunation(k: number, convention: ShadowConvention, deltaTModel: DeltaTModel): LunarEclipse | undefined {

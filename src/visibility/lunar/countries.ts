@@ -11,7 +11,7 @@
 import { geoArea, geoCentroid } from 'd3-geo';
 import type { Feature, Geometry, Position } from 'geojson';
 import { countries as countryTable, continents as continentNames } from 'countries-list';
-import isoCountries from 'i18n-iso-countries';
+import isoCountries from 'i18n-iso-countries/index.js'; // the codes only: no language's names
 import { moonUpMargin } from './moonUp.ts';
 import { normalAt, type Normal } from '../../sphere/normal.ts';
 import { spanTests, zoneFromMargins, ZONE_ORDER, type Visibility, type ZoneName } from './visibility.ts';

@@ -7,6 +7,7 @@ import type { CommonWords } from '../common.ts';
 
 export const COMMON_GERMAN: CommonWords = {
   locale: 'de',
+  numerals: { digits: 'ascii', decimalSign: ',' },
   predictions: 'Vorhersagen: Was zu sehen ist, entscheiden Wetter und örtlicher Horizont.',
   durationUnits: {
     long: { hour: ' Std.', minute: ' Min.' },

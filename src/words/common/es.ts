@@ -10,6 +10,7 @@ const andBefore = (item: string) => (/^h?i(?![aeiouáéó])/i.test(item) ? 'e' :
 
 export const COMMON_SPANISH: CommonWords = {
   locale: 'es',
+  numerals: { digits: 'ascii', decimalSign: ',' },
   predictions: 'Son predicciones: lo que se vea dependerá del tiempo y del horizonte local.',
   durationUnits: {
     long: { hour: ' h', minute: ' min' },

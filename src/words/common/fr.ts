@@ -10,6 +10,7 @@ const NBSP = '\u00a0';
 
 export const COMMON_FRENCH: CommonWords = {
   locale: 'fr',
+  numerals: { digits: 'ascii', decimalSign: ',' },
   predictions: `Prévisions${NBSP}: la météo et l’horizon local décident de ce que l’on verra.`,
   durationUnits: {
     long: { hour: `${NBSP}h`, minute: `${NBSP}min` },

@@ -7,6 +7,7 @@ import type { CommonWords } from '../common.ts';
 
 export const COMMON_ITALIAN: CommonWords = {
   locale: 'it',
+  numerals: { digits: 'ascii', decimalSign: ',' },
   predictions: 'Sono previsioni: ciò che si vedrà dipende dal meteo e dall’orizzonte locale.',
   durationUnits: {
     long: { hour: ' h', minute: ' min' },

@@ -7,6 +7,7 @@ import type { CommonWords } from '../common.ts';
 
 export const COMMON_PORTUGUESE: CommonWords = {
   locale: 'pt',
+  numerals: { digits: 'ascii', decimalSign: ',' },
   predictions: 'São previsões: o que se verá depende do tempo e do horizonte local.',
   durationUnits: {
     long: { hour: ' h', minute: ' min' },

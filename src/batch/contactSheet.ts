@@ -13,7 +13,7 @@ import { minutesAndSeconds, solarTextWords, type SolarTextWords } from '../words
 import { isPlainRelativePath } from '../outputs/files.ts';
 import { decimalIn, fixedIn, formatDuration, roundToMinute, wholeIn } from '../words/common.ts';
 import type { LunarWords } from '../words/lunar/text.ts';
-import { chooseLanguage, hasSolarWords, LANGUAGES, type Language } from '../settings/language.ts';
+import { chooseLanguage, type Language } from '../settings/language.ts';
 import type { Manifest } from './manifest.ts';
 
 /** Solar cards: a warm rule on top, the caution boxed so that it cannot be missed (only on sheets holding a solar eclipse). */
@@ -26,11 +26,10 @@ export function styleWords(style: Readonly<Record<string, unknown>>): LunarWords
   return styleLanguage(style).lunar;
 }
 
-/** The language of a batch's style (its `lang` field), both kinds' words; a tag not offered, or one whose solar words are not written yet, reads in English. */
+/** The language of a batch's style (its `lang` field), both kinds' words; a tag not offered reads in English. */
 function styleLanguage(style: Readonly<Record<string, unknown>>): Language {
   try {
-    const language = chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined);
-    return hasSolarWords(language) ? language : { ...language, solar: LANGUAGES.en.solar };
+    return chooseLanguage(typeof style.lang === 'string' ? style.lang : undefined);
   } catch {
     return chooseLanguage(undefined);
   }

@@ -71,9 +71,8 @@ export function catalogueTable(doc: CatalogueDocument, bodies: 'lunar' | 'solar'
   const julianOf = (id: string) => julianDateOfIsoDate(id, dateWordsIn(words.common.clock));
   const solar = doc.eclipses.filter(isSolar);
   const both = solar.length > 0;
-  // A table holding a solar eclipse needs the solar words (a language lacking them is refused: checkLanguageForBodies);
-  // one without, only the count of a search that took in solar eclipses, in English where they are not written yet.
-  const BOTH = (both ? solarTextWords(solarWords) : solarWords?.text ?? SOLAR_TEXT_ENGLISH).list;
+  // A table holding a solar eclipse takes the solar words' layout; one without, only the count of a search that took in solar eclipses.
+  const BOTH = solarTextWords(solarWords).list;
   const header = both ? BOTH.header : w.catalogueHeader;
   const numeric = both ? [false, false, false, false, true, true, true, true, true, true, true, true] : [false, false, false, true, true, true, true, true, true];
   const minutes = (value: number | undefined) => (value !== undefined ? formatDuration(value * 60, 'compact', words.common) : w.absent);

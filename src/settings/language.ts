@@ -88,47 +88,13 @@ function withLocale(language: Language, locale: string): Language {
     common,
     lunar: {
       ...lunar, common, figures: { ...lunar.figures, common },
-      ...(lunar.diagram ? { diagram: { ...lunar.diagram, common } } : {}),
+      diagram: { ...lunar.diagram, common },
     },
     solar: {
       ...solar, common,
-      ...(solar.text ? { text: { ...solar.text, common } } : {}),
-      ...(solar.figures ? { figures: { ...solar.figures, common } } : {}),
-      ...(solar.diagram ? { diagram: { ...solar.diagram, common } } : {}),
+      text: { ...solar.text, common },
+      figures: { ...solar.figures, common },
+      diagram: { ...solar.diagram, common },
     },
   };
 }
-
-/** Whether a language has every solar word (the caution, which every language has, and the text, map and diagram words). */
-export function hasSolarWords(language: Language): boolean {
-  return language.solar.text !== undefined && language.solar.figures !== undefined && language.solar.diagram !== undefined;
-}
-
-/** Whether a language has the shadow diagram's words for every kind in `bodies`. */
-export function hasDiagramWords(language: Language, bodies: Iterable<'lunar' | 'solar'>): boolean {
-  return [...bodies].every((body) => (body === 'lunar' ? language.lunar.diagram !== undefined : language.solar.diagram !== undefined));
-}
-
-/**
- * A rule read from the catalogues while the translations are being written
- * (the catalogue fields are optional until then): a language is refused for an
- * output holding a solar eclipse if it lacks the solar words (hasSolarWords),
- * and for a shadow diagram (`diagram`: the figure itself or a map's inset) if
- * it lacks the diagram words of the eclipse's kind — never mixed with English.
- * The InputError names `parameter` and the languages that would do.
- */
-export function checkLanguageForBodies(language: Language, bodies: Iterable<'lunar' | 'solar'>, parameter = 'lang', output?: 'diagram'): void {
-  const kinds = [...new Set(bodies)];
-  if (kinds.includes('solar') && !hasSolarWords(language)) {
-    const ready = LANGUAGE_TAGS.filter((tag) => hasSolarWords(LANGUAGES[tag]));
-    throw new InputError(parameter, (name) =>
-      `${listOf(ready)} for an output holding a solar eclipse (the solar words are not yet written in ${language.tag}; ${name('body')} lunar keeps the lunar eclipses)`, language.tag);
-  }
-  if (output === 'diagram' && !hasDiagramWords(language, kinds)) {
-    const ready = LANGUAGE_TAGS.filter((tag) => hasDiagramWords(LANGUAGES[tag], kinds));
-    throw new InputError(parameter, `${listOf(ready)} for the shadow diagram (its words are not yet written in ${language.tag})`, language.tag);
-  }
-}
-
-/** "en", "en or es", "en, es or fr". */
-const listOf = (tags: readonly string[]) => (tags.length <= 1 ? tags.join('') : `${tags.slice(0, -1).join(', ')} or ${tags[tags.length - 1]}`);

@@ -161,9 +161,8 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
   let formats = integerFormatsByLocale.get(locale);
   if (!formats) {
     formats = [
-      // signDisplay 'negative': a small negative rounded to zero prints as 0, not -0.
-      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, signDisplay: 'negative' }),
-      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2, signDisplay: 'negative' }),
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0 }),
+      new Intl.NumberFormat(locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2 }),
     ];
     integerFormatsByLocale.set(locale, formats);
   }
@@ -172,15 +171,14 @@ function integerFormats(locale: string): readonly [Intl.NumberFormat, Intl.Numbe
 
 /** A whole number in the language's digits ("7"; to two digits with `minimumDigits` 2: "07"), through Intl. */
 export function wholeIn(value: number, words: CommonWords = ENGLISH, minimumDigits: 1 | 2 = 1): string {
+  // Halves away from zero, as Intl rounds; `+ 0`: a small negative rounded to zero prints as 0, never -0.
+  const rounded = Math.sign(value) * Math.round(Math.abs(value)) + 0;
   if (words.numerals.digits === 'ascii') {
-    // Intl rounds half away from zero; so does this. `+ 0`: no -0.
-    const rounded = Math.sign(value) * Math.round(Math.abs(value)) + 0;
     const digits = String(Math.abs(rounded)).padStart(minimumDigits, '0');
     return rounded < 0 ? `-${digits}` : digits;
   }
   const [whole, twoDigits] = integerFormats(words.locale);
-  // `+ 0`: the -0 of a rounded small negative prints as 0.
-  return (minimumDigits === 2 ? twoDigits : whole).format(value + 0);
+  return (minimumDigits === 2 ? twoDigits : whole).format(rounded);
 }
 
 /**

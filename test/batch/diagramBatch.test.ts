@@ -219,11 +219,14 @@ test('the fallback never fails: the greatest point sees every solar eclipse of 1
 test('the worker\'s memory need counts the diagram when it is the larger picture (README "Limits": 4 + 5 bytes a pixel for one raster drawing)', () => {
   // The default map (2400×1350 PNG) outweighs the diagram (1600×1000): the load is the map's, as before the field.
   assert.deepEqual(pictureLoad(validateStyle({ diagram: true })), pictureLoad(DEFAULT_STYLE));
-  // GeoJSON-only maps draw no picture; the diagram's 1600×1000 PNG is then what a worker holds.
-  assert.deepEqual(pictureLoad(validateStyle({ formats: ['geojson'], diagram: true })), { pixels: 1600 * 1000, rasterFormats: 1 });
-  assert.equal(workerNeedBytes(pictureLoad(validateStyle({ formats: ['geojson'], diagram: true }))), 210 * 1024 * 1024 + 1600 * 1000 * 9);
-  // SVG maps only (4 bytes a pixel) and a PNG diagram of the same page: the diagram's raster drawing needs more.
-  assert.deepEqual(pictureLoad(validateStyle({ formats: ['svg'], preset: 'card', diagram: ['png'] })), { pixels: 1200 * 675, rasterFormats: 1 });
+  // GeoJSON-only maps draw no picture; the diagram's 1600×1000 PNG is then what a worker holds (with the solar captions' data: both kinds by default).
+  assert.deepEqual(pictureLoad(validateStyle({ formats: ['geojson'], diagram: true })), { pixels: 1600 * 1000, rasterFormats: 1, solar: true });
+  assert.equal(workerNeedBytes(pictureLoad(validateStyle({ formats: ['geojson'], diagram: true }))), 210 * 1024 * 1024 + 130 * 1024 * 1024 + 1600 * 1000 * 9);
+  assert.equal(workerNeedBytes(pictureLoad(validateStyle({ formats: ['geojson'], diagram: true, bodies: ['lunar'] }))), 210 * 1024 * 1024 + 1600 * 1000 * 9);
+  // Lunar SVG maps only (4 bytes a pixel) and a PNG diagram of the same page: the diagram's raster drawing needs more.
+  assert.deepEqual(pictureLoad(validateStyle({ formats: ['svg'], preset: 'card', diagram: ['png'], bodies: ['lunar'] })), { pixels: 1200 * 675, rasterFormats: 1, solar: false });
+  // With solar eclipses the map is drawn as a PNG for the thumbnail anyway: one raster drawing either way.
+  assert.deepEqual(pictureLoad(validateStyle({ formats: ['svg'], preset: 'card', diagram: ['png'] })), { pixels: 1200 * 675, rasterFormats: 1, solar: true });
 });
 
 test('the manifest: the diagram role is read; a role it does not know is refused; an eclipse\'s most files (20 places, every format) fit the bound', () => {

@@ -12,7 +12,7 @@ import { test } from 'node:test';
 import { main } from '../../src/cli/main.ts';
 import { contactSheet, sheetTitle } from '../../src/batch/contactSheet.ts';
 import type { Manifest } from '../../src/batch/manifest.ts';
-import { hasSolarWords, LANGUAGE_TAGS, LANGUAGES } from '../../src/settings/language.ts';
+import { LANGUAGE_TAGS, LANGUAGES } from '../../src/settings/language.ts';
 
 async function run(args: string[], today = new Date('2026-01-10T10:00:00Z')) {
   let stdout = '';
@@ -105,45 +105,33 @@ test('list --lang fr: the table in French, kinds short, Julian dates in French m
   assert.equal(JSON.parse(json.stdout).eclipses[0].kind, 'total');
 });
 
-test('a solar eclipse in a language whose solar words are not written yet is refused, never mixed: one line naming --lang, exit 2, nothing written; one that has them is served (the catalogues decide)', async () => {
+test('a solar eclipse is served in every language: list, local and caption exit 0, with the caution (ISO 12312-2) in the language and none of the English one', async () => {
+  const englishCaution = (await run(['caption', '2026-08-12'])).stdout.split('\n').find((line) => /ISO 12312-2/.test(line))!;
   for (const tag of LANGUAGE_TAGS) {
-    const ready = hasSolarWords(LANGUAGES[tag]);
     for (const args of [
       ['list', '--from', '2026', '--to', '2026', '--lang', tag],
       ['local', '2026-08-12', '--place', 'Bilbao', '--lang', tag],
       ['caption', '2026-08-12', '--lang', tag],
     ]) {
       const { code, stdout, stderr } = await run(args);
-      if (ready) {
-        assert.equal(code, 0, `${args.join(' ')}: ${stderr}`);
-        continue;
-      }
-      assert.equal(code, 2, args.join(' '));
-      assert.equal(stdout, '');
-      assert.match(stderr.trimEnd(), new RegExp(`^umbracast: --lang: expected en(, [a-z]{2})*( or [a-z]{2})? for an output holding a solar eclipse \\(the solar words are not yet written in ${tag}; --body lunar keeps the lunar eclipses\\), received "${tag}"$`));
+      assert.equal(code, 0, `${args.join(' ')}: ${stderr}`);
+      assert.match(stdout, /ISO 12312-2/, args.join(' '));
+      if (tag !== 'en') assert.ok(!stdout.includes(englishCaution), `${args.join(' ')}: the English caution`);
     }
   }
   // The lunar eclipses of the same year are fine in every language.
   for (const tag of LANGUAGE_TAGS) assert.equal((await run(['list', '--from', '2026', '--to', '2026', '--lang', tag, '--body', 'lunar'])).code, 0, tag);
 });
 
-test('diagram --lang: a language with the diagram words draws the figure and its caption in it; one without is refused in one line naming --lang, exit 2, nothing written (the catalogues decide)', async () => {
+test('diagram --lang: a language with the diagram words draws the figure and its caption in it, in every language, both kinds', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-lang-diagram-'));
   try {
     const english = { lunar: '', solar: '' };
     for (const tag of LANGUAGE_TAGS) {
       const language = LANGUAGES[tag];
-      for (const [body, when, ready] of [['lunar', '2026-03-03', language.lunar.diagram !== undefined], ['solar', '2026-08-12', hasSolarWords(language)]] as const) {
+      for (const [body, when] of [['lunar', '2026-03-03'], ['solar', '2026-08-12']] as const) {
         const out = join(dir, `${tag}-${body}.svg`);
-        const { code, stdout, stderr } = await run(['diagram', when, '--body', body, '--place', 'Bilbao', '--lang', tag, '-o', out]);
-        if (!ready) {
-          assert.equal(code, 2, `${tag} ${body}`);
-          assert.equal(stdout, '');
-          assert.equal(stderr.split('\n').length, 2, stderr);
-          assert.match(stderr, new RegExp(`^umbracast: --lang: expected en.* for (the shadow diagram|an output holding a solar eclipse) .*received "${tag}"\\n$`));
-          assert.ok(!existsSync(out) && !existsSync(out.replace(/\.svg$/, '.txt')), `${tag} ${body}: nothing written`);
-          continue;
-        }
+        const { code, stderr } = await run(['diagram', when, '--body', body, '--place', 'Bilbao', '--lang', tag, '-o', out]);
         assert.equal(code, 0, `${tag} ${body}: ${stderr}`);
         const caption = readFileSync(out.replace(/\.svg$/, '.txt'), 'utf8');
         // The caption ends with the language's own alt-text wording, and differs from the English one.

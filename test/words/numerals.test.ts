@@ -46,11 +46,11 @@ test('a catalogue moved to a region writes numbers as Intl does there: de-CH a d
   assert.equal(fixedIn(1.5, 2, canadian), '1,50');
 });
 
-test('whole numbers (wholeIn) are Intl.NumberFormat\'s in every catalogue\'s locale: halves rounded away from zero, negatives, two digits, no -0', () => {
+test('whole numbers (wholeIn) are Intl.NumberFormat\'s (signDisplay "negative", ECMA-402) in every catalogue\'s locale: halves rounded away from zero, negatives, two digits, no -0', () => {
   for (const tag of LANGUAGE_TAGS) {
     const common = chooseLanguage(tag).common;
-    const whole = new Intl.NumberFormat(common.locale, { useGrouping: false, maximumFractionDigits: 0, signDisplay: 'negative' });
-    const twoDigits = new Intl.NumberFormat(common.locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2, signDisplay: 'negative' });
+    const whole = new Intl.NumberFormat(common.locale, { useGrouping: false, maximumFractionDigits: 0, signDisplay: 'negative' } as unknown as Intl.NumberFormatOptions);
+    const twoDigits = new Intl.NumberFormat(common.locale, { useGrouping: false, maximumFractionDigits: 0, minimumIntegerDigits: 2, signDisplay: 'negative' } as unknown as Intl.NumberFormatOptions);
     for (let tenths = -4000; tenths <= 4000; tenths++) {
       const value = tenths / 10;
       assert.equal(wholeIn(value, common), whole.format(value + 0), `${tag}: ${value}`);

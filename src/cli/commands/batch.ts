@@ -21,7 +21,6 @@ import { parseNumber, parseRange } from '../options.ts';
 import { kindsFromFlags, type BodyFlags } from '../readFlags.ts';
 import { toolVersion } from '../version.ts';
 import { counted } from '../../outputs/counted.ts';
-import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
 
 interface BatchCommandOptions extends BodyFlags {
   from?: string;
@@ -106,7 +105,6 @@ async function batchAction(options: BatchCommandOptions, context: CommandContext
   const styled = options.style === undefined ? DEFAULT_STYLE : loadStyle(options.style);
   const style: HouseStyle = { ...styled, bodies: bodiesFrom(options.body, styled) };
   // Kinds are checked against the bodies taken: annular and hybrid are solar, penumbral lunar, total and partial both.
-  checkLanguageForBodies(chooseLanguage(style.lang, 'style lang'), style.bodies, 'style lang');
   const kinds = kindsFromFlags({ kind: options.kind }, style.bodies.length === 1 ? style.bodies[0]! : 'all');
   for (const notice of checkStyleSettings(style, options.style ?? 'the default style')) context.stderr(`${printable(notice)}\n`);
   const jobs = options.jobs === undefined ? availableParallelism() : parseNumber('--jobs', options.jobs, { min: 1, max: MAX_JOBS, unit: 'worker processes' });

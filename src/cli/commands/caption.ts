@@ -5,7 +5,7 @@ import { chooseEclipse, choosePlace } from '../../settings/choose.ts';
 import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../declare.ts';
-import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
+import { chooseLanguage } from '../../settings/language.ts';
 import { parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
 import { placeChoiceFromFlags, type PlaceFlags } from '../readMapFlags.ts';
@@ -32,7 +32,6 @@ export function registerCaption(program: Command, context: CommandContext): void
       const chosen = choosePlace(placeChoiceFromFlags(options), false, 'place', flagOf('place'));
       // An id resolves to its own eclipse; a date near both a lunar and a solar eclipse names both unless --body is given.
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), bodyFromFlags(options));
-      checkLanguageForBodies(language, [eclipse.body]);
       if (chosen?.notice) context.stderr(`${chosen.notice}\n`);
       if (eclipse.body === 'solar') {
         const [{ solarCaption, solarCaptionText }, { solarLocalReport }] = await Promise.all([import('../../outputs/solarCaption.ts'), import('../../outputs/solarLocal.ts')]);

@@ -12,7 +12,7 @@ import { solarGreatestPointName } from '../../words/solar/diagram.ts';
 import { checkTitle, DIAGRAM_SIZE, pageSize } from '../../settings/mapSettings.ts';
 import { flagOf } from '../flags.ts';
 import { withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
-import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
+import { chooseLanguage } from '../../settings/language.ts';
 import { eclipseChoiceFromFlags, type EclipseFlags } from '../readFlags.ts';
 import { pageChoiceFromFlags, placeChoiceFromFlags, type PlaceFlags, type SizeFlags } from '../readMapFlags.ts';
 import { civilClock } from '../../ephemeris/civilTime.ts';
@@ -53,7 +53,6 @@ export function registerDiagram(program: Command, context: CommandContext): void
       const body = options.body === undefined ? 'all' : parseChoice('--body', options.body, DIAGRAM_BODIES);
       const eclipse = chooseEclipseOfBody(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), body);
       const language = chooseLanguage(options.lang, flagOf('lang'));
-      checkLanguageForBodies(language, [eclipse.body], 'lang', 'diagram');
       const clockWords = language.common.clock;
       const placeChoice = placeChoiceFromFlags(options);
       const generator = `umbracast ${toolVersion()}`;

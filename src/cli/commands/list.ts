@@ -7,7 +7,7 @@ import { CATALOGUE_FORMATS, catalogueCsv, catalogueJson, catalogueTable } from '
 import { parseChoice, parseRange } from '../options.ts';
 import type { CommandContext } from '../context.ts';
 import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../declare.ts';
-import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
+import { chooseLanguage } from '../../settings/language.ts';
 import { flagOf } from '../flags.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, kindsFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
 
@@ -35,7 +35,6 @@ export function registerList(program: Command, context: CommandContext): void {
       const search = searchOptionsOf(choice, body);
       const eclipses = findEclipses({ ...search, ...range }).filter((e) => kinds === undefined || kinds.includes(e.kind));
       const doc = catalogueDocument(eclipses, { convention: choice.convention, deltaTModel: search.deltaT!.name, ...range });
-      if (format === 'table') checkLanguageForBodies(language, eclipses.map((e) => e.body));
       context.stdout(format === 'table' ? catalogueTable(doc, body, language.lunar, language.solar) : format === 'json' ? catalogueJson(doc) : catalogueCsv(doc));
     });
 }

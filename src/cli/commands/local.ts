@@ -7,7 +7,7 @@ import { flagOf } from '../flags.ts';
 import type { CommandContext } from '../context.ts';
 import { chooseEclipse, choosePlace, type ChosenPlace } from '../../settings/choose.ts';
 import { withBodyOptions, withEclipseOptions, withLanguageOption, withPlaceOptions } from '../declare.ts';
-import { checkLanguageForBodies, chooseLanguage, type Language } from '../../settings/language.ts';
+import { chooseLanguage, type Language } from '../../settings/language.ts';
 import { parseChoice, parseWhen, WHEN_EXPECTED } from '../options.ts';
 import { bodyFromFlags, eclipseChoiceFromFlags, type BodyFlags, type EclipseFlags } from '../readFlags.ts';
 import { placeChoiceFromFlags, type PlaceFlags } from '../readMapFlags.ts';
@@ -30,7 +30,6 @@ export function registerLocal(program: Command, context: CommandContext): void {
       const chosen = choosePlace(placeChoiceFromFlags(options), true, 'place', flagOf('place'));
       const body = bodyFromFlags(options);
       const eclipse = chooseEclipse(parseWhen(whenText), eclipseChoiceFromFlags(options), context.now(), body);
-      checkLanguageForBodies(language, [eclipse.body]);
       if (chosen.notice) context.stderr(`${chosen.notice}\n`);
       context.stdout(renderLocal(eclipse, chosen, format, language));
     });

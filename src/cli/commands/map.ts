@@ -18,7 +18,6 @@ import { withBodyOptions, withEclipseOptions, withLanguageOption } from '../decl
 import { bodyFromFlags, eclipseChoiceFromFlags, type BodyFlags, type Underlay } from '../readFlags.ts';
 import { mapChoicesFromFlags, type MapFlags } from '../readMapFlags.ts';
 import { chooseEclipse, placeNotices, type EclipseChoice } from '../../settings/choose.ts';
-import { checkLanguageForBodies, chooseLanguage } from '../../settings/language.ts';
 import { DEFAULT_SIZE, mapSettings, type MapChoices } from '../../settings/mapSettings.ts';
 
 
@@ -134,8 +133,6 @@ export async function runMap(whenText: string | undefined, options: MapFlags & B
   const eclipseChoice = eclipseChoiceFromFlags(options, style?.eclipse);
   // --body (default all): a date names the eclipse it falls on or near, of either kind (near both: an input error naming both).
   const eclipse = chooseEclipse(when, eclipseChoice, context.now(), bodyFromFlags(options));
-  // A language is refused where its words for this output are not written yet (the inset: the diagram's words).
-  checkLanguageForBodies(chooseLanguage(choices.lang), [eclipse.body], 'lang', settings.style.inset === 'diagram' && eclipse.body === 'lunar' ? 'diagram' : undefined);
   const solar = eclipse.body === 'solar';
   // A solar card shows the path by default: its file says so.
   const stem = `${eclipse.id}-${eclipse.kind}${solar && settings.style.fitPath ? '-path' : viewStem(settings.style.view)}`;

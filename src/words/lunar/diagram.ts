@@ -118,11 +118,9 @@ export const LUNAR_DIAGRAM_ENGLISH: LunarDiagramWords = {
 /** The conventions' authors, where no lunar catalogue is given (English). */
 const CONVENTION_ENGLISH = { danjon: 'Danjon', chauvenet: 'Chauvenet' } as const;
 
-/** The diagram words of a lunar catalogue (English when none is given); a catalogue without them is refused before any output is made. */
+/** The diagram words of a lunar catalogue (English when none is given). */
 export function lunarDiagramWords(lunar?: LunarWords): LunarDiagramWords {
-  if (lunar === undefined) return LUNAR_DIAGRAM_ENGLISH;
-  if (lunar.diagram === undefined) throw new Error(`lunar diagram words missing for ${lunar.common.locale}`);
-  return lunar.diagram;
+  return lunar === undefined ? LUNAR_DIAGRAM_ENGLISH : lunar.diagram;
 }
 
 /** A label beside a drawn Moon: "U2 03:26" or "Greatest 06:58". */

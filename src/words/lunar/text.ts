@@ -31,13 +31,8 @@ export interface LunarWords {
   readonly common: CommonWords;
   /** The map's and the sky figure's words (figures.ts), in the same language. */
   readonly figures: LunarFigureWords;
-  /**
-   * The shadow diagram's words (diagram.ts). Optional only while the translations are being written, so that
-   * the shape can be merged before them: a language lacking them is refused for the diagram and the map's
-   * diagram inset (settings/language.ts, checkLanguageForBodies), never mixed with English; once every language
-   * has them this becomes required and that rule goes.
-   */
-  readonly diagram?: LunarDiagramWords;
+  /** The shadow diagram's words (diagram.ts), in the same language. */
+  readonly diagram: LunarDiagramWords;
   /** "Total", as a title starts. */
   readonly kindTitle: Readonly<Record<EclipseKind, string>>;
   /** "total", inside a sentence or a table. */

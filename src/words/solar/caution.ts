@@ -27,16 +27,12 @@ export interface SolarWords {
   readonly body: 'solar';
   readonly common: CommonWords;
   readonly caution: SolarCautionWords;
-  // `text`, `figures` and `diagram` are optional only while the translations are being written, so that
-  // the catalogue's shape can be merged before them: a language lacking one is refused for the outputs that
-  // need it (settings/language.ts, checkLanguageForBodies), never mixed with English. Once every language
-  // has them, they become required and that rule goes.
   /** The local formats' words, the summary, the caption and alt text, the contact sheet's solar cards (text.ts). */
-  readonly text?: SolarTextWords;
+  readonly text: SolarTextWords;
   /** Every word of the solar map: legend, line labels, marks, small print, caption and alt text (figures.ts). */
-  readonly figures?: SolarFigureWords;
+  readonly figures: SolarFigureWords;
   /** The solar diagram's words: the Sun and the Moon from a place at maximum, and its caption (diagram.ts). */
-  readonly diagram?: SolarDiagramWords;
+  readonly diagram: SolarDiagramWords;
 }
 
 export const SOLAR_ENGLISH: SolarWords = {

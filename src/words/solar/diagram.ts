@@ -99,15 +99,9 @@ export const SOLAR_DIAGRAM_ENGLISH: SolarDiagramWords = {
   },
 };
 
-/**
- * The diagram words of a solar catalogue (English when none is given). A
- * catalogue without them is refused before any output is made
- * (checkLanguageForBodies); reaching here without them is a fault.
- */
+/** The diagram words of a solar catalogue (English when none is given). */
 export function solarDiagramWords(solar?: SolarWords): SolarDiagramWords {
-  if (solar === undefined) return SOLAR_DIAGRAM_ENGLISH;
-  if (solar.diagram === undefined) throw new Error(`solar diagram words missing for ${solar.common.locale}`);
-  return solar.diagram;
+  return solar === undefined ? SOLAR_DIAGRAM_ENGLISH : solar.diagram;
 }
 
 /** How the figure names the default place: the greatest point, with its position. */

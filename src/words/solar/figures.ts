@@ -127,16 +127,9 @@ export const SOLAR_FIGURES_ENGLISH: SolarFigureWords = {
   },
 };
 
-/**
- * The figure words of a solar catalogue (English when none is given). A
- * catalogue without them is refused before any output is made
- * (checkLanguageForBodies); reaching here without them is a fault, never a
- * reason to mix English in.
- */
+/** The figure words of a solar catalogue (English when none is given). */
 function figureWords(solar: SolarWords | undefined): SolarFigureWords {
-  if (solar === undefined) return SOLAR_FIGURES_ENGLISH;
-  if (solar.figures === undefined) throw new Error(`solar map words missing for ${solar.common.locale}`);
-  return solar.figures;
+  return solar === undefined ? SOLAR_FIGURES_ENGLISH : solar.figures;
 }
 
 /** "4 min 28 s", "52 s": a central phase's length, to the second. */

@@ -221,15 +221,9 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
   },
 };
 
-/**
- * The text words of a solar catalogue (English when none is given). A
- * catalogue without them is refused before any output is made
- * (checkLanguageForBodies); reaching here without them is a fault.
- */
-export function solarTextWords(solar?: { readonly text?: SolarTextWords; readonly common: CommonWords }): SolarTextWords {
-  if (solar === undefined) return SOLAR_TEXT_ENGLISH;
-  if (solar.text === undefined) throw new Error(`solar text words missing for ${solar.common.locale}`);
-  return solar.text;
+/** The text words of a solar catalogue (English when none is given). */
+export function solarTextWords(solar?: { readonly text: SolarTextWords }): SolarTextWords {
+  return solar === undefined ? SOLAR_TEXT_ENGLISH : solar.text;
 }
 
 /** "4 min 28 s", "52 s": central durations to the second. */

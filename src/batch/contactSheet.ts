@@ -105,10 +105,10 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const greatestUtDays = (Date.parse(entry.record.greatest) - Date.UTC(2000, 0, 1, 12)) / 86_400_000;
     const solar = entry.body === 'solar' ? entry.record : undefined;
     // A kind this version does not know (a manifest from another) is printed as it stands.
+    const lunarKind = (WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind;
     const kind = solar
       ? (solarText.sheet.kind as Readonly<Record<string, string>>)[solar.kind] ?? solar.kind
-      : mixed ? solarText.sheet.lunarKind((WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind)
-        : (WORDS.kind as Readonly<Record<string, string>>)[entry.record.kind] ?? entry.record.kind;
+      : mixed ? solarText.sheet.lunarKind(lunarKind) : lunarKind;
     const r = entry.record;
     // The figures as the maps print them: rounded once, from the full value (record.printed).
     const p = entry.body !== 'solar' ? entry.record.printed ?? figuresFromRecord(entry.record) : undefined;
@@ -127,7 +127,7 @@ export function contactSheet(manifest: Manifest, title: string, thumbSize: (path
     const dimensions = size ? ` width="${size[0]}" height="${size[1]}"` : '';
     const date = clock.date(greatestUtDays);
     const image = thumb
-      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(solar ? solarText.sheet.thumbnailAlt(kind, date) : w.thumbnailAlt(kind, date))}"${dimensions} loading="lazy"></a>`
+      ? `<a href="${escapeXml(href(entry.files.find((f) => f.role === 'map')?.path ?? thumb.path))}"><img src="${escapeXml(href(thumb.path))}" alt="${escapeXml(solar ? solarText.sheet.thumbnailAlt(kind, date) : w.thumbnailAlt(lunarKind, date))}"${dimensions} loading="lazy"></a>`
       : '';
     // Beside every solar eclipse, the eye-safety caution (short form, scoped to the eclipse's kind); nothing else of it is lunar.
     const caution = solar

@@ -172,11 +172,14 @@ function glyphAtSize(weight: FontWeight, g: GlyphShape, sizePx: number): GlyphAt
   return sized;
 }
 
-/** Greedy word wrap to a width, px. */
+/** White space a line may break at: any but the no-break spaces (U+00A0, U+2007, U+202F), which keep French "mot ;" and "23 %" whole. */
+const BREAKABLE_SPACE = /[^\S\u00a0\u2007\u202f]+/;
+
+/** Greedy word wrap to a width, px; never at a no-break space (Unicode UAX #14, class GL). */
 export function wrapText(text: string, style: TextStyle, maxWidthPx: number): string[] {
   const lines: string[] = [];
   let current = '';
-  for (const word of text.split(/\s+/).filter(Boolean)) {
+  for (const word of text.split(BREAKABLE_SPACE).filter(Boolean)) {
     const candidate = current ? `${current} ${word}` : word;
     if (current && measureText(candidate, style) > maxWidthPx) {
       lines.push(current);

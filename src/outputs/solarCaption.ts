@@ -231,16 +231,19 @@ function largestCities(): CityRow[] {
   return (largeCities = found.sort((a, b) => b.population - a.population || a.geonameId - b.geonameId));
 }
 
+/** A city is named for what its readers can notice: at least 1 % of the Sun covered with the Sun up (a sliver under that prints as "0 %" or "under 1 %"). */
+const CITY_LEAST_OBSCURATION = 0.01;
+
 /**
  * What the largest cities see: those in the path first (most populous
- * first), then those that see a partial eclipse, up to `count` in all, at
+ * first), then those that see a partial eclipse of at least 1 %, up to `count` in all, at
  * most half of them from one country so that one country does not fill the list.
  */
 export function citySights(eclipse: SolarEclipse, count: number): CitySight[] {
   if (count <= 0) return [];
   const sights: CitySight[] = [];
   for (const city of largestCities()) {
-    if (greatestObscurationSeen(eclipse, [city.lonDeg, city.latDeg]) <= 0) continue;
+    if (greatestObscurationSeen(eclipse, [city.lonDeg, city.latDeg]) < CITY_LEAST_OBSCURATION) continue;
     const local = solarLocalCircumstances(eclipse, { latDeg: city.latDeg, lonDeg: city.lonDeg });
     if (local.kind === 'none') continue;
     const central = local.kind === 'total' || local.kind === 'annular';

@@ -143,7 +143,8 @@ function seenWords(local: SolarLocalCircumstances, words: SolarTextWords): strin
   switch (local.kind) {
     case 'total': return seen.total(m);
     case 'annular': return seen.annular(m, o);
-    case 'partial': return seen.partial(m, o);
+    // The Sun below the horizon at maximum: what is seen is the most covered while it is up, not the maximum's figures.
+    case 'partial': return local.events.find((e) => e.event === 'maximum')?.sunUp === false ? seen.partialLow(percent(local.obscurationSeen, words)) : seen.partial(m, o);
     case 'none': return seen.none;
   }
 }

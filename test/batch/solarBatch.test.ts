@@ -109,6 +109,10 @@ test('a batch of both bodies: the caution in every solar output and on its card,
   assert.match(cards.get('2026-02-17')!, /<p class="caution"><strong>Eye safety: [^<]*ISO 12312-2/);
   assert.doesNotMatch(cards.get('2026-02-17')!, NAKED_EYE);
   assert.doesNotMatch(cards.get('2026-03-03')!, CAUTION);
+  // Each thumbnail's alt text names its eclipse once (common practice: alt text reads as a plain sentence).
+  assert.match(cards.get('2026-03-03')!, /alt="Visibility map of the total lunar eclipse of /);
+  assert.match(cards.get('2026-02-17')!, /alt="Map of the annular solar eclipse of /);
+  assert.doesNotMatch(html, /\b(lunar lunar|solar solar)\b/);
   // catalogue.csv (umbracast.catalogue/2's columns: body, then id) holds both eclipses, the caution on the solar row only.
   const rows = readFileSync(join(out, 'catalogue.csv'), 'utf8').trim().split('\n').slice(1);
   assert.deepEqual(rows.map((l) => l.split(',').slice(0, 2).join(',')), ['solar,2026-02-17', 'lunar,2026-03-03']);

@@ -135,6 +135,16 @@ test('every theme and preset: the caution in the header band and small print, ne
   }
 });
 
+test('every theme: the Moon\'s disc is drawn in a colour other than the paper\'s, so that at totality it is seen against the page (common practice: a figure shows what it names)', () => {
+  for (const name of THEME_NAMES) {
+    const { scene } = sceneFor(CASES[0], THEMES[name]);
+    const r = scene.moon.r.toFixed(2).replace(/\.?0+$/, '');
+    const moon = new RegExp(`<circle cx="[-\\d.]+" cy="[-\\d.]+" r="${r}[\\d]*" fill="(#[0-9a-f]{6})"`, 'i').exec(scene.svg);
+    assert.ok(moon, `${name}: the Moon's disc`);
+    assert.notEqual(moon[1]!.toLowerCase(), THEMES[name].paper.toLowerCase(), name);
+  }
+});
+
 test('the command: default place the greatest point, a named place, the caption with the caution; bad input one line, exit 2, nothing written', async () => {
   const dir = mkdtempSync(join(tmpdir(), 'umbracast-solar-diagram-'));
   const first = await run(['diagram', '2026-08-12', '-o', join(dir, 'a.png')]);

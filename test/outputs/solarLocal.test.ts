@@ -256,3 +256,18 @@ test('same inputs, same bytes', () => {
     assert.equal(render(again), render(first));
   }
 });
+
+test('the Sun below the horizon at maximum: "seen here" gives the most covered while the Sun is up, not the maximum\'s figures (astronomy-engine: the Sun\'s altitude at peak)', () => {
+  // Palermo, 2026-08-12: the Sun sets eclipsed, well before the (central) maximum there.
+  const place: PlaceLabel = { name: 'Palermo', latDeg: 38.12, lonDeg: 13.36, tz: 'Europe/Rome' };
+  const eclipse = solarEclipseOn('2026-08-12');
+  const engine = SearchLocalSolarEclipse(MakeTime(new Date('2026-08-12T00:00:00Z')), new EngineObserver(place.latDeg, place.lonDeg, 0));
+  assert.ok(engine.peak.altitude < -3, `astronomy-engine puts the Sun at ${engine.peak.altitude}° at peak`);
+  const report = solarLocalReport(eclipse, { place, clock: civilClock(place.tz) });
+  assert.equal(report.local.kind, 'partial');
+  assert.ok(report.local.obscuration > 0.99 && report.local.obscurationSeen < 0.6, `${report.local.obscuration} / ${report.local.obscurationSeen}`);
+  const seen = solarLocalTable(report).split('\n').find((line) => line.startsWith('Seen here'))!;
+  assert.equal(seen, `Seen here: partial, at most ${Math.round(report.local.obscurationSeen * 100)} % of the Sun's disc covered while the Sun is up (the maximum comes with the Sun below the horizon).`);
+  // The summary names the altitude without a sign before "below".
+  assert.match(report.summary, /with the Sun \d+° below the horizon/);
+});

@@ -49,7 +49,9 @@ const DEG = Math.PI / 180;
 
 /** The discs' ink, on the figure and in its legend alike. */
 const sunInk = (theme: Theme, unit: number) => `fill="${theme.track.penumbral}" stroke="${theme.text}" stroke-width="${n2(1.2 * unit)}"`;
-const moonInk = (theme: Theme, unit: number) => `fill="${theme.sky.night}" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"`;
+/** The Moon's dark side, as the night sky's colour; where that is the paper's own (the dark theme), the next sky shade, so that the disc stays visible at totality. */
+const moonFill = (theme: Theme) => (theme.sky.night.toLowerCase() === theme.paper.toLowerCase() ? theme.sky.civil : theme.sky.night);
+const moonInk = (theme: Theme, unit: number) => `fill="${moonFill(theme)}" stroke="${theme.textMuted}" stroke-width="${n2(0.8 * unit)}"`;
 const moonOutlineInk = (theme: Theme, unit: number) => `fill="none" stroke="${theme.text}" stroke-width="${n2(1.1 * unit)}" stroke-dasharray="${n2(5 * unit)} ${n2(3 * unit)}"`;
 
 export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDiagramScene {

@@ -100,7 +100,7 @@ const TEXT: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'Totalität' : kind === 'annular' ? 'Ringphase' : 'zentrale Phase'} ${duration} im Maximum`,
     width: (km) => `Zonenbreite ${km} km`,
     saros: (n) => `Saros ${n}`,
-    noMap: 'Bildunterschrift und GeoJSON-Geometrie; noch kein Kartenbild.',
+    noMap: 'Bildunterschrift und GeoJSON-Geometrie; der Hausstil verlangt kein Kartenbild.',
     thumbnailAlt: (kind, date) => `Sichtbarkeitskarte: ${kind} vom ${date}`,
     // The German lunar kind already names the Moon („totale Mondfinsternis“).
     lunarKind: (kind) => kind,
@@ -131,6 +131,7 @@ const TEXT: SolarTextWords = {
       total: (m) => `Hier zu sehen: total (Größe ${m}).`,
       annular: (m, o) => `Hier zu sehen: ringförmig (Größe ${m}, ${o} der Sonnenscheibe bedeckt).`,
       partial: (m, o) => `Hier zu sehen: partiell (Größe ${m}, im Maximum ${o} der Sonnenscheibe bedeckt).`,
+      partialLow: (o) => `Hier zu sehen: partiell, solange die Sonne über dem Horizont steht, höchstens ${o} der Sonnenscheibe bedeckt (das Maximum fällt in die Zeit, in der die Sonne unter dem Horizont steht).`,
       none: 'Hier ist nichts zu sehen.',
     },
     timeNote: (zone) =>

@@ -89,7 +89,7 @@ const TEXT: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'totalidad' : kind === 'annular' ? 'fase anular' : 'fase central'} de ${duration} en el máximo`,
     width: (km) => `franja de ${km} km de ancho`,
     saros: (n) => `saros ${n}`,
-    noMap: 'Pie de foto y geometría GeoJSON; aún sin imagen del mapa.',
+    noMap: 'Pie de foto y geometría GeoJSON; el estilo no pide imagen del mapa.',
     thumbnailAlt: (kind, date) => `Mapa del eclipse ${kind} del ${date}`,
     lunarKind: (kind) => `${kind} de Luna`,
   },
@@ -119,6 +119,7 @@ const TEXT: SolarTextWords = {
       total: (m) => `Desde aquí: eclipse total (magnitud ${decimal(m)}).`,
       annular: (m, o) => `Desde aquí: eclipse anular (magnitud ${decimal(m)}; ${o} del disco solar cubierto).`,
       partial: (m, o) => `Desde aquí: eclipse parcial (magnitud ${decimal(m)}; ${o} del disco solar cubierto en el máximo).`,
+      partialLow: (o) => `Desde aquí: eclipse parcial, con a lo sumo ${o} del disco solar cubierto mientras el Sol está sobre el horizonte (el máximo llega con el Sol ya bajo el horizonte).`,
       none: 'Desde aquí no se ve nada.',
     },
     timeNote: (zone) =>

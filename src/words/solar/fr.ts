@@ -91,7 +91,7 @@ const SOLAR_TEXT: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'totalité' : kind === 'annular' ? 'annularité' : 'phase centrale'} ${duration} au maximum`,
     width: (km) => `bande de ${km}${NBSP}km de large`,
     saros: (n) => `saros ${n}`,
-    noMap: `Légende et géométrie GeoJSON${NBSP}; pas encore d’image de la carte.`,
+    noMap: `Légende et géométrie GeoJSON${NBSP}; le style ne demande pas d’image de la carte.`,
     thumbnailAlt: (kind, date) => `Carte de visibilité de l’${kind} du ${date}`,
     // The French lunar kind already names the Moon (« éclipse totale de Lune »).
     lunarKind: (kind) => kind,
@@ -122,6 +122,7 @@ const SOLAR_TEXT: SolarTextWords = {
       total: (m) => `Vue d’ici${NBSP}: totale (magnitude ${m}).`,
       annular: (m, o) => `Vue d’ici${NBSP}: annulaire (magnitude ${m}, ${o} du disque solaire couvert).`,
       partial: (m, o) => `Vue d’ici${NBSP}: partielle (magnitude ${m}, ${o} du disque solaire couvert au maximum).`,
+      partialLow: (o) => `Vue d’ici${NBSP}: partielle, au plus ${o} du disque solaire couvert tant que le Soleil est levé (le maximum survient le Soleil sous l’horizon).`,
       none: `Vue d’ici${NBSP}: invisible.`,
     },
     timeNote: (zone) =>

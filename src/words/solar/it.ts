@@ -157,7 +157,7 @@ export const SOLAR_TEXT_ITALIAN: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'totalità' : kind === 'annular' ? 'anularità' : 'fase centrale'} ${duration} al massimo`,
     width: (km) => `fascia larga ${km} km`,
     saros: (n) => `saros ${n}`,
-    noMap: 'Didascalia e geometria GeoJSON; per ora nessuna immagine della mappa.',
+    noMap: 'Didascalia e geometria GeoJSON; lo stile non chiede un’immagine della mappa.',
     // `kind` is one of `kind` above: "Mappa dell’eclissi totale di Sole del 12 agosto 2026".
     thumbnailAlt: (kind, date) => `Mappa dell’eclissi ${kind} ${ofDate(date)}`,
     lunarKind: (kind) => `${kind} di Luna`,
@@ -189,6 +189,7 @@ export const SOLAR_TEXT_ITALIAN: SolarTextWords = {
       total: (m) => `Da qui si vede un’eclissi totale (magnitudine ${number(m)}).`,
       annular: (m, o) => `Da qui si vede un’eclissi anulare (magnitudine ${number(m)}; è coperto ${thePercent(o)} del disco solare).`,
       partial: (m, o) => `Da qui si vede un’eclissi parziale (magnitudine ${number(m)}; al massimo è coperto ${thePercent(o)} del disco solare).`,
+      partialLow: (o) => `Da qui si vede un’eclissi parziale: finché il Sole è sopra l’orizzonte è coperto al più ${thePercent(o)} del disco solare (il massimo avviene con il Sole sotto l’orizzonte).`,
       none: 'Da qui l’eclissi non è visibile.',
     },
     timeNote: (zone) =>

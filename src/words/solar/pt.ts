@@ -146,7 +146,7 @@ export const SOLAR_TEXT_PORTUGUESE: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'totalidade' : kind === 'annular' ? 'fase anular' : 'fase central'} ${duration} no máximo`,
     width: (km) => `faixa de ${km} km de largura`,
     saros: (n) => `saros ${n}`,
-    noMap: 'Legenda e geometria GeoJSON; ainda sem imagem do mapa.',
+    noMap: 'Legenda e geometria GeoJSON; o estilo não pede imagem do mapa.',
     // `kind` is one of `kind` above: "Mapa do eclipse total do Sol de 12 de agosto de 2026".
     thumbnailAlt: (kind, date) => `Mapa do eclipse ${kind} de ${date}`,
     lunarKind: (kind) => `${kind} da Lua`,
@@ -177,6 +177,7 @@ export const SOLAR_TEXT_PORTUGUESE: SolarTextWords = {
       total: (m) => `Daqui vê-se um eclipse total (magnitude ${number(m)}).`,
       annular: (m, o) => `Daqui vê-se um eclipse anular (magnitude ${number(m)}; ${o} do disco solar coberto).`,
       partial: (m, o) => `Daqui vê-se um eclipse parcial (magnitude ${number(m)}; ${o} do disco solar coberto no máximo).`,
+      partialLow: (o) => `Daqui vê-se um eclipse parcial, com no máximo ${o} do disco solar coberto enquanto o Sol está acima do horizonte (o máximo dá-se com o Sol abaixo do horizonte).`,
       none: 'Daqui não se vê o eclipse.',
     },
     timeNote: (zone) =>

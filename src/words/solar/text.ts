@@ -81,6 +81,8 @@ export interface SolarTextWords {
       readonly total: (magnitude: string) => string;
       readonly annular: (magnitude: string, obscuration: string) => string;
       readonly partial: (magnitude: string, obscuration: string) => string;
+      /** Partial, the Sun below the horizon at maximum: the most seen while it is up. */
+      readonly partialLow: (obscurationSeen: string) => string;
       readonly none: string;
     };
     readonly timeNote: (zoneDescription: string) => string;
@@ -159,7 +161,7 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
     central: (kind, duration) => `${kind === 'total' ? 'totality' : kind === 'annular' ? 'annularity' : 'central phase'} ${duration} at greatest`,
     width: (km) => `path ${km} km wide`,
     saros: (n) => `saros ${n}`,
-    noMap: 'Caption and GeoJSON geometry; no map picture yet.',
+    noMap: 'Caption and GeoJSON geometry; the style asks for no map picture.',
     thumbnailAlt: (kind, date) => `Map of the ${kind} eclipse of ${date}`,
     lunarKind: (kind) => `${kind} lunar`,
   },
@@ -188,6 +190,7 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
       total: (m) => `Seen here: total (magnitude ${m}).`,
       annular: (m, o) => `Seen here: annular (magnitude ${m}, ${o} of the Sun's disc covered).`,
       partial: (m, o) => `Seen here: partial (magnitude ${m}, ${o} of the Sun's disc covered at maximum).`,
+      partialLow: (o) => `Seen here: partial, at most ${o} of the Sun's disc covered while the Sun is up (the maximum comes with the Sun below the horizon).`,
       none: 'Seen here: nothing.',
     },
     timeNote: (zone) =>
@@ -203,7 +206,7 @@ export const SOLAR_TEXT_ENGLISH: SolarTextWords = {
       `From ${place} ${kind === 'total' ? 'the Sun is totally eclipsed' : 'the Moon stands wholly inside the Sun\'s disc, leaving a bright ring,'} for ${duration}, ${from} to ${to}.`,
     partial: (place, percent) => `From ${place} the Sun is partly eclipsed: at most ${percent} of its disc covered.`,
     runs: (span, localDate, stamp, altitude, up) =>
-      `The eclipse runs ${span}${localDate === undefined ? '' : ` on ${localDate}`}; maximum at ${stamp} with the Sun ${altitude}° ${up ? 'up' : 'below the horizon'}.`,
+      `The eclipse runs ${span}${localDate === undefined ? '' : ` on ${localDate}`}; maximum at ${stamp} with the Sun ${up ? altitude : altitude.replace(/^-/, '')}° ${up ? 'up' : 'below the horizon'}.`,
     risesEclipsed: (stamp) => `The Sun rises already eclipsed, at ${stamp}.`,
     setsEclipsed: (stamp) => `The Sun sets still eclipsed, at ${stamp}.`,
     nearEdge: (km) =>

@@ -11,7 +11,7 @@ import type { CivilClock } from '../ephemeris/civilTime.ts';
 import { timeOnDay } from '../ephemeris/dayMark.ts';
 import { diagramTexts, LUNAR_DIAGRAM_ENGLISH, lunarDiagramWords, momentLabel, moonAcrossWords, type LunarDiagramWords } from '../words/lunar/diagram.ts';
 import type { LunarWords } from '../words/lunar/text.ts';
-import { labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
+import { compassElements, scaleBarElements, labelElement, layoutFor, n2, overlaps, plateBox, textElement, type Box, type PageSize } from './draw.ts';
 import { pageFrame, type LegendEntry } from './frame.ts';
 import { fillSwatch } from './layers.ts';
 import type { Theme } from './theme.ts';
@@ -135,15 +135,7 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
   out.push(`<path d="M${points.join('L')}" fill="none" ${path.casing} stroke-linejoin="round"/>`);
   out.push(`<path d="M${points.join('L')}" fill="none" ${path.line} stroke-linejoin="round"/>`);
-  const tip = diagram.path[diagram.path.length - 1]!;
-  const before = diagram.path[diagram.path.length - 3]!;
-  const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
-  const head = 11 * unit;
-  const arrow = [0, 2.6, -2.6].map((a, i) => {
-    const r = i === 0 ? 0 : head;
-    return `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
-  });
-  out.push(`<path d="M${arrow[1]}L${arrow[0]}L${arrow[2]}Z" fill="${theme.field}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(0.8 * unit)}"/>`);
+  out.push(`<path d="${arrowHead(diagram.path, px, py, 11 * unit)}" fill="${theme.field}" stroke="${theme.trackCasing}" stroke-opacity="0.55" stroke-width="${n2(0.8 * unit)}"/>`);
 
   // The Moon at each contact (outlines) and at greatest (filled).
   for (const c of diagram.contacts) {
@@ -191,25 +183,9 @@ export function composeDiagramScene(input: DiagramSceneInput): DiagramScene {
   }
 
   // Compass (top left of the plot) and scale (bottom left).
-  const compassStyle = { sizePx: layout.legendStyle.sizePx, weight: 'semibold' as const };
-  const arm = 26 * unit;
-  const ox = plot.left + compassStyle.sizePx * 1.4 + arm;
-  const oy = plot.top + compassStyle.sizePx * 1.6 + arm;
-  const stroke = `stroke="${theme.text}" stroke-width="${n2(1.3 * unit)}" fill="none"`;
-  const barb = 5 * unit;
-  out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
-  out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
-  out.push(textElement(words.compass.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
-  out.push(textElement(words.compass.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+  out.push(...compassElements(plot, layout.legendStyle.sizePx, theme, unit, words.compass));
 
-  const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
-  const barArcmin = [60, 30, 20, 10].find((m) => m * ARCMIN_RAD * pxPerRad <= (plot.right - plot.left) * 0.3) ?? 10;
-  const barPx = barArcmin * ARCMIN_RAD * pxPerRad;
-  const sx = plot.left + 4 * unit;
-  const sy = plot.bottom - scaleStyle.sizePx * 1.6;
-  out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
-  out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
-  out.push(textElement(moonAcrossWords((2 * moonRad) / ARCMIN_RAD, input.words), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+  out.push(...scaleBarElements(plot, layout.legendStyle.sizePx, theme, unit, ARCMIN_RAD * pxPerRad, [60, 30, 20, 10], moonAcrossWords((2 * moonRad) / ARCMIN_RAD, input.words)));
 
   // The timetable.
   const heading = words.timesHeading(clocksChange ? undefined : clock.abbreviation(greatestUt));
@@ -281,19 +257,20 @@ export function diagramInset(diagram: ShadowDiagram, theme: Theme, box: Box, uni
   const points = diagram.path.map((p) => `${n2(px(p))},${n2(py(p))}`);
   out.push(`<path d="M${points.join('L')}" fill="none" ${path.casing} stroke-linejoin="round"/>`);
   out.push(`<path d="M${points.join('L')}" fill="none" ${path.line} stroke-linejoin="round"/>`);
-  const tip = diagram.path[diagram.path.length - 1]!;
-  const before = diagram.path[diagram.path.length - 3]!;
-  const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
-  const head = 7 * unit;
-  const arrow = [2.6, 0, -2.6].map((a, i) => {
-    const r = i === 1 ? 0 : head;
-    return `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
-  });
-  out.push(`<path d="M${arrow.join('L')}Z" fill="${theme.field}"/>`);
+  out.push(`<path d="${arrowHead(diagram.path, px, py, 7 * unit)}" fill="${theme.field}"/>`);
   for (const c of diagram.contacts) {
     out.push(`<circle cx="${n2(px(c.offset))}" cy="${n2(py(c.offset))}" r="${n2(c.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, undefined)}/>`);
   }
   const g = diagram.greatest;
   out.push(`<circle cx="${n2(px(g.offset))}" cy="${n2(py(g.offset))}" r="${n2(g.moonSemiDiameterRad * pxPerRad)}" ${moonInk(theme, unit * 0.7, moonFill)}/>`);
   return `<g>${out.join('')}</g>`;
+}
+
+/** The arrowhead at the end of the Moon's path (its direction of motion), `headPx` long, as path data. */
+function arrowHead<P>(path: readonly P[], px: (p: P) => number, py: (p: P) => number, headPx: number): string {
+  const tip = path[path.length - 1]!;
+  const before = path[path.length - 3]!;
+  const angle = Math.atan2(py(tip) - py(before), px(tip) - px(before));
+  const corner = (a: number, r: number) => `${n2(px(tip) - r * Math.cos(angle + a * 0.16))},${n2(py(tip) - r * Math.sin(angle + a * 0.16))}`;
+  return `M${corner(2.6, headPx)}L${corner(0, 0)}L${corner(-2.6, headPx)}Z`;
 }

@@ -39,6 +39,43 @@ export function textElement(text: string, x: number, y: number, style: TextStyle
   return d ? `<path d="${d}" fill="${fill}"/>` : '';
 }
 
+/**
+ * A sky figure's compass at the top left of its plot: arrows to north (up) and
+ * east (left, as the sky looks when you face it), lettered in the reader's words.
+ */
+export function compassElements(plot: Box, legendSizePx: number, theme: Theme, unit: number, letters: { readonly north: string; readonly east: string }): string[] {
+  const style = { sizePx: legendSizePx, weight: 'semibold' as const };
+  const arm = 26 * unit;
+  const ox = plot.left + style.sizePx * 1.4 + arm;
+  const oy = plot.top + style.sizePx * 1.6 + arm;
+  const stroke = `stroke="${theme.text}" stroke-width="${n2(1.3 * unit)}" fill="none"`;
+  const barb = 5 * unit;
+  return [
+    `<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`,
+    `<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`,
+    textElement(letters.north, ox, oy - arm - style.sizePx * 0.45, style, theme.text, 'middle'),
+    textElement(letters.east, ox - arm - style.sizePx * 0.35, oy + style.sizePx * 0.35, style, theme.text, 'end'),
+  ];
+}
+
+/**
+ * A scale bar at the bottom left of a plot: the longest of `lengthsArcmin` (longest first) that takes at most
+ * 0.3 of the plot's width, else the last, labelled in arcminutes, with `caption` under it.
+ */
+export function scaleBarElements(plot: Box, legendSizePx: number, theme: Theme, unit: number, pxPerArcmin: number, lengthsArcmin: readonly number[], caption: string): string[] {
+  const style = { sizePx: legendSizePx * 0.95, weight: 'regular' as const };
+  const barArcmin = lengthsArcmin.find((m) => m * pxPerArcmin <= (plot.right - plot.left) * 0.3) ?? lengthsArcmin[lengthsArcmin.length - 1]!;
+  const barPx = barArcmin * pxPerArcmin;
+  const sx = plot.left + 4 * unit;
+  const sy = plot.bottom - style.sizePx * 1.6;
+  const stroke = `stroke="${theme.text}" stroke-width="${n2(1.3 * unit)}" fill="none"`;
+  return [
+    `<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`,
+    textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, style, theme.text, 'middle'),
+    textElement(caption, sx, sy + style.sizePx * 1.3, style, theme.textMuted),
+  ];
+}
+
 export interface Box {
   readonly left: number;
   readonly top: number;

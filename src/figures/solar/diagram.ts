@@ -11,7 +11,7 @@ import type { SolarDiscs, SolarLocalCircumstances } from '../../local/solar.ts';
 import type { SolarWords } from '../../words/solar/caution.ts';
 import { solarDiagramTexts, solarDiagramWords, solarMomentLabel, solarSunAltitudeWords, type SolarDiagramFacts } from '../../words/solar/diagram.ts';
 import { fixedIn } from '../../words/common.ts';
-import { layoutFor, n2, textElement, type Box, type PageSize } from '../draw.ts';
+import { compassElements, scaleBarElements, layoutFor, n2, textElement, type Box, type PageSize } from '../draw.ts';
 import { pageFrame, type LegendEntry } from '../frame.ts';
 import type { Theme } from '../theme.ts';
 import { FONT_CREDIT, measureText } from '../typography.ts';
@@ -132,26 +132,10 @@ export function composeSolarDiagramScene(input: SolarDiagramSceneInput): SolarDi
   out.push(`<circle cx="${n2(moon.x)}" cy="${n2(moon.y)}" r="${n2(dot)}" fill="${theme.centreMark}"/>`);
 
   // Compass (top left) and scale (bottom left), as on the lunar diagram.
-  const compassStyle = { sizePx: layout.legendStyle.sizePx, weight: 'semibold' as const };
-  const arm = 26 * unit;
-  const ox = plot.left + compassStyle.sizePx * 1.4 + arm;
-  const oy = plot.top + compassStyle.sizePx * 1.6 + arm;
-  const stroke = `stroke="${theme.text}" stroke-width="${n2(1.3 * unit)}" fill="none"`;
-  const barb = 5 * unit;
-  out.push(`<path d="M${n2(ox)},${n2(oy)}V${n2(oy - arm)}M${n2(ox - barb)},${n2(oy - arm + barb)}L${n2(ox)},${n2(oy - arm)}L${n2(ox + barb)},${n2(oy - arm + barb)}" ${stroke}/>`);
-  out.push(`<path d="M${n2(ox)},${n2(oy)}H${n2(ox - arm)}M${n2(ox - arm + barb)},${n2(oy - barb)}L${n2(ox - arm)},${n2(oy)}L${n2(ox - arm + barb)},${n2(oy + barb)}" ${stroke}/>`);
-  out.push(textElement(words.compass.north, ox, oy - arm - compassStyle.sizePx * 0.45, compassStyle, theme.text, 'middle'));
-  out.push(textElement(words.compass.east, ox - arm - compassStyle.sizePx * 0.35, oy + compassStyle.sizePx * 0.35, compassStyle, theme.text, 'end'));
+  out.push(...compassElements(plot, layout.legendStyle.sizePx, theme, unit, words.compass));
 
-  const scaleStyle = { sizePx: layout.legendStyle.sizePx * 0.95, weight: 'regular' as const };
   const pxPerArcmin = (pxPerSunRadius / discs.sunSemiDiameterRad) * ARCMIN_RAD;
-  const barArcmin = [20, 10, 5, 2].find((m) => m * pxPerArcmin <= (plot.right - plot.left) * 0.3) ?? 2;
-  const barPx = barArcmin * pxPerArcmin;
-  const sx = plot.left + 4 * unit;
-  const sy = plot.bottom - scaleStyle.sizePx * 1.6;
-  out.push(`<path d="M${n2(sx)},${n2(sy - 4 * unit)}V${n2(sy)}H${n2(sx + barPx)}V${n2(sy - 4 * unit)}" ${stroke}/>`);
-  out.push(textElement(`${barArcmin}′`, sx + barPx / 2, sy - 6 * unit, scaleStyle, theme.text, 'middle'));
-  out.push(textElement(words.sunAcross(fixedIn((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD, 1, words.common)), sx, sy + scaleStyle.sizePx * 1.3, scaleStyle, theme.textMuted));
+  out.push(...scaleBarElements(plot, layout.legendStyle.sizePx, theme, unit, pxPerArcmin, [20, 10, 5, 2], words.sunAcross(fixedIn((2 * discs.sunSemiDiameterRad) / ARCMIN_RAD, 1, words.common))));
 
   // The timetable.
   const heading = words.timesHeading(clocksChange ? undefined : clock.abbreviation(discs.maximum.utDays));

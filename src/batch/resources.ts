@@ -26,8 +26,13 @@ export const WORKER_BASE_BYTES = 210 * MIB;
 
 /**
  * What a worker holds on top of that when its batch has solar eclipses: the
- * solar captions' 1:50m country shapes, land lattice and large cities, and
- * the GeoJSON's tracing grids (some 80 MB of heap while one is traced).
+ * solar captions' land lattice and large cities, a caption's 1:50m country
+ * outlines while it is written (read for it, about 13 MB of heap), the
+ * obscuration field and the GeoJSON's tracing grids. Kept at its first
+ * measurement although a worker now holds less (the 12000×5333 PNG case
+ * above: a worker's peak PSS 770 → 696 MB once the outlines were read per
+ * caption, the path traced without a million-place grid and each drawing
+ * freed as it is encoded): an estimate errs high.
  */
 export const SOLAR_EXTRA_BYTES = 130 * MIB;
 

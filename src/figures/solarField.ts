@@ -9,11 +9,11 @@
 import type { LonLat } from '../ephemeris/earth.ts';
 import { greatestObscurationSeen } from '../local/solar.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { traceRegion, type PlaceGrid, type PlanarMultiPolygon } from '../sphere/regions.ts';
+import { traceRegion, type GridShape, type PlanarMultiPolygon } from '../sphere/regions.ts';
 
 export interface ObscurationField {
   /** The grid (rows from 90° N, columns from 180° W, both ends included): traceRegion reads its shape. */
-  readonly grid: PlaceGrid;
+  readonly grid: GridShape;
   /** Greatest obscuration seen with the Sun up, 0…1, row by row. */
   readonly values: Float64Array;
 }
@@ -57,7 +57,7 @@ export function obscurationField(eclipse: SolarEclipse, stepDeg: number, wanted:
       if (near && wanted(p)) values[j * columns + i] = greatestObscurationSeen(eclipse, p);
     }
   }
-  return { grid: { resolutionDeg: stepDeg, columns, rows, normals: [] }, values };
+  return { grid: { resolutionDeg: stepDeg, columns, rows }, values };
 }
 
 /** Where the field exceeds `level`, as planar lon/lat polygons (RFC 7946 winding: outer rings counter-clockwise). */

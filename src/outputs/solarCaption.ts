@@ -27,7 +27,7 @@ import { surfacePoint } from '../eclipses/solar/surface.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
 import { citiesOfPopulation, type CityRow } from '../places/geonames.ts';
 import { timeZoneOfPlace } from '../places/timeZone.ts';
-import { loadBasemap } from '../sphere/world.ts';
+import { readCountries } from '../sphere/world.ts';
 import { greatestObscurationSeen, solarLocalCircumstances } from '../local/solar.ts';
 import { coordinatesText, countryName, fixedIn, listWords } from '../words/common.ts';
 import { safetyScopeForEclipse, solarSafetyText, type SolarWords } from '../words/solar/caution.ts';
@@ -113,21 +113,21 @@ function polygonsOf(geometry: Geometry | null): Polygon[] {
   return [];
 }
 
-const shapesByDetail = new Map<string, CountryShape[]>();
+/**
+ * The countries of a detail with their polygons' bounds, built on each call
+ * and kept by no one: the 1:50m outlines are read for each central
+ * eclipse's caption (a few tens of milliseconds) rather than held for the
+ * life of a batch worker, and the 1:110m ones serve the land lattice, built once.
+ */
 function countryShapes(detail: '110m' | '50m'): CountryShape[] {
-  let shapes = shapesByDetail.get(detail);
-  if (!shapes) {
-    shapes = loadBasemap(detail).countries().features.map((feature) => {
-      const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
-      const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
-      const continentCode = code ? (countryTable as Record<string, { continent: string }>)[code]?.continent : undefined;
-      const continent = continentCode ? (continentNames as Record<string, string>)[continentCode] : undefined;
-      const parts = polygonsOf(feature.geometry).map((polygon) => ({ polygon, bounds: geoBounds(polygon) }));
-      return { name: feature.properties.name, ...(code ? { code } : {}), ...(continent ? { continent } : {}), parts };
-    });
-    shapesByDetail.set(detail, shapes);
-  }
-  return shapes;
+  return readCountries(detail).features.map((feature) => {
+    const numeric = feature.id === undefined ? undefined : String(feature.id).padStart(3, '0');
+    const code = numeric ? isoCountries.numericToAlpha2(numeric) : undefined;
+    const continentCode = code ? (countryTable as Record<string, { continent: string }>)[code]?.continent : undefined;
+    const continent = continentCode ? (continentNames as Record<string, string>)[continentCode] : undefined;
+    const parts = polygonsOf(feature.geometry).map((polygon) => ({ polygon, bounds: geoBounds(polygon) }));
+    return { name: feature.properties.name, ...(code ? { code } : {}), ...(continent ? { continent } : {}), parts };
+  });
 }
 
 const inBounds = ([[west, south], [east, north]]: Bounds, [lon, lat]: LonLat) =>
@@ -278,13 +278,13 @@ export function citySights(eclipse: SolarEclipse, count: number): CitySight[] {
 }
 
 /**
- * Build what every solar caption reads, once per process: the 1:50m
- * country shapes, the continents' land lattice and the list of the largest
- * cities. A batch worker does this as it starts, while the batch searches
- * its catalogue, rather than in its first eclipse.
+ * Build what every solar caption reads and a process keeps: the
+ * continents' land lattice and the list of the largest cities (the 1:50m
+ * country outlines are read per caption, see countryShapes). A batch worker
+ * does this as it starts, while the batch searches its catalogue, rather
+ * than in its first eclipse.
  */
 export function prepareSolarCaptions(): void {
-  countryShapes('50m');
   landPoints();
   largestCities();
 }

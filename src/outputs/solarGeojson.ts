@@ -24,7 +24,7 @@ import { centralLine, equalMagnitudeCurves, equalObscurationCurves, partialLimit
 import { localMaximumTT, localShadow, type LocalShadow } from '../eclipses/solar/localCore.ts';
 import { geocentricPlace } from '../eclipses/solar/surface.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { placeGrid, traceRegion, type PlanarMultiPolygon } from '../sphere/regions.ts';
+import { cellNormal, gridShape, traceRegion, type PlanarMultiPolygon } from '../sphere/regions.ts';
 import { safetyScopeForEclipse, solarSafetyText, type SolarWords } from '../words/solar/caution.ts';
 
 export const SOLAR_GEOMETRY_SCHEMA = 'umbracast.solar-geometry/1';
@@ -92,18 +92,24 @@ function pathRegions(eclipse: SolarEclipse, limits: NorthSouth, central: readonl
       for (let d = Math.floor(Math.min(lon, previous)) - 2; d <= Math.floor(Math.max(lon, previous)) + 2; d++) columns.add(wrapDegree(d));
     });
   }
-  const grid = placeGrid(SOLAR_PATH_GRID_DEG);
+  // The grid's normals are made only for the places evaluated: a whole 0.25° grid of them would be a million arrays.
+  const grid = gridShape(SOLAR_PATH_GRID_DEG);
   const band = [Math.min(...lats) - 2 * SOLAR_PATH_GRID_DEG, Math.max(...lats) + 2 * SOLAR_PATH_GRID_DEG];
-  const umbra = new Float64Array(grid.normals.length).fill(-1);
-  const antumbra = new Float64Array(grid.normals.length).fill(-1);
-  grid.normals.forEach((n, k) => {
-    const latDeg = Math.asin(Math.max(-1, Math.min(1, n[2]))) * DEG;
-    const lonDeg = Math.atan2(n[1], n[0]) * DEG;
-    if (latDeg < band[0]! || latDeg > band[1]! || !columns.has(wrapDegree(Math.floor(lonDeg)))) return;
-    const s = atLocalMaximum(eclipse, [lonDeg, latDeg]);
-    umbra[k] = Math.min(-s.umbra - s.distance, s.zeta);
-    antumbra[k] = Math.min(s.umbra - s.distance, s.zeta);
-  });
+  const umbra = new Float64Array(grid.columns * grid.rows).fill(-1);
+  const antumbra = new Float64Array(grid.columns * grid.rows).fill(-1);
+  for (let j = 0; j < grid.rows; j++) {
+    // A row's latitude, read back from its normal as every place's is (z depends on the row alone).
+    const latDeg = Math.asin(Math.max(-1, Math.min(1, cellNormal(grid, j * grid.columns)[2]))) * DEG;
+    if (latDeg < band[0]! || latDeg > band[1]!) continue;
+    for (let k = j * grid.columns; k < (j + 1) * grid.columns; k++) {
+      const n = cellNormal(grid, k);
+      const lonDeg = Math.atan2(n[1], n[0]) * DEG;
+      if (!columns.has(wrapDegree(Math.floor(lonDeg)))) continue;
+      const s = atLocalMaximum(eclipse, [lonDeg, latDeg]);
+      umbra[k] = Math.min(-s.umbra - s.distance, s.zeta);
+      antumbra[k] = Math.min(s.umbra - s.distance, s.zeta);
+    }
+  }
   return { umbra: traceRegion(grid, umbra), antumbra: traceRegion(grid, antumbra) };
 }
 

@@ -9,6 +9,7 @@ import sharp, { type Sharp } from 'sharp';
 import { escapeXml } from '../figures/xml.ts';
 
 import type { RasterFormat } from './formats.ts';
+import { collectGarbage } from './collect.ts';
 
 export { RASTER_FORMATS, isRasterFormat, type RasterFormat } from './formats.ts';
 
@@ -94,7 +95,10 @@ function encode(image: Sharp, options: RasterOptions): Promise<Buffer> {
 }
 
 export async function rasterise(svg: string, options: RasterOptions): Promise<Buffer> {
-  return encode(rgb(draw(svg)), options);
+  const drawing = draw(svg);
+  // resvg's canvas and tree are garbage once its pixels are copied out: free them before encoding.
+  collectGarbage();
+  return encode(rgb(drawing), options);
 }
 
 export interface RasterSet {
@@ -126,6 +130,7 @@ export async function rasteriseSet(
     return { files, thumbnail: format !== undefined ? await shrink(files.get(format)!, thumbnailWidthPx) : await thumbnail(svg, thumbnailWidthPx) };
   }
   const drawing = draw(svg);
+  collectGarbage();
   for (const format of formats) files.set(format, await encode(rgb(drawing), { ...options, format }));
   return thumbnailWidthPx === undefined ? { files } : { files, thumbnail: await shrink(rgb(drawing), thumbnailWidthPx) };
 }

@@ -12,7 +12,7 @@
  * cover the lon/lat rectangle without gaps or overlaps, by construction.
  */
 import type { Position } from 'geojson';
-import { ringArea, regionContains, type PlaceGrid, type PlanarMultiPolygon } from './regions.ts';
+import { ringArea, regionContains, type GridShape, type PlanarMultiPolygon } from './regions.ts';
 
 /** A class from the signs of the two functions (> 0 counts as positive); -1 leaves it out. */
 export type ClassLabel = (firstPositive: boolean, secondPositive: boolean) => number;
@@ -39,7 +39,7 @@ interface Piece {
  * Regions of every label, each as planar lon/lat polygons (outer rings
  * counter-clockwise, holes clockwise), from two functions sampled on the grid.
  */
-export function tileRegions(grid: PlaceGrid, first: ArrayLike<number>, second: ArrayLike<number>, label: ClassLabel, labels: number): PlanarMultiPolygon[] {
+export function tileRegions(grid: GridShape, first: ArrayLike<number>, second: ArrayLike<number>, label: ClassLabel, labels: number): PlanarMultiPolygon[] {
   const { columns, rows, resolutionDeg: res } = grid;
   const n = columns * rows;
   const cellColumns = columns - 1;

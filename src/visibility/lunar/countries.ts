@@ -184,14 +184,26 @@ interface CountryGeometry {
   readonly area: number;
   readonly code?: string;
   readonly continent?: string;
-  /** Samples: their normals, and for each the index of its continent in `continents` (−1: none). */
-  readonly normals: readonly Normal[];
+  /**
+   * Samples: their normals, x, y, z a sample in one flat array (every
+   * country's together run to some hundred thousand: a third of the memory
+   * of an array per sample), and for each the index of its continent in
+   * `continents` (−1: none).
+   */
+  readonly normals: Float64Array;
   readonly continentIndex: Int8Array;
   readonly continents: readonly string[];
   /** Samples × the area of a lattice cell, steradians: close to `area` when the sampling is right. */
   readonly sampledArea: number;
 }
 const geometryCache = new WeakMap<Feature, CountryGeometry>();
+
+/** Lon/lat points as unit normals, three numbers a point. */
+function flatNormals(points: readonly Position[]): Float64Array {
+  const out = new Float64Array(points.length * 3);
+  points.forEach((p, k) => out.set(normalAt([p[0]!, p[1]!]), 3 * k));
+  return out;
+}
 
 function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryGeometry {
   let cached = geometryCache.get(feature);
@@ -208,7 +220,7 @@ function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryG
       if (!continents.includes(name)) continents.push(name);
       return continents.indexOf(name);
     });
-    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), normals: points.map((p) => normalAt([p[0]!, p[1]!])), continentIndex, continents, sampledArea: points.length * cellArea };
+    cached = { area, ...(code ? { code } : {}), ...(continent ? { continent } : {}), normals: flatNormals(points), continentIndex, continents, sampledArea: points.length * cellArea };
     geometryCache.set(feature, cached);
   }
   return cached;
@@ -217,7 +229,7 @@ function countryGeometry(feature: Feature<Geometry, { name: string }>): CountryG
 /** How a country is sampled: the number of samples, their total area and the country's own (steradians). */
 export function countrySampling(feature: Feature<Geometry, { name: string }>): { samples: number; sampledArea: number; area: number } {
   const { normals, sampledArea, area } = countryGeometry(feature);
-  return { samples: normals.length, sampledArea, area };
+  return { samples: normals.length / 3, sampledArea, area };
 }
 
 const zeroShares = (): Record<ZoneName, number> => Object.fromEntries(ZONE_ORDER.map((z) => [z, 0])) as Record<ZoneName, number>;
@@ -233,18 +245,19 @@ export function countryShares(visibility: Visibility, countries: readonly Featur
     const zones = ZONE_ORDER.length;
     const counts = new Float64Array((continents.length + 1) * zones);
     const all = continents.length * zones;
-    for (let k = 0; k < normals.length; k++) {
-      const n = normals[k]!;
+    const samples = normals.length / 3;
+    for (let k = 0; k < samples; k++) {
+      const n: Normal = [normals[3 * k]!, normals[3 * k + 1]!, normals[3 * k + 2]!];
       const z = zoneIndex[(moonUpMargin(start, n) > 0 ? 2 : 0) + (moonUpMargin(end, n) > 0 ? 1 : 0)]!;
       counts[all + z]!++;
       if (continentIndex[k]! >= 0) counts[continentIndex[k]! * zones + z]!++;
     }
     const sharesOf = (row: number, total: number) => Object.fromEntries(ZONE_ORDER.map((z, i) => [z, counts[row * zones + i]! / total])) as Record<ZoneName, number>;
-    const shares = sharesOf(continents.length, normals.length);
+    const shares = sharesOf(continents.length, samples);
     const parts = continents.map((name, c) => {
       let total = 0;
       for (let i = 0; i < zones; i++) total += counts[c * zones + i]!;
-      return { continent: name, area: (area * total) / normals.length, shares: sharesOf(c, total) };
+      return { continent: name, area: (area * total) / samples, shares: sharesOf(c, total) };
     }).sort((a, b) => a.continent.localeCompare(b.continent));
     const main = parts.reduce<CountryPart | undefined>((best, p) => (!best || p.area > best.area ? p : best), undefined);
     const wholly = ZONE_ORDER.find((z) => shares[z] === 1);

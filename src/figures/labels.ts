@@ -24,9 +24,21 @@ export interface MapMark {
  * spots around its dot first, then the same eight directions farther out,
  * joined to the dot by a thin leader line (so that towns a few pixels apart
  * still get a readable label each). Only when every spot clashes does it
- * take the one with the fewest clashes.
+ * take the one with the fewest clashes. A spot that also crosses none of the
+ * map's `lines` (page coordinates, asked for only when there are marks) comes
+ * first; else, of the spots clear of labels, the one crossing least line.
  */
-export function markElements(marks: readonly MapMark[], projection: GeoProjection, frame: Frame, style: TextStyle, theme: Theme, unit: number, taken: Box[], lineHits: (box: Box) => number): { elements: string[]; plates: Box[] } {
+export function markElements(
+  marks: readonly MapMark[],
+  projection: GeoProjection,
+  frame: Frame,
+  style: TextStyle,
+  theme: Theme,
+  unit: number,
+  taken: Box[],
+  lines: () => readonly (readonly ([number, number] | null)[])[],
+): { elements: string[]; plates: Box[] } {
+  const lineHits = marks.length === 0 ? () => 0 : lineHitCounter(lines(), frame, 6 * unit);
   const elements: string[] = [];
   const plates: Box[] = [];
   const gap = 7 * unit;

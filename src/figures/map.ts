@@ -376,11 +376,10 @@ export function composeScene(input: SceneInput): Scene {
     taken.push(insetBox);
     insetSvg = diagramInset(diagram, theme, insetBox, unit, headingStyle, style.diagramWords);
   }
-  const lineHits = marks.length === 0 ? () => 0 : lineHitCounter([
+  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, () => [
     ...visibility.stages.map((s) => edges.get(s.name)!.coordinates.map((p) => projection([p[0]!, p[1]!]))),
     ...lines.map((l) => l.line.map((p) => projection([p[0]!, p[1]!]))),
-  ], frame, 6 * unit);
-  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, lineHits);
+  ]);
   overlay.push(...marked.elements);
 
   // Continent and ocean names, last: each at the first of its anchors (and a row above or below) that is on

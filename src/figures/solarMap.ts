@@ -267,13 +267,12 @@ export function composeSolarScene(input: SolarSceneInput): SolarScene {
   }
   // Marked places before the line labels: a place's dot and words matter more than a tick's time or a contour's value.
   const marks = input.marks ?? [];
-  const markHits = marks.length === 0 ? () => 0 : lineHitCounter([
+  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, () => [
     ...partialLines.map((l) => l.map(onPage)),
     ...limitLines.map((l) => l.map(onPage)),
     ...central.map((l) => l.points.map(onPage)),
     ...contours.flatMap((c) => c.lines.map((l) => l.map(onPage))),
-  ], frame, 6 * unit);
-  const marked = markElements(marks, projection, frame, { sizePx: layout.labelStyle.sizePx, weight: 'regular' }, theme, unit, taken, markHits);
+  ]);
   for (const t of ticks) {
     const text = timeOnDay(clock, t.utDays, eclipse.greatest.utDays);
     const [x, y] = t.xy;

@@ -45,8 +45,8 @@ export const THUMBNAIL_WIDTH_PX = 480;
  * pool starts before that search): the fonts, the coarse world (every
  * lunar caption and map reads it) and, when the batch holds solar
  * eclipses, the solar captions' land lattice and large cities (their 1:50m
- * country outlines are read per caption, not kept). Only caches are filled: a failure here is left for the task
- * that meets it to report.
+ * country outlines are read per caption, not kept). Only caches are
+ * filled: a failure here is left for the task that meets it to report.
  */
 export function warmUp(bodies: string | undefined): void {
   try {

@@ -9,7 +9,7 @@
 import type { LonLat } from '../ephemeris/earth.ts';
 import { greatestObscurationSeen } from '../local/solar.ts';
 import type { SolarEclipse } from '../eclipses/solar/types.ts';
-import { traceRegion, type GridShape, type PlanarMultiPolygon } from '../sphere/regions.ts';
+import { gridShape, traceRegion, type GridShape, type PlanarMultiPolygon } from '../sphere/regions.ts';
 
 export interface ObscurationField {
   /** The grid (rows from 90° N, columns from 180° W, both ends included): traceRegion reads its shape. */
@@ -26,8 +26,8 @@ export const FIELD_STEPS_DEG: readonly number[] = [0.5, 1, 2];
  * limits the fine pass to the places a view shows (the rest read 0).
  */
 export function obscurationField(eclipse: SolarEclipse, stepDeg: number, wanted: (lonLat: LonLat) => boolean = () => true): ObscurationField {
-  const columns = Math.round(360 / stepDeg) + 1;
-  const rows = Math.round(180 / stepDeg) + 1;
+  const grid = gridShape(stepDeg);
+  const { columns, rows } = grid;
   const values = new Float64Array(columns * rows);
   const place = (i: number, j: number): LonLat => [-180 + i * stepDeg, 90 - j * stepDeg];
   // The coarse pass: every second point in each direction.
@@ -57,7 +57,7 @@ export function obscurationField(eclipse: SolarEclipse, stepDeg: number, wanted:
       if (near && wanted(p)) values[j * columns + i] = greatestObscurationSeen(eclipse, p);
     }
   }
-  return { grid: { resolutionDeg: stepDeg, columns, rows }, values };
+  return { grid, values };
 }
 
 /** Where the field exceeds `level`, as planar lon/lat polygons (RFC 7946 winding: outer rings counter-clockwise). */

@@ -61,7 +61,7 @@ export const SOLAR_DIAGRAM_ENGLISH: SolarDiagramWords = {
   moments: {
     C1: 'the Moon first touches the Sun',
     C2: 'the central phase begins',
-    maximum: 'most of the Sun covered',
+    maximum: 'the Sun at its most covered',
     C3: 'the central phase ends',
     C4: 'the Moon leaves the Sun',
     sunrise: 'sunrise',

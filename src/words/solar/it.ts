@@ -230,7 +230,7 @@ const DIAGRAM: SolarDiagramWords = {
   moments: {
     C1: 'la Luna tocca il Sole',
     C2: 'inizia la fase centrale',
-    maximum: 'massima parte del Sole coperta',
+    maximum: 'massima copertura del Sole',
     C3: 'finisce la fase centrale',
     C4: 'la Luna lascia il Sole',
     sunrise: 'sorgere del Sole',

@@ -218,7 +218,7 @@ const DIAGRAM: SolarDiagramWords = {
   moments: {
     C1: 'a Lua toca o Sol pela primeira vez',
     C2: 'começa a fase central',
-    maximum: 'a maior parte do Sol coberta',
+    maximum: 'máxima cobertura do Sol',
     C3: 'termina a fase central',
     C4: 'a Lua deixa o Sol',
     sunrise: 'nascer do Sol',

@@ -175,7 +175,7 @@ export const LUNAR_GERMAN: LunarWords = {
     phaseTitle: { penumbral: 'Halbschatten-Mondfinsternis', partial: 'Partielle Phasen der Mondfinsternis', total: 'Totalität' },
     cutToMoonUp: ' (der Teil mit dem Mond über dem Horizont)',
     cutToMoonUpShort: ' (Mond sichtbar)',
-    description: (title, id, cut, summary, nakedEye) => `${title} der Finsternis ${id}${cut}. ${summary} ${nakedEye}`,
+    description: (title, id, cut, summary, nakedEye) => `${title} vom ${id}${cut}. ${summary} ${nakedEye}`,
     notSeenTitle: (place) => `Mondfinsternis, in ${place} nicht sichtbar`,
     notSeenDescription: (summary) => `${summary} Dieser Eintrag markiert nur das Datum; von hier aus ist nichts zu sehen.`,
   },

@@ -176,7 +176,7 @@ export const LUNAR_SPANISH: LunarWords = {
     phaseTitle: { penumbral: 'Eclipse penumbral de Luna', partial: 'Fases parciales del eclipse de Luna', total: 'Totalidad' },
     cutToMoonUp: ' (la parte con la Luna sobre el horizonte)',
     cutToMoonUpShort: ' (Luna visible)',
-    description: (title, id, cut, summary, nakedEye) => `${title} del eclipse ${id}${cut}. ${summary} ${nakedEye}`,
+    description: (title, id, cut, summary, nakedEye) => `${title} del ${id}${cut}. ${summary} ${nakedEye}`,
     notSeenTitle: (place) => `Eclipse de Luna, no visible desde ${place}`,
     notSeenDescription: (summary) => `${summary} Esta entrada solo señala la fecha: desde aquí no hay nada que ver.`,
   },

@@ -181,7 +181,7 @@ export const LUNAR_FRENCH: LunarWords = {
     phaseTitle: { penumbral: 'Éclipse de Lune par la pénombre', partial: 'Phases partielles de l’éclipse de Lune', total: 'Totalité' },
     cutToMoonUp: ' (la partie où la Lune est au-dessus de l’horizon)',
     cutToMoonUpShort: ' (Lune levée)',
-    description: (title, id, cut, summary, nakedEye) => `${title} de l’éclipse ${id}${cut}. ${summary} ${nakedEye}`,
+    description: (title, id, cut, summary, nakedEye) => `${title} du ${id}${cut}. ${summary} ${nakedEye}`,
     notSeenTitle: (place) => `Éclipse de Lune, invisible depuis ${place}`,
     notSeenDescription: (summary) => `${summary} Cette entrée ne fait que marquer la date${NBSP}: il n’y a rien à voir d’ici.`,
   },

@@ -180,7 +180,7 @@ export const LUNAR_ITALIAN: LunarWords = {
     phaseTitle: { penumbral: 'Eclissi penombrale di Luna', partial: 'Fasi parziali dell’eclissi di Luna', total: 'Totalità' },
     cutToMoonUp: ' (la parte con la Luna sopra l’orizzonte)',
     cutToMoonUpShort: ' (Luna visibile)',
-    description: (title, id, cut, summary, nakedEye) => `${title} dell’eclissi ${id}${cut}. ${summary} ${nakedEye}`,
+    description: (title, id, cut, summary, nakedEye) => `${title} del ${id}${cut}. ${summary} ${nakedEye}`,
     notSeenTitle: (place) => `Eclissi di Luna, non visibile da ${place}`,
     notSeenDescription: (summary) => `${summary} Questa voce segna solo la data: da qui non c’è nulla da vedere.`,
   },

@@ -178,7 +178,7 @@ export const LUNAR_PORTUGUESE: LunarWords = {
     phaseTitle: { penumbral: 'Eclipse penumbral da Lua', partial: 'Fases parciais do eclipse da Lua', total: 'Totalidade' },
     cutToMoonUp: ' (a parte com a Lua acima do horizonte)',
     cutToMoonUpShort: ' (Lua visível)',
-    description: (title, id, cut, summary, nakedEye) => `${title} do eclipse ${id}${cut}. ${summary} ${nakedEye}`,
+    description: (title, id, cut, summary, nakedEye) => `${title} de ${id}${cut}. ${summary} ${nakedEye}`,
     notSeenTitle: (place) => `Eclipse da Lua, não visível de ${place}`,
     notSeenDescription: (summary) => `${summary} Esta entrada apenas assinala a data; daqui não há nada para ver.`,
   },

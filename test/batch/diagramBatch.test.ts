@@ -42,6 +42,16 @@ async function commandDiagram(dir: string, args: string[], name: string): Promis
   return readFileSync(path);
 }
 
+/** A one-worker batch of [from, to) with this style, in a fresh folder; the folder and the batch's output folder. */
+async function batchWith(prefix: string, style: string, from: string, to: string): Promise<{ dir: string; out: string }> {
+  const dir = mkdtempSync(join(tmpdir(), prefix));
+  const out = join(dir, 'atlas');
+  writeFileSync(join(dir, 'style.yaml'), style);
+  const result = await run(['batch', '--from', from, '--to', to, '--style', join(dir, 'style.yaml'), '--out', out, '--jobs', '1']);
+  assert.equal(result.code, 0, result.stderr);
+  return { dir, out };
+}
+
 test('the style field: absent or false leaves the style hash as it was before the field (f5c2e5d177ee56ab, measured on c2d2449); true or a list changes it', () => {
   // The default style's hash before the field existed (main c2d2449): a batch made then stays up to date.
   assert.equal(styleHash(DEFAULT_STYLE), 'f5c2e5d177ee56ab');
@@ -174,11 +184,7 @@ test('a batch with the diagram: one per lunar eclipse, one per solar eclipse and
 });
 
 test('a batch in Spanish draws both diagrams in Spanish, byte for byte as `umbracast diagram --lang es` does (same inputs, same bytes: common practice)', async () => {
-  const dir = mkdtempSync(join(tmpdir(), 'umbracast-diagramlang-'));
-  const out = join(dir, 'atlas');
-  writeFileSync(join(dir, 'style.yaml'), 'lang: es\npreset: card\nformats: [geojson]\nplaces: [Reykjavik]\nlocalFormats: [json]\nsky: false\ndiagram: [svg]\n');
-  const result = await run(['batch', '--from', '2026-08-01', '--to', '2026-08-31', '--style', join(dir, 'style.yaml'), '--out', out, '--jobs', '1']);
-  assert.equal(result.code, 0, result.stderr);
+  const { dir, out } = await batchWith('umbracast-diagramlang-', 'lang: es\npreset: card\nformats: [geojson]\nplaces: [Reykjavik]\nlocalFormats: [json]\nsky: false\ndiagram: [svg]\n', '2026-08-01', '2026-08-31');
   assert.ok(readFileSync(join(out, '2026-08-28-partial-diagram.svg')).equals(await commandDiagram(dir, ['2026-08-28', '--preset', 'card', '--lang', 'es'], 'l.svg')));
   assert.ok(readFileSync(join(out, '2026-08-12-total-reykjavik-diagram.svg')).equals(await commandDiagram(dir, ['2026-08-12', '--place', 'Reykjavik', '--preset', 'card', '--lang', 'es'], 's.svg')));
   assert.equal(readFileSync(join(out, '2026-08-12-total-reykjavik-diagram.txt'), 'utf8'), readFileSync(join(dir, 's.txt'), 'utf8'));
@@ -187,12 +193,8 @@ test('a batch in Spanish draws both diagrams in Spanish, byte for byte as `umbra
 });
 
 test('a solar eclipse seen from none of the style\'s places: the view from the greatest point, as `umbracast diagram` draws it by default', async () => {
-  const dir = mkdtempSync(join(tmpdir(), 'umbracast-diagramgreatest-'));
-  const out = join(dir, 'atlas');
   // Reykjavik sees nothing of the annular eclipse of 2026-02-17 (its path crosses Antarctica; catalogue: astronomy-engine's local search).
-  writeFileSync(join(dir, 'style.yaml'), 'formats: [geojson]\nbodies: [solar]\nplaces: [Reykjavik]\nlocalFormats: [json]\ndiagram: true\n');
-  const result = await run(['batch', '--from', '2026-02-15', '--to', '2026-02-20', '--style', join(dir, 'style.yaml'), '--out', out, '--jobs', '1']);
-  assert.equal(result.code, 0, result.stderr);
+  const { dir, out } = await batchWith('umbracast-diagramgreatest-', 'formats: [geojson]\nbodies: [solar]\nplaces: [Reykjavik]\nlocalFormats: [json]\ndiagram: true\n', '2026-02-15', '2026-02-20');
   const manifest = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8')) as Manifest;
   assert.deepEqual(manifest.eclipses[0]!.files.filter((f) => f.path.includes('-diagram.')).map((f) => `${f.path} ${f.role}`), ['2026-02-17-annular-diagram.png diagram', '2026-02-17-annular-diagram.txt caption']);
   // GeoJSON-only maps: the diagram in PNG, on `umbracast diagram`'s own page (1600×1000), from the greatest point.
